@@ -1,0 +1,132 @@
+# SPDX-License-Identifier: GPL-2.0-or-later
+"""Running the terrain engine for a station table (shared by two algorithms)."""
+
+from __future__ import annotations
+
+import numpy as np
+from qgis.core import QgsCoordinateReferenceSystem, QgsProcessingException
+from qgis.PyQt.QtCore import QCoreApplication
+
+from .raster_io import open_elevation, warp_to
+
+EXACT, RING_SECTOR = 0, 1
+
+
+def _tr(text: str) -> str:
+    return QCoreApplication.translate("TerrainRun", text)
+
+
+def station_positions_on(raster, table, context):
+    """Station coordinates in a raster's CRS."""
+    crs = QgsCoordinateReferenceSystem.fromWkt(raster.crs_wkt)
+    return table.coordinates_in(crs, context.transformContext())
+
+
+def check_overlap(raster, x, y, label: str) -> None:
+    """Raise when no station falls on the raster: a problem with the whole run."""
+    west, east, south, north = raster.extent
+    on = (x >= west) & (x <= east) & (y >= south) & (y <= north)
+    if not np.any(on):
+        raise QgsProcessingException(
+            _tr(
+                "No station lies on the {} (raster extent {:.6g}, {:.6g}, {:.6g}, {:.6g} "
+                "in its own CRS). Check that the raster covers the survey and that both "
+                "layers have the right CRS."
+            ).format(label, west, east, south, north)
+        )
+
+
+def compute_terrain(
+    table,
+    heights: np.ndarray,
+    dem_layer,
+    regional_layer,
+    *,
+    inner_radius: float,
+    outer_radius: float,
+    density: np.ndarray,
+    innermost_tc: np.ndarray | None,
+    water_density: float | None,
+    method: int,
+    context,
+    feedback,
+) -> dict:
+    """Terrain correction of every station, in mGal, with flags added to ``table``.
+
+    The engine runs at one reference density; the terrain correction is linear
+    in density, so per-station densities scale the result (except where water
+    cells take their own density, where the reference density is used as given).
+    """
+    from ..algorithms.terrain import TerrainCancelled, hammer_terrain_correction, terrain_correction
+
+    fine = open_elevation(dem_layer)
+    x, y = station_positions_on(fine, table, context)
+    check_overlap(fine, x, y, _tr("elevation raster"))
+    regional_grid = None
+    if regional_layer is not None:
+        regional = open_elevation(regional_layer)
+        if not QgsCoordinateReferenceSystem.fromWkt(regional.crs_wkt) == QgsCoordinateReferenceSystem.fromWkt(fine.crs_wkt):
+            feedback.pushInfo(_tr("Reprojecting the regional elevation raster to the CRS of the fine one."))
+            regional = warp_to(regional, fine.crs_wkt)
+        regional_grid = regional.elevation_grid()
+
+    density = np.broadcast_to(np.asarray(density, dtype=float), heights.shape)
+    finite_density = density[np.isfinite(density)]
+    reference_density = float(np.median(finite_density)) if finite_density.size else 2670.0
+
+    def progress(fraction: float) -> None:
+        feedback.setProgress(100.0 * fraction)
+
+    n = len(heights)
+    result = {}
+    engine_innermost = innermost_tc
+    if innermost_tc is not None and water_density is None:
+        # Field estimates are at the station's own density; the engine result
+        # is scaled by density below, so pre-divide to keep them as given.
+        engine_innermost = innermost_tc * reference_density / np.where(density > 0, density, np.nan)
+    try:
+        if method == RING_SECTOR:
+            hammer = hammer_terrain_correction(x, y, heights, fine.elevation_grid(), density=reference_density)
+            total = np.asarray(hammer.total, dtype=float)
+            result["tc_inner"] = np.full(n, np.nan)
+            result["tc_outer"] = np.full(n, np.nan)
+            result["tc_total"] = total
+            result["zones"] = {k: np.asarray(v, dtype=float) for k, v in hammer.zones.items()}
+        else:
+            engine = terrain_correction(
+                x,
+                y,
+                heights,
+                fine.elevation_grid(),
+                regional_grid,
+                inner_radius=inner_radius,
+                outer_radius=outer_radius,
+                density=reference_density,
+                water_density=water_density,
+                innermost_tc=engine_innermost,
+                progress=progress,
+                is_cancelled=feedback.isCanceled,
+            )
+            result["tc_inner"] = np.asarray(engine.tc_inner, dtype=float)
+            result["tc_outer"] = np.asarray(engine.tc_outer, dtype=float)
+            result["tc_total"] = np.asarray(engine.tc_total, dtype=float)
+            result["dem_diff"] = np.asarray(engine.height_difference, dtype=float)
+            result["coverage"] = np.asarray(engine.coverage, dtype=float)
+            for i, reason in enumerate(engine.flags):
+                if reason:
+                    for part in str(reason).split(";"):
+                        table.flag(i, part.strip())
+    except TerrainCancelled as error:
+        raise QgsProcessingException(_tr("Cancelled by the user.")) from error
+
+    if water_density is None:
+        scale = density / reference_density
+        for key in ("tc_inner", "tc_outer", "tc_total"):
+            result[key] = result[key] * scale
+        for key, values in result.get("zones", {}).items():
+            result["zones"][key] = values * scale
+    if innermost_tc is not None and method == RING_SECTOR:
+        # Hammer's zone A (station to 2 m) is the field-estimated part.
+        extra = np.where(np.isfinite(innermost_tc), innermost_tc, 0.0)
+        result["tc_total"] = result["tc_total"] + extra
+    return result

@@ -1,0 +1,174 @@
+# SPDX-License-Identifier: GPL-2.0-or-later
+"""Small synthetic inputs for the Processing tests (invented data)."""
+
+from __future__ import annotations
+
+import os
+import shutil
+import subprocess
+from pathlib import Path
+
+import numpy as np
+import pytest
+
+REPO_ROOT = Path(__file__).resolve().parents[2]
+
+
+def write_dem(path: Path, heights: np.ndarray, west: float, north: float, cell: float, epsg: int = 32632, nodata=None):
+    """Write a float32 GeoTIFF with rows from the north."""
+    from osgeo import gdal, osr
+
+    driver = gdal.GetDriverByName("GTiff")
+    rows, cols = heights.shape
+    dataset = driver.Create(str(path), cols, rows, 1, gdal.GDT_Float32)
+    dataset.SetGeoTransform((west, cell, 0.0, north, 0.0, -cell))
+    srs = osr.SpatialReference()
+    srs.ImportFromEPSG(epsg)
+    dataset.SetProjection(srs.ExportToWkt())
+    band = dataset.GetRasterBand(1)
+    if nodata is not None:
+        band.SetNoDataValue(nodata)
+    band.WriteArray(heights.astype(np.float32))
+    dataset.FlushCache()
+    dataset = None
+    return path
+
+
+def write_points(path: Path, rows: list[dict], epsg: int | None = 32632, fields=None, layer="stations"):
+    """Write a GeoPackage point layer; ``rows`` hold 'x', 'y' and attributes."""
+    from osgeo import ogr, osr
+
+    driver = ogr.GetDriverByName("GPKG")
+    if path.exists():
+        path.unlink()
+    datasource = driver.CreateDataSource(str(path))
+    srs = None
+    if epsg is not None:
+        srs = osr.SpatialReference()
+        srs.ImportFromEPSG(epsg)
+        srs.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)
+    lyr = datasource.CreateLayer(layer, srs, ogr.wkbPoint)
+    fields = fields or {}
+    for name, kind in fields.items():
+        lyr.CreateField(ogr.FieldDefn(name, kind))
+    for row in rows:
+        feature = ogr.Feature(lyr.GetLayerDefn())
+        for name in fields:
+            value = row.get(name)
+            if value is None:
+                feature.SetFieldNull(name)
+            else:
+                feature.SetField(name, value)
+        geometry = ogr.Geometry(ogr.wkbPoint)
+        geometry.AddPoint_2D(row["x"], row["y"])
+        feature.SetGeometry(geometry)
+        lyr.CreateFeature(feature)
+    datasource = None
+    return path
+
+
+@pytest.fixture()
+def hill_dem(tmp_path):
+    """A 12 km square, 100 m cells, Gaussian hill 600 m high on a 200 m plain."""
+    cell = 100.0
+    n = 120
+    west, north = 494_000.0, 5_006_000.0
+    centres = (np.arange(n) + 0.5) * cell
+    xx, yy = np.meshgrid(centres, centres)
+    heights = 200.0 + 600.0 * np.exp(-(((xx - 6000) ** 2 + (yy - 6000) ** 2) / (2 * 1500.0**2)))
+    return write_dem(tmp_path / "hill.tif", heights, west, north, cell), (west, north, cell, heights)
+
+
+@pytest.fixture()
+def station_rows():
+    """Twelve invented stations on and around the hill, with edge cases."""
+    from osgeo import ogr  # noqa: F401
+
+    rng = np.random.default_rng(7)
+    rows = []
+    for i in range(12):
+        x = 497_000.0 + 500.0 * i
+        y = 5_000_000.0 + 300.0 * ((i * 5) % 12)
+        rows.append(
+            {
+                "x": x,
+                "y": y,
+                "name": f"S{i:02d}",
+                "g_obs": 980_500.0 + float(rng.normal(0, 5)),
+                "elev": 200.0 + 50.0 * i,
+                "rho": 2600.0 + 10 * i,
+                "tc_given": 0.5 + 0.1 * i,
+                "label": "n" + str(i),
+            }
+        )
+    return rows
+
+
+STATION_FIELDS = None
+
+
+def station_fields():
+    from osgeo import ogr
+
+    return {
+        "name": ogr.OFTString,
+        "g_obs": ogr.OFTReal,
+        "elev": ogr.OFTReal,
+        "rho": ogr.OFTReal,
+        "tc_given": ogr.OFTReal,
+        "label": ogr.OFTString,
+    }
+
+
+@pytest.fixture()
+def stations_gpkg(tmp_path, station_rows):
+    return write_points(tmp_path / "stations.gpkg", station_rows, fields=station_fields())
+
+
+@pytest.fixture()
+def make_points(tmp_path):
+    """Factory: make_points(rows, epsg=..., name=...) -> path of a GeoPackage."""
+
+    def factory(rows, epsg=32632, name="pts.gpkg", fields=None):
+        return write_points(tmp_path / name, rows, epsg=epsg, fields=fields or station_fields())
+
+    return factory
+
+
+@pytest.fixture()
+def collecting_feedback():
+    """A feedback that keeps warnings and infos for assertions."""
+    from qgis.core import QgsProcessingFeedback
+
+    class Collecting(QgsProcessingFeedback):
+        def __init__(self):
+            super().__init__()
+            self.warnings, self.infos = [], []
+
+        def pushWarning(self, text):  # noqa: N802 - QGIS API
+            self.warnings.append(text)
+            super().pushWarning(text)
+
+        def pushInfo(self, text):  # noqa: N802 - QGIS API
+            self.infos.append(text)
+            super().pushInfo(text)
+
+    return Collecting()
+
+
+@pytest.fixture(scope="session")
+def qgis_process_env(tmp_path_factory):
+    """Environment for qgis_process.bin with the checkout enabled as a plugin."""
+    executable = shutil.which("qgis_process.bin")
+    if executable is None:
+        pytest.skip("qgis_process.bin not found (install Debian's qgis package)")
+    home = tmp_path_factory.mktemp("qgis_home")
+    plugins = tmp_path_factory.mktemp("qgis_plugins")
+    (plugins / "relief_gravity").symlink_to(REPO_ROOT, target_is_directory=True)
+    runtime = tmp_path_factory.mktemp("xdg")
+    os.chmod(runtime, 0o700)
+    env = dict(os.environ, HOME=str(home), QGIS_PLUGINPATH=str(plugins), QT_QPA_PLATFORM="offscreen", XDG_RUNTIME_DIR=str(runtime))
+    env.pop("QGIS_CUSTOM_CONFIG_PATH", None)
+    enabled = subprocess.run([executable, "plugins", "enable", "relief_gravity"], env=env, capture_output=True, text=True, timeout=120)
+    assert enabled.returncode == 0, enabled.stdout + enabled.stderr
+    return executable, env
