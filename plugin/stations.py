@@ -93,6 +93,19 @@ class StationTable:
         return xs, ys
 
 
+def has_real_crs(crs) -> bool:
+    """False for a missing CRS and for the GeoPackage placeholders.
+
+    The GeoPackage standard reserves srs_id 0 and -1 for "Undefined
+    geographic SRS" and "Undefined cartesian SRS"; QGIS reports them as valid,
+    but they locate nothing.
+    """
+    if not crs.isValid():
+        return False
+    description = (crs.description() or "") + " " + crs.toWkt()[:60]
+    return "Undefined geographic SRS" not in description and "Undefined cartesian SRS" not in description
+
+
 def read_stations(source, context, feedback) -> StationTable:
     """Read every feature of a point source with its position and latitude.
 
@@ -102,7 +115,7 @@ def read_stations(source, context, feedback) -> StationTable:
         When the layer has no CRS or no features: a problem with the whole run.
     """
     crs = source.sourceCrs()
-    if not crs.isValid():
+    if not has_real_crs(crs):
         raise QgsProcessingException(
             _tr(
                 "The station layer has no coordinate reference system. Assign its "
