@@ -93,7 +93,7 @@ class ElevationRaster:
             n_rows=self.n_rows,
             n_cols=self.n_cols,
             geographic=self.geographic,
-            read_window=self.read_window,
+            reader=self.read_window,
         )
 
     def sample_bilinear(self, x: np.ndarray, y: np.ndarray) -> np.ndarray:

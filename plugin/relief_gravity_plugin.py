@@ -41,8 +41,11 @@ class ReliefGravityPlugin:
     def initProcessing(self):  # noqa: N802 - QGIS API
         """Register the provider once; called by qgis_process and by initGui."""
         if self.provider is None:
-            self.provider = ReliefGravityProvider()
-            QgsApplication.processingRegistry().addProvider(self.provider)
+            provider = ReliefGravityProvider()
+            # The registry refuses a second provider with the same id (and
+            # deletes it): keep a reference only to one it accepted.
+            if QgsApplication.processingRegistry().addProvider(provider):
+                self.provider = provider
 
     def initGui(self):  # noqa: N802 - QGIS API
         self.initProcessing()

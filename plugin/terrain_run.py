@@ -86,7 +86,19 @@ def compute_terrain(
         engine_innermost = innermost_tc * reference_density / np.where(density > 0, density, np.nan)
     try:
         if method == RING_SECTOR:
-            hammer = hammer_terrain_correction(x, y, heights, fine.elevation_grid(), density=reference_density)
+            hammer = hammer_terrain_correction(
+                x,
+                y,
+                heights,
+                fine.elevation_grid(),
+                density=reference_density,
+                progress=progress,
+                is_cancelled=feedback.isCanceled,
+            )
+            for i, reason in enumerate(hammer.flags):
+                if reason:
+                    for part in str(reason).split(";"):
+                        table.flag(i, part.strip())
             total = np.asarray(hammer.total, dtype=float)
             result["tc_inner"] = np.full(n, np.nan)
             result["tc_outer"] = np.full(n, np.nan)

@@ -279,6 +279,9 @@ class BouguerReductionAlgorithm(ReliefGravityAlgorithm):
         if source is None:
             raise QgsProcessingException(self.invalidSourceError(parameters, self.INPUT))
         steps = QgsProcessingMultiStepFeedback(3, feedback)
+        if feedback.isCanceled():
+            # A cancel made before the multi-step feedback existed is not forwarded to it.
+            steps.cancel()
         table = read_stations(source, context, steps)
 
         def field(key):

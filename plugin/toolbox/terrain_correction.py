@@ -216,6 +216,9 @@ class TerrainCorrectionAlgorithm(ReliefGravityAlgorithm):
             raise QgsProcessingException(self.invalidRasterError(parameters, self.DEM))
         regional = self.parameterAsRasterLayer(parameters, self.REGIONAL_DEM, context)
         steps = QgsProcessingMultiStepFeedback(3, feedback)
+        if feedback.isCanceled():
+            # A cancel made before the multi-step feedback existed is not forwarded to it.
+            steps.cancel()
         table = read_stations(source, context, steps)
 
         def field(key):

@@ -172,3 +172,9 @@ def qgis_process_env(tmp_path_factory):
     enabled = subprocess.run([executable, "plugins", "enable", "relief_gravity"], env=env, capture_output=True, text=True, timeout=120)
     assert enabled.returncode == 0, enabled.stdout + enabled.stderr
     return executable, env
+
+
+@pytest.fixture()
+def dem_writer():
+    """The GeoTIFF writer above, for tests that build their own rasters."""
+    return write_dem
