@@ -1,6 +1,25 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
 """Terrain corrections: exact prisms, far-zone kernels, zone engine, Hammer zones."""
 
+from ._engine import TerrainResult, plane_terrain_effect, terrain_correction
+from ._errors import TerrainCancelled
+from ._grid import ElevationGrid
+from ._hammer import HAMMER_ZONES, HammerResult, HammerZone, hammer_terrain_correction, ring_sector_correction
+from ._kernels import column_terrain_effect, line_mass_gravity
 from ._prism import prism_gravity
 
-__all__ = ["prism_gravity"]
+__all__ = [
+    "ElevationGrid",
+    "HAMMER_ZONES",
+    "HammerResult",
+    "HammerZone",
+    "TerrainCancelled",
+    "TerrainResult",
+    "column_terrain_effect",
+    "hammer_terrain_correction",
+    "line_mass_gravity",
+    "plane_terrain_effect",
+    "prism_gravity",
+    "ring_sector_correction",
+    "terrain_correction",
+]
