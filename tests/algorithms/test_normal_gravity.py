@@ -153,8 +153,9 @@ def test_valid_latitude():
 
 @pytest.mark.parametrize("name", ["grs80", "wgs84"])
 def test_against_boule(name):
-    # Independent reference: boule 0.6.0 (Fatiando a Terra). Skips where boule
-    # is not installed (it needs a newer numpy than Debian's).
+    # Independent reference: boule 0.6.0 (Fatiando a Terra), installed by
+    # tools/setup.sh with --no-deps over Debian's numpy 1.24; skips on a
+    # Python without it.
     boule = pytest.importorskip("boule")
     if not boule.__version__.lstrip("v").startswith("0.6"):
         pytest.skip(f"checked against boule 0.6.x, found {boule.__version__}")
