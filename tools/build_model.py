@@ -27,6 +27,7 @@ MODEL_PATH = REPO_ROOT / "plugin" / "models" / "reduce_grid_contour.model3"
 #: Model parameter names; public like algorithm parameter names (they are the
 #: qgis_process argument names of the model).
 STATIONS, GRAVITY_FIELD, HEIGHT_FIELD, DEM, DENSITY = "stations", "gravity_field", "height_field", "dem", "density"
+REGIONAL_DEM = "regional_dem"
 #: Model outputs; qgis_process names them "<child id>:<output name>".
 REDUCED, ANOMALY, CONTOURS = "reduced_stations", "anomaly", "contours"
 
@@ -117,6 +118,7 @@ def build_model():
             HEIGHT_FIELD: "Station height above the ellipsoid (m); empty = sample the DEM.",
             DEM: "Elevation raster (m) for the terrain correction.",
             DENSITY: "Reduction density (kg/m³), default 2670.",
+            REGIONAL_DEM: "Optional coarser elevation raster reaching 166.7 km around the stations (outer zone).",
         }
     )
     inputs = [
@@ -134,6 +136,9 @@ def build_model():
             DENSITY, "Reduction density (kg/m³)", type=QgsProcessingParameterNumber.Double,
             defaultValue=2670.0, optional=True,
         ),
+        QgsProcessingParameterRasterLayer(
+            REGIONAL_DEM, "Regional elevation raster for the outer zone (optional)", optional=True
+        ),
     ]
     for k, definition in enumerate(inputs):
         component = QgsProcessingModelParameter(definition.name())
@@ -148,6 +153,7 @@ def build_model():
             "HEIGHT_FIELD": Source.fromModelParameter(HEIGHT_FIELD),
             "DEM": Source.fromModelParameter(DEM),
             "DENSITY": Source.fromModelParameter(DENSITY),
+            "REGIONAL_DEM": Source.fromModelParameter(REGIONAL_DEM),
         },
         420.0, 200.0,
     )
