@@ -246,254 +246,179 @@
   <context>
     <name>BouguerReductionAlgorithm</name>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="178" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="149" />
       <source>1967 formula (legacy databases)</source>
       <translation>Formel von 1967 (ältere Datenbanken)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="88" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="77" />
       <source>&lt;p&gt;Adds normal gravity, every correction and the free-air (&lt;b&gt;faa&lt;/b&gt;), simple Bouguer (&lt;b&gt;sba&lt;/b&gt;) and complete Bouguer (&lt;b&gt;cba&lt;/b&gt;) anomalies to a copy of a station point layer. All values in mGal.&lt;/p&gt;&lt;p&gt;Default standard: Hinze et al. (2005): GRS80 normal gravity, second-order height correction, atmospheric correction, spherical-cap Bouguer correction to 166.7 km (slab + curvature, LaFehr 1991) and terrain correction to 166.7 km. Heights are heights above the ellipsoid. The 1967 formula, the first-order 0.3086 mGal/m gradient and a flat slab are options to reproduce legacy databases.&lt;/p&gt;&lt;p&gt;faa = g_obs - normal_g + height_corr + atmos_corr; sba = faa - slab_corr - curv_corr; cba = sba + tc_total.&lt;/p&gt;&lt;p&gt;The terrain correction comes from the terrain-correction field when one is chosen, otherwise from the elevation raster with the exact prism engine (inner zone to the inner radius, outer zone to the outer radius); without either, cba is left empty.&lt;/p&gt;&lt;p&gt;Station height: from the height field, or sampled from the elevation raster when no field is chosen (flagged in qc_flag). A station that cannot be reduced keeps its row with empty values and a reason in qc_flag.&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</source>
       <translation type="unfinished" />
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="260" />
-      <source>A reduction density of {} kg/m³ looks like g/cm³: enter 2670 for 2.67 g/cm³.</source>
-      <translation>Eine Reduktionsdichte von {} kg/m³ sieht nach g/cm³ aus: geben Sie 2670 für 2,67 g/cm³ ein.</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="196" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="167" />
       <source>Apply the atmospheric correction</source>
       <translation>Atmosphärenkorrektion anbringen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="79" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="68" />
       <source>Bouguer reduction (free-air, simple and complete Bouguer anomalies)</source>
       <translation>Bouguer-Reduktion (Freiluft-, einfache und vollständige Bouguer-Anomalie)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="266" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="220" />
       <source>Choose a station height field or an elevation raster to sample heights from.</source>
       <translation>Wählen Sie ein Feld der Stationshöhe oder ein Höhenraster, aus dem Höhen entnommen werden.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="143" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="121" />
       <source>Elevation raster (DEM, metres)</source>
       <translation>Höhenraster (DGM, Meter)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="209" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="180" />
       <source>Existing terrain-correction field (mGal, optional)</source>
       <translation>Vorhandenes Feld der Geländekorrektion (mGal, optional)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="137" />
-      <source>Feet</source>
-      <translation>Fuß</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="189" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="160" />
       <source>First order, 0.3086 mGal/m</source>
       <translation>Erster Ordnung, 0,3086 mGal/m</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="176" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="147" />
       <source>GRS80 (Somigliana closed form)</source>
       <translation>GRS80 (geschlossene Formel nach Somigliana)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="113" />
-      <source>Gravity stations</source>
-      <translation>Schwerestationen</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="186" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="157" />
       <source>Height (free-air) correction</source>
       <translation>Höhenkorrektion (Freiluft)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="136" />
-      <source>Height units</source>
-      <translation>Höheneinheit</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="221" />
-      <source>Inner zone radius (m)</source>
-      <translation>Radius der Innenzone (m)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="137" />
-      <source>Metres</source>
-      <translation>Meter</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="336" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="284" />
       <source>No terrain-correction field and no elevation raster: cba is left empty.</source>
       <translation>Weder Geländekorrektionsfeld noch Höhenraster: cba bleibt leer.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="174" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="145" />
       <source>Normal gravity</source>
       <translation>Normalschwere</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="119" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="104" />
       <source>Observed gravity field (mGal)</source>
       <translation>Feld der gemessenen Schwere (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="222" />
-      <source>Outer zone radius (m)</source>
-      <translation>Radius der Außenzone (m)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="231" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="189" />
       <source>Reduced stations</source>
       <translation>Reduzierte Stationen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="82" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="71" />
       <source>Reduces observed gravity at stations to free-air, simple and complete Bouguer anomalies.</source>
       <translation>Reduziert die gemessene Schwere an Stationen auf Freiluft-, einfache und vollständige Bouguer-Anomalien.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="149" />
-      <source>Reduction density (kg/m³)</source>
-      <translation>Reduktionsdichte (kg/m³)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="157" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="128" />
       <source>Reduction density field, per station (optional)</source>
       <translation>Feld der Reduktionsdichte je Station (optional)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="216" />
-      <source>Regional elevation raster for the outer zone (optional)</source>
-      <translation>Regionales Höhenraster für die Außenzone (optional)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="188" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="159" />
       <source>Second order, latitude dependent (Hinze et al. 2005)</source>
       <translation>Zweiter Ordnung, breitenabhängig (Hinze et al. 2005)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="202" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="173" />
       <source>Spherical cap to 166.7 km (add the curvature correction to the slab)</source>
       <translation>Kugelkappe bis 166,7 km (Krümmungskorrektion zur Platte)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="127" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="112" />
       <source>Station height field (above the ellipsoid; empty = sample the elevation raster)</source>
       <translation>Feld der Stationshöhe (über dem Ellipsoid; leer = aus dem Höhenraster)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="235" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="193" />
       <source>Stations flagged</source>
       <translation>Markierte Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="234" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="192" />
       <source>Stations reduced</source>
       <translation>Reduzierte Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="270" />
-      <source>The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m).</source>
-      <translation type="unfinished" />
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="359" />
-      <source>The input already has a field {}; its values are replaced in the output copy.</source>
-      <translation>Die Eingabe hat bereits ein Feld {}; seine Werte werden in der Ausgabekopie ersetzt.</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="258" />
-      <source>The reduction density must be positive (kg/m³); got {}.</source>
-      <translation>Die Reduktionsdichte muss positiv sein (kg/m³); erhalten: {}.</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="165" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="136" />
       <source>Units of the density field</source>
       <translation>Einheit des Dichtefeldes</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="177" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="148" />
       <source>WGS84 (Somigliana closed form)</source>
       <translation>WGS84 (geschlossene Formel nach Somigliana)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="250" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="208" />
       <source>density</source>
       <translation>Dichte</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="401" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="328" />
       <source>density missing, default used</source>
       <translation>Dichte fehlt, Vorgabe verwendet</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="387" />
-      <source>elevation raster</source>
-      <translation>Höhenraster</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="166" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="137" />
       <source>g/cm³</source>
       <translation>g/cm³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="85" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="74" />
       <source>gravity,bouguer,free-air,normal gravity,terrain correction,anomaly,GRS80</source>
       <translation>Schwere,Bouguer,Freiluft,Normalschwere,Geländekorrektion,Anomalie,GRS80</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="300" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="248" />
       <source>height</source>
       <translation>Höhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="389" />
-      <source>height from DEM</source>
-      <translation>Höhe aus DGM</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="166" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="137" />
       <source>kg/m³</source>
       <translation>kg/m³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="390" />
-      <source>no height (outside DEM)</source>
-      <translation>keine Höhe (außerhalb des DGM)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="248" />
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="298" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="206" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="246" />
       <source>observed gravity</source>
       <translation>gemessene Schwere</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="249" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="207" />
       <source>station height</source>
       <translation>Stationshöhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="251" />
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="314" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="209" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="262" />
       <source>terrain correction</source>
       <translation>Geländekorrektion</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="411" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="338" />
       <source>unusual density</source>
       <translation>ungewöhnliche Dichte</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="407" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="334" />
       <source>{} station(s) have a reduction density outside {}-{} kg/m³ (e.g. {}); check the units.</source>
       <translation>{} Station(en) haben eine Reduktionsdichte außerhalb {}-{} kg/m³ (z. B. {}); prüfen Sie die Einheit.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="371" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="310" />
       <source>{} stations: {} with a free-air anomaly, {} with a complete Bouguer anomaly, {} flagged.</source>
       <translation>{} Stationen: {} mit Freiluftanomalie, {} mit vollständiger Bouguer-Anomalie, {} markiert.</translation>
     </message>
@@ -537,14 +462,74 @@
   <context>
     <name>ReliefGravityAlgorithm</name>
     <message>
+      <location filename="../plugin/toolbox/base.py" line="127" />
+      <source>A reduction density of {} kg/m³ looks like g/cm³: enter 2670 for 2.67 g/cm³.</source>
+      <translation>Eine Reduktionsdichte von {} kg/m³ sieht nach g/cm³ aus: geben Sie 2670 für 2,67 g/cm³ ein.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="82" />
+      <source>Feet</source>
+      <translation>Fuß</translation>
+    </message>
+    <message>
       <location filename="../plugin/toolbox/base.py" line="44" />
       <source>Gravity reduction</source>
       <translation>Schwerereduktion</translation>
     </message>
     <message>
+      <location filename="../plugin/toolbox/base.py" line="74" />
+      <source>Gravity stations</source>
+      <translation>Schwerestationen</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="82" />
+      <source>Height units</source>
+      <translation>Höheneinheit</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="108" />
+      <source>Inner zone radius (m)</source>
+      <translation>Radius der Innenzone (m)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="82" />
+      <source>Metres</source>
+      <translation>Meter</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="109" />
+      <source>Outer zone radius (m)</source>
+      <translation>Radius der Außenzone (m)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="92" />
+      <source>Reduction density (kg/m³)</source>
+      <translation>Reduktionsdichte (kg/m³)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="104" />
+      <source>Regional elevation raster for the outer zone (optional)</source>
+      <translation>Regionales Höhenraster für die Außenzone (optional)</translation>
+    </message>
+    <message>
       <location filename="../plugin/toolbox/base.py" line="15" />
       <source>Results support interpretation only. Check every reduction against the survey's own ties and specifications; decisions on drilling, groundwater or engineering, and reporting under a jurisdiction's rules, are for licensed practice and local codes.</source>
       <translation type="unfinished" />
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="131" />
+      <source>The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m).</source>
+      <translation type="unfinished" />
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="145" />
+      <source>The input already has a field {}; its values are replaced in the output copy.</source>
+      <translation>Die Eingabe hat bereits ein Feld {}; seine Werte werden in der Ausgabekopie ersetzt.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="125" />
+      <source>The reduction density must be positive (kg/m³); got {}.</source>
+      <translation>Die Reduktionsdichte muss positiv sein (kg/m³); erhalten: {}.</translation>
     </message>
   </context>
   <context>
@@ -607,167 +592,97 @@
   <context>
     <name>TerrainCorrectionAlgorithm</name>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="64" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="55" />
       <source>&lt;p&gt;Computes the terrain correction of every station (mGal, positive for relief above or below the station) and adds &lt;b&gt;tc_inner&lt;/b&gt;, &lt;b&gt;tc_outer&lt;/b&gt;, &lt;b&gt;tc_total&lt;/b&gt;, &lt;b&gt;dem_diff&lt;/b&gt; (station height minus DEM height, m: large values point to mislocated stations), &lt;b&gt;tc_cover&lt;/b&gt; (fraction of the zone area covered by the rasters) and &lt;b&gt;qc_flag&lt;/b&gt; to a copy of the layer.&lt;/p&gt;&lt;p&gt;Exact engine (default): the innermost ring is modelled from the station height and the local DEM surface (or replaced by a field estimate); the inner zone to the inner radius uses exact prisms at full DEM resolution; the outer zone to the outer radius uses progressively coarser cells, then the regional raster beyond the fine one, with Earth curvature. Geographic (degree) rasters work: distances are on the ground.&lt;/p&gt;&lt;p&gt;Ring-and-sector (Hammer 1939): zones B to M with compartment mean heights from the DEM, for comparison with chart-based field practice; tc_total only, optionally one field per zone.&lt;/p&gt;&lt;p&gt;Station heights come from the height field (the height difference is always taken from the station's own height) or, when empty, from the DEM.&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</source>
       <translation type="unfinished" />
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="205" />
-      <source>A reduction density of {} kg/m³ looks like g/cm³: enter 2670 for 2.67 g/cm³.</source>
-      <translation>Eine Reduktionsdichte von {} kg/m³ sieht nach g/cm³ aus: geben Sie 2670 für 2,67 g/cm³ ein.</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="107" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="87" />
       <source>Elevation raster (DEM, metres)</source>
       <translation>Höhenraster (DGM, Meter)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="161" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="112" />
       <source>Exact engine (prisms, DEM-driven)</source>
       <translation>Exaktes Verfahren (Prismen, aus dem DGM)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="103" />
-      <source>Feet</source>
-      <translation>Fuß</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="142" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="93" />
       <source>Field-estimated innermost-ring correction (mGal, optional)</source>
       <translation>Im Feld geschätzte Korrektion des innersten Rings (mGal, optional)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="87" />
-      <source>Gravity stations</source>
-      <translation>Schwerestationen</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="102" />
-      <source>Height units</source>
-      <translation>Höheneinheit</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="116" />
-      <source>Inner zone radius (m)</source>
-      <translation>Radius der Innenzone (m)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="160" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="111" />
       <source>Method</source>
       <translation>Verfahren</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="103" />
-      <source>Metres</source>
-      <translation>Meter</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="125" />
-      <source>Outer zone radius (m)</source>
-      <translation>Radius der Außenzone (m)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="134" />
-      <source>Reduction density (kg/m³)</source>
-      <translation>Reduktionsdichte (kg/m³)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="110" />
-      <source>Regional elevation raster for the outer zone (optional)</source>
-      <translation>Regionales Höhenraster für die Außenzone (optional)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="161" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="112" />
       <source>Ring-and-sector (Hammer 1939 zones B-M)</source>
       <translation>Ringe und Sektoren (Hammer 1939, Zonen B-M)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="166" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="117" />
       <source>Ring-and-sector: one field per Hammer zone</source>
       <translation>Ringe und Sektoren: ein Feld je Hammer-Zone</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="93" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="80" />
       <source>Station height field (empty = sample the elevation raster)</source>
       <translation>Feld der Stationshöhe (leer = aus dem Höhenraster)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="175" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="126" />
       <source>Stations computed</source>
       <translation>Berechnete Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="176" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="127" />
       <source>Stations flagged</source>
       <translation>Markierte Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="172" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="123" />
       <source>Stations with terrain correction</source>
       <translation>Stationen mit Geländekorrektion</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="55" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="46" />
       <source>Terrain correction (inner and outer zones from elevation rasters)</source>
       <translation>Geländekorrektion (Innen- und Außenzone aus Höhenrastern)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="58" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="49" />
       <source>Terrain correction of gravity stations to 166.7 km from a DEM, with Earth curvature.</source>
       <translation>Geländekorrektion von Schwerestationen bis 166,7 km aus einem DGM, mit Erdkrümmung.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="198" />
-      <source>The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m).</source>
-      <translation type="unfinished" />
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="281" />
-      <source>The input already has a field {}; its values are replaced in the output copy.</source>
-      <translation>Die Eingabe hat bereits ein Feld {}; seine Werte werden in der Ausgabekopie ersetzt.</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="203" />
-      <source>The reduction density must be positive (kg/m³); got {}.</source>
-      <translation>Die Reduktionsdichte muss positiv sein (kg/m³); erhalten: {}.</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="150" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="101" />
       <source>Treat cells below sea level as water of this density (kg/m³, optional)</source>
       <translation>Zellen unter dem Meeresspiegel als Wasser dieser Dichte behandeln (kg/m³, optional)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="238" />
-      <source>elevation raster</source>
-      <translation>Höhenraster</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="61" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="52" />
       <source>gravity,terrain correction,inner zone,outer zone,Hammer zones,DEM,Bouguer</source>
       <translation>Schwere,Geländekorrektion,Innenzone,Außenzone,Hammer-Zonen,DGM,Bouguer</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="231" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="172" />
       <source>height</source>
       <translation>Höhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="240" />
-      <source>height from DEM</source>
-      <translation>Höhe aus DGM</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="190" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="141" />
       <source>innermost-ring correction</source>
       <translation>Korrektion des innersten Rings</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="189" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="140" />
       <source>station height</source>
       <translation>Stationshöhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="292" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="217" />
       <source>{} stations: terrain correction computed for {}, {} flagged.</source>
       <translation>{} Stationen: Geländekorrektion für {} berechnet, {} markiert.</translation>
     </message>
@@ -791,8 +706,19 @@
     </message>
     <message>
       <location filename="../plugin/terrain_run.py" line="64" />
+      <location filename="../plugin/terrain_run.py" line="151" />
       <source>elevation raster</source>
       <translation>Höhenraster</translation>
+    </message>
+    <message>
+      <location filename="../plugin/terrain_run.py" line="153" />
+      <source>height from DEM</source>
+      <translation>Höhe aus DGM</translation>
+    </message>
+    <message>
+      <location filename="../plugin/terrain_run.py" line="154" />
+      <source>no height (outside DEM)</source>
+      <translation>keine Höhe (außerhalb des DGM)</translation>
     </message>
   </context>
 </TS>

@@ -142,3 +142,14 @@ def compute_terrain(
         extra = np.where(np.isfinite(innermost_tc), innermost_tc, 0.0)
         result["tc_total"] = result["tc_total"] + extra
     return result
+
+
+def heights_from_dem(table, dem_layer, context) -> np.ndarray:
+    """Station heights sampled (bilinear) from a DEM, flagged as such."""
+    raster = open_elevation(dem_layer)
+    x, y = station_positions_on(raster, table, context)
+    check_overlap(raster, x, y, _tr("elevation raster"))
+    heights = raster.sample_bilinear(x, y)
+    table.flag_where(np.isfinite(heights), _tr("height from DEM"))
+    table.flag_where(~np.isfinite(heights), _tr("no height (outside DEM)"))
+    return heights

@@ -45,3 +45,106 @@ class ReliefGravityAlgorithm(QgsProcessingAlgorithm):
 
     def caution(self) -> str:
         return QCoreApplication.translate("ReliefGravityAlgorithm", CAUTION)
+
+
+def _tr(text: str) -> str:
+    return QCoreApplication.translate("ReliefGravityAlgorithm", text)
+
+
+class StationAlgorithm(ReliefGravityAlgorithm):
+    """Parameters and checks shared by the algorithms that add fields to stations.
+
+    Strings here use the explicit context ``ReliefGravityAlgorithm`` so they
+    are extracted and looked up under one name whatever the subclass.
+    """
+
+    INPUT = "INPUT"
+    HEIGHT_UNITS = "HEIGHT_UNITS"
+    DEM = "DEM"
+    REGIONAL_DEM = "REGIONAL_DEM"
+    DENSITY = "DENSITY"
+    INNER_RADIUS = "INNER_RADIUS"
+    OUTER_RADIUS = "OUTER_RADIUS"
+    OUTPUT = "OUTPUT"
+
+    def add_stations_parameter(self) -> None:
+        from qgis.core import QgsProcessing, QgsProcessingParameterFeatureSource
+
+        self.addParameter(
+            QgsProcessingParameterFeatureSource(self.INPUT, _tr("Gravity stations"), [QgsProcessing.TypeVectorPoint])
+        )
+
+    def add_height_units_parameter(self) -> None:
+        from qgis.core import QgsProcessingParameterEnum
+
+        self.addParameter(
+            QgsProcessingParameterEnum(
+                self.HEIGHT_UNITS, _tr("Height units"), options=[_tr("Metres"), _tr("Feet")], defaultValue=0
+            )
+        )
+
+    def add_density_parameter(self) -> None:
+        from qgis.core import QgsProcessingParameterNumber
+
+        self.addParameter(
+            QgsProcessingParameterNumber(
+                self.DENSITY,
+                _tr("Reduction density (kg/m³)"),
+                type=QgsProcessingParameterNumber.Double,
+                defaultValue=2670.0,
+            )
+        )
+
+    def add_zone_parameters(self, advanced: bool) -> None:
+        """Regional raster and zone radii (advanced in the reduction dialog)."""
+        from qgis.core import QgsProcessingParameterDefinition, QgsProcessingParameterNumber, QgsProcessingParameterRasterLayer
+
+        definitions = [
+            QgsProcessingParameterRasterLayer(
+                self.REGIONAL_DEM, _tr("Regional elevation raster for the outer zone (optional)"), optional=True
+            )
+        ]
+        for key, label, default in (
+            (self.INNER_RADIUS, _tr("Inner zone radius (m)"), 2000.0),
+            (self.OUTER_RADIUS, _tr("Outer zone radius (m)"), 166735.0),
+        ):
+            definitions.append(
+                QgsProcessingParameterNumber(
+                    key, label, type=QgsProcessingParameterNumber.Double, defaultValue=default, minValue=0.0
+                )
+            )
+        for definition in definitions:
+            if advanced:
+                definition.setFlags(definition.flags() | QgsProcessingParameterDefinition.FlagAdvanced)
+            self.addParameter(definition)
+
+    def check_density_and_radii(self, parameters, context) -> str:
+        """Sentence describing an impossible density or radius pair, or ''."""
+        density = self.parameterAsDouble(parameters, self.DENSITY, context)
+        if not density > 0:
+            return _tr("The reduction density must be positive (kg/m³); got {}.").format(density)
+        if density < 20:
+            return _tr("A reduction density of {} kg/m³ looks like g/cm³: enter 2670 for 2.67 g/cm³.").format(density)
+        inner = self.parameterAsDouble(parameters, self.INNER_RADIUS, context)
+        outer = self.parameterAsDouble(parameters, self.OUTER_RADIUS, context)
+        if not 0 < inner < outer:
+            return _tr(
+                "The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m)."
+            ).format(inner, outer)
+        return ""
+
+    def station_sink(self, parameters, context, source, added, feedback):
+        """Output sink: input fields plus ``added``; returns sink, id, fields, indices."""
+        from qgis.core import QgsProcessingException
+
+        from ..stations import output_fields
+
+        fields, indices, reused = output_fields(source.fields(), added)
+        for name in reused:
+            feedback.pushWarning(
+                _tr("The input already has a field {}; its values are replaced in the output copy.").format(name)
+            )
+        sink, dest_id = self.parameterAsSink(parameters, self.OUTPUT, context, fields, source.wkbType(), source.sourceCrs())
+        if sink is None:
+            raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
+        return sink, dest_id, fields, indices

@@ -7,7 +7,6 @@ import warnings
 
 import numpy as np
 from qgis.core import (
-    QgsFeatureSink,
     QgsProcessing,
     QgsProcessingException,
     QgsProcessingMultiStepFeedback,
@@ -16,16 +15,14 @@ from qgis.core import (
     QgsProcessingParameterDefinition,
     QgsProcessingParameterEnum,
     QgsProcessingParameterFeatureSink,
-    QgsProcessingParameterFeatureSource,
     QgsProcessingParameterField,
-    QgsProcessingParameterNumber,
     QgsProcessingParameterRasterLayer,
 )
 from qgis.PyQt.QtCore import QVariant
 
-from ..stations import output_fields, read_stations, write_stations
-from ..terrain_run import EXACT, compute_terrain
-from .base import ReliefGravityAlgorithm
+from ..stations import read_stations, write_stations
+from ..terrain_run import EXACT, compute_terrain, heights_from_dem
+from .base import StationAlgorithm
 from .field_checks import check_numeric_fields
 
 FOOT = 0.3048
@@ -49,15 +46,11 @@ RESULT_FIELDS = (
 )
 
 
-class BouguerReductionAlgorithm(ReliefGravityAlgorithm):
+class BouguerReductionAlgorithm(StationAlgorithm):
     """Free-air, simple and complete Bouguer anomalies for a station layer."""
 
-    INPUT = "INPUT"
     GRAVITY_FIELD = "GRAVITY_FIELD"
     HEIGHT_FIELD = "HEIGHT_FIELD"
-    HEIGHT_UNITS = "HEIGHT_UNITS"
-    DEM = "DEM"
-    DENSITY = "DENSITY"
     DENSITY_FIELD = "DENSITY_FIELD"
     DENSITY_FIELD_UNITS = "DENSITY_FIELD_UNITS"
     NORMAL_GRAVITY = "NORMAL_GRAVITY"
@@ -65,10 +58,6 @@ class BouguerReductionAlgorithm(ReliefGravityAlgorithm):
     ATMOSPHERIC = "ATMOSPHERIC"
     CURVATURE = "CURVATURE"
     TC_FIELD = "TC_FIELD"
-    REGIONAL_DEM = "REGIONAL_DEM"
-    INNER_RADIUS = "INNER_RADIUS"
-    OUTER_RADIUS = "OUTER_RADIUS"
-    OUTPUT = "OUTPUT"
     STATIONS_REDUCED = "STATIONS_REDUCED"
     STATIONS_FLAGGED = "STATIONS_FLAGGED"
 
@@ -108,11 +97,7 @@ class BouguerReductionAlgorithm(ReliefGravityAlgorithm):
         ).format(self.caution())
 
     def initAlgorithm(self, config=None):  # noqa: N802 - QGIS API
-        self.addParameter(
-            QgsProcessingParameterFeatureSource(
-                self.INPUT, self.tr("Gravity stations"), [QgsProcessing.TypeVectorPoint]
-            )
-        )
+        self.add_stations_parameter()
         self.addParameter(
             QgsProcessingParameterField(
                 self.GRAVITY_FIELD,
@@ -130,27 +115,13 @@ class BouguerReductionAlgorithm(ReliefGravityAlgorithm):
                 optional=True,
             )
         )
-        self.addParameter(
-            QgsProcessingParameterEnum(
-                self.HEIGHT_UNITS,
-                self.tr("Height units"),
-                options=[self.tr("Metres"), self.tr("Feet")],
-                defaultValue=0,
-            )
-        )
+        self.add_height_units_parameter()
         self.addParameter(
             QgsProcessingParameterRasterLayer(
                 self.DEM, self.tr("Elevation raster (DEM, metres)"), optional=True
             )
         )
-        self.addParameter(
-            QgsProcessingParameterNumber(
-                self.DENSITY,
-                self.tr("Reduction density (kg/m³)"),
-                type=QgsProcessingParameterNumber.Double,
-                defaultValue=2670.0,
-            )
-        )
+        self.add_density_parameter()
         self.addParameter(
             QgsProcessingParameterField(
                 self.DENSITY_FIELD,
@@ -212,20 +183,7 @@ class BouguerReductionAlgorithm(ReliefGravityAlgorithm):
                 optional=True,
             )
         )
-        regional = QgsProcessingParameterRasterLayer(
-            self.REGIONAL_DEM, self.tr("Regional elevation raster for the outer zone (optional)"), optional=True
-        )
-        regional.setFlags(regional.flags() | QgsProcessingParameterDefinition.FlagAdvanced)
-        self.addParameter(regional)
-        for key, label, default in (
-            (self.INNER_RADIUS, self.tr("Inner zone radius (m)"), 2000.0),
-            (self.OUTER_RADIUS, self.tr("Outer zone radius (m)"), 166735.0),
-        ):
-            radius = QgsProcessingParameterNumber(
-                key, label, type=QgsProcessingParameterNumber.Double, defaultValue=default, minValue=0.0
-            )
-            radius.setFlags(radius.flags() | QgsProcessingParameterDefinition.FlagAdvanced)
-            self.addParameter(radius)
+        self.add_zone_parameters(advanced=True)
         self.addParameter(
             QgsProcessingParameterFeatureSink(
                 self.OUTPUT, self.tr("Reduced stations"), QgsProcessing.TypeVectorPoint
@@ -253,23 +211,13 @@ class BouguerReductionAlgorithm(ReliefGravityAlgorithm):
         )
         if problem:
             return False, problem
-        density = self.parameterAsDouble(parameters, self.DENSITY, context)
-        if not density > 0:
-            return False, self.tr("The reduction density must be positive (kg/m³); got {}.").format(density)
-        if 0 < density < 20:
-            return False, self.tr(
-                "A reduction density of {} kg/m³ looks like g/cm³: enter 2670 for 2.67 g/cm³."
-            ).format(density)
+        problem = self.check_density_and_radii(parameters, context)
+        if problem:
+            return False, problem
         height_field = self.parameterAsFields(parameters, self.HEIGHT_FIELD, context)
         dem = self.parameterAsRasterLayer(parameters, self.DEM, context)
         if not height_field and dem is None:
             return False, self.tr("Choose a station height field or an elevation raster to sample heights from.")
-        inner = self.parameterAsDouble(parameters, self.INNER_RADIUS, context)
-        outer = self.parameterAsDouble(parameters, self.OUTER_RADIUS, context)
-        if not 0 < inner < outer:
-            return False, self.tr(
-                "The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m)."
-            ).format(inner, outer)
         return True, ""
 
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 - QGIS API
@@ -299,7 +247,7 @@ class BouguerReductionAlgorithm(ReliefGravityAlgorithm):
         if height_field:
             heights = table.field_values(height_field, FOOT if feet else 1.0, label=self.tr("height"))
         else:
-            heights = self._heights_from_dem(table, dem, context)
+            heights = heights_from_dem(table, dem, context)
 
         density = self._densities(parameters, context, table, feedback)
         normal_formula = NORMAL_FORMULAS[self.parameterAsEnum(parameters, self.NORMAL_GRAVITY, context)]
@@ -353,16 +301,7 @@ class BouguerReductionAlgorithm(ReliefGravityAlgorithm):
         reduced["tc_inner"] = tc_inner
         reduced["tc_outer"] = tc_outer
         added = [(name, QVariant.Double) for name in RESULT_FIELDS] + [("qc_flag", QVariant.String)]
-        fields, indices, reused = output_fields(source.fields(), added)
-        for name in reused:
-            feedback.pushWarning(
-                self.tr("The input already has a field {}; its values are replaced in the output copy.").format(name)
-            )
-        sink, dest_id = self.parameterAsSink(
-            parameters, self.OUTPUT, context, fields, source.wkbType(), source.sourceCrs()
-        )
-        if sink is None:
-            raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
+        sink, dest_id, fields, indices = self.station_sink(parameters, context, source, added, feedback)
         write_stations(sink, table, fields, indices, {k: reduced[k] for k in RESULT_FIELDS}, steps)
 
         faa_ok = np.isfinite(reduced["faa"])
@@ -377,18 +316,6 @@ class BouguerReductionAlgorithm(ReliefGravityAlgorithm):
             self.STATIONS_REDUCED: int(faa_ok.sum()),
             self.STATIONS_FLAGGED: flagged,
         }
-
-    def _heights_from_dem(self, table, dem, context):
-        from ..raster_io import open_elevation
-        from ..terrain_run import check_overlap, station_positions_on
-
-        raster = open_elevation(dem)
-        x, y = station_positions_on(raster, table, context)
-        check_overlap(raster, x, y, self.tr("elevation raster"))
-        heights = raster.sample_bilinear(x, y)
-        table.flag_where(np.isfinite(heights), self.tr("height from DEM"))
-        table.flag_where(~np.isfinite(heights), self.tr("no height (outside DEM)"))
-        return heights
 
     def _densities(self, parameters, context, table, feedback):
         density = self.parameterAsDouble(parameters, self.DENSITY, context)

@@ -13,38 +13,29 @@ from qgis.core import (
     QgsProcessingParameterDefinition,
     QgsProcessingParameterEnum,
     QgsProcessingParameterFeatureSink,
-    QgsProcessingParameterFeatureSource,
     QgsProcessingParameterField,
     QgsProcessingParameterNumber,
     QgsProcessingParameterRasterLayer,
 )
 from qgis.PyQt.QtCore import QVariant
 
-from ..stations import output_fields, read_stations, write_stations
-from ..terrain_run import EXACT, RING_SECTOR, compute_terrain
-from .base import ReliefGravityAlgorithm
+from ..stations import read_stations, write_stations
+from ..terrain_run import EXACT, compute_terrain, heights_from_dem
+from .base import StationAlgorithm
 from .field_checks import check_numeric_fields
 
 FOOT = 0.3048
 HAMMER_ZONE_LETTERS = "BCDEFGHIJKLM"
 
 
-class TerrainCorrectionAlgorithm(ReliefGravityAlgorithm):
+class TerrainCorrectionAlgorithm(StationAlgorithm):
     """Terrain correction of gravity stations from elevation rasters."""
 
-    INPUT = "INPUT"
     HEIGHT_FIELD = "HEIGHT_FIELD"
-    HEIGHT_UNITS = "HEIGHT_UNITS"
-    DEM = "DEM"
-    REGIONAL_DEM = "REGIONAL_DEM"
-    INNER_RADIUS = "INNER_RADIUS"
-    OUTER_RADIUS = "OUTER_RADIUS"
-    DENSITY = "DENSITY"
     INNERMOST_TC_FIELD = "INNERMOST_TC_FIELD"
     WATER_DENSITY = "WATER_DENSITY"
     METHOD = "METHOD"
     ZONE_FIELDS = "ZONE_FIELDS"
-    OUTPUT = "OUTPUT"
     STATIONS_COMPUTED = "STATIONS_COMPUTED"
     STATIONS_FLAGGED = "STATIONS_FLAGGED"
 
@@ -82,11 +73,7 @@ class TerrainCorrectionAlgorithm(ReliefGravityAlgorithm):
         ).format(self.caution())
 
     def initAlgorithm(self, config=None):  # noqa: N802 - QGIS API
-        self.addParameter(
-            QgsProcessingParameterFeatureSource(
-                self.INPUT, self.tr("Gravity stations"), [QgsProcessing.TypeVectorPoint]
-            )
-        )
+        self.add_stations_parameter()
         self.addParameter(
             QgsProcessingParameterField(
                 self.HEIGHT_FIELD,
@@ -96,46 +83,10 @@ class TerrainCorrectionAlgorithm(ReliefGravityAlgorithm):
                 optional=True,
             )
         )
-        self.addParameter(
-            QgsProcessingParameterEnum(
-                self.HEIGHT_UNITS,
-                self.tr("Height units"),
-                options=[self.tr("Metres"), self.tr("Feet")],
-                defaultValue=0,
-            )
-        )
+        self.add_height_units_parameter()
         self.addParameter(QgsProcessingParameterRasterLayer(self.DEM, self.tr("Elevation raster (DEM, metres)")))
-        self.addParameter(
-            QgsProcessingParameterRasterLayer(
-                self.REGIONAL_DEM, self.tr("Regional elevation raster for the outer zone (optional)"), optional=True
-            )
-        )
-        self.addParameter(
-            QgsProcessingParameterNumber(
-                self.INNER_RADIUS,
-                self.tr("Inner zone radius (m)"),
-                type=QgsProcessingParameterNumber.Double,
-                defaultValue=2000.0,
-                minValue=0.0,
-            )
-        )
-        self.addParameter(
-            QgsProcessingParameterNumber(
-                self.OUTER_RADIUS,
-                self.tr("Outer zone radius (m)"),
-                type=QgsProcessingParameterNumber.Double,
-                defaultValue=166735.0,
-                minValue=0.0,
-            )
-        )
-        self.addParameter(
-            QgsProcessingParameterNumber(
-                self.DENSITY,
-                self.tr("Reduction density (kg/m³)"),
-                type=QgsProcessingParameterNumber.Double,
-                defaultValue=2670.0,
-            )
-        )
+        self.add_zone_parameters(advanced=False)
+        self.add_density_parameter()
         self.addParameter(
             QgsProcessingParameterField(
                 self.INNERMOST_TC_FIELD,
@@ -192,19 +143,9 @@ class TerrainCorrectionAlgorithm(ReliefGravityAlgorithm):
         )
         if problem:
             return False, problem
-        inner = self.parameterAsDouble(parameters, self.INNER_RADIUS, context)
-        outer = self.parameterAsDouble(parameters, self.OUTER_RADIUS, context)
-        if not 0 < inner < outer:
-            return False, self.tr(
-                "The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m)."
-            ).format(inner, outer)
-        density = self.parameterAsDouble(parameters, self.DENSITY, context)
-        if not density > 0:
-            return False, self.tr("The reduction density must be positive (kg/m³); got {}.").format(density)
-        if density < 20:
-            return False, self.tr(
-                "A reduction density of {} kg/m³ looks like g/cm³: enter 2670 for 2.67 g/cm³."
-            ).format(density)
+        problem = self.check_density_and_radii(parameters, context)
+        if problem:
+            return False, problem
         return True, ""
 
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 - QGIS API
@@ -230,14 +171,7 @@ class TerrainCorrectionAlgorithm(ReliefGravityAlgorithm):
         if height_field:
             heights = table.field_values(height_field, FOOT if feet else 1.0, label=self.tr("height"))
         else:
-            from ..raster_io import open_elevation
-            from ..terrain_run import check_overlap, station_positions_on
-
-            raster = open_elevation(dem)
-            x, y = station_positions_on(raster, table, context)
-            check_overlap(raster, x, y, self.tr("elevation raster"))
-            heights = raster.sample_bilinear(x, y)
-            table.flag_where(np.isfinite(heights), self.tr("height from DEM"))
+            heights = heights_from_dem(table, dem, context)
         innermost_name = field(self.INNERMOST_TC_FIELD)
         innermost = table.field_values(innermost_name) if innermost_name else None
         water = parameters.get(self.WATER_DENSITY)
@@ -275,16 +209,7 @@ class TerrainCorrectionAlgorithm(ReliefGravityAlgorithm):
         added.append(("qc_flag", QVariant.String))
 
         steps.setCurrentStep(2)
-        fields, indices, reused = output_fields(source.fields(), added)
-        for name in reused:
-            feedback.pushWarning(
-                self.tr("The input already has a field {}; its values are replaced in the output copy.").format(name)
-            )
-        sink, dest_id = self.parameterAsSink(
-            parameters, self.OUTPUT, context, fields, source.wkbType(), source.sourceCrs()
-        )
-        if sink is None:
-            raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
+        sink, dest_id, fields, indices = self.station_sink(parameters, context, source, added, feedback)
         write_stations(sink, table, fields, indices, columns, steps)
         computed = int(np.isfinite(result["tc_total"]).sum())
         flagged = sum(1 for f in table.flags if f)

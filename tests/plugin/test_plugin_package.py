@@ -9,7 +9,6 @@ import sys
 import zipfile
 from pathlib import Path
 
-import pytest
 
 ROOT = Path(__file__).resolve().parents[2]
 
@@ -89,7 +88,6 @@ def test_translation_sources_are_current():
 
 
 def test_german_translation_is_loaded_for_a_german_locale(qgis_processing):
-    from qgis.core import QgsApplication
     from qgis.PyQt.QtCore import QCoreApplication, QTranslator
 
     qm = ROOT / "i18n" / "relief_gravity_de.qm"

@@ -6,7 +6,6 @@ from __future__ import annotations
 import numpy as np
 import pytest
 
-from relief_gravity.algorithms.constants import GRAVITATIONAL_CONSTANT
 
 
 def _run(params, feedback=None):
