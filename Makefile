@@ -17,7 +17,7 @@ zip: i18n
 install: zip
 	mkdir -p "$(PLUGINS)"
 	rm -rf "$(PLUGINS)/relief_gravity"
-	cd "$(PLUGINS)" && /usr/bin/python3 -m zipfile -e "$(CURDIR)/$$(ls -t dist/relief_gravity-*.zip | head -1)" .
+	zip="$$(ls -t $(CURDIR)/dist/relief_gravity-*.zip | head -1)" && cd "$(PLUGINS)" && /usr/bin/python3 -m zipfile -e "$$zip" .
 	QT_QPA_PLATFORM=offscreen qgis_process.bin plugins enable relief_gravity
 
 uninstall:
