@@ -12,6 +12,8 @@ grids and by multigrid-preconditioned GMRES on large ones.
 
 from __future__ import annotations
 
+import inspect
+
 import math
 from dataclasses import replace
 
@@ -404,11 +406,14 @@ def _solve(a: sp.csr_matrix, rhs: np.ndarray, n_rows: int, n_cols: int, method: 
     if scale == 0.0:
         return np.zeros_like(rhs)
     mg = _Multigrid(a, n_rows, n_cols)
+    # scipy renamed gmres' relative tolerance from ``tol`` to ``rtol`` (1.12)
+    # and removed ``tol`` (1.14); Debian's 1.10 knows only ``tol``.
+    tolerance = {"rtol" if "rtol" in inspect.signature(spla.gmres).parameters else "tol": ITERATIVE_RTOL}
     solution, _ = spla.gmres(
         a,
         rhs,
         x0=mg.apply(rhs),
-        tol=ITERATIVE_RTOL,
+        **tolerance,
         atol=ITERATIVE_RTOL * scale,
         restart=GMRES_RESTART,
         maxiter=GMRES_MAX_RESTARTS,
