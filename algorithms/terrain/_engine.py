@@ -468,7 +468,15 @@ def _batch_level(plan: _GridPlan, level_index: int, bt: _Batch, density, water_d
     inner_mask = s2 <= inner_radius * inner_radius
     inner = np.sum(np.where(inner_mask, tc, 0.0), axis=(1, 2))
     total = np.sum(tc, axis=(1, 2))
-    covered = np.sum(np.broadcast_to(area, tc.shape), axis=(1, 2))
+    # Coverage counts each block by the part of it inside the outer circle
+    # (the circle treated as straight across the block): blocks are assigned
+    # to the zone by their centre, which alone would make a fully covered disc
+    # read up to about 1 % short or long at the rim.
+    s = np.sqrt(s2)
+    radial_width = (side_x * np.abs(dx) + side_y * np.abs(dy)) / np.maximum(s, 1e-9)
+    inside_fraction = np.clip(0.5 + (outer_radius - s) / np.maximum(radial_width, 1e-9), 0.0, 1.0)
+    covered_area = np.where(valid, weight, 0.0) * inside_fraction * side_x * side_y
+    covered = np.sum(np.broadcast_to(covered_area, tc.shape), axis=(1, 2))
     if k == 0:
         delta_in, delta = _near_cells(plan, bt, rows, cols, w, tc, dx, dy, s2, side_x, side_y, relief, density, water_density, inner_radius, curvature)
         inner = inner + delta_in

@@ -147,3 +147,29 @@ def test_raster_is_read_from_the_calling_thread_only():
     x = np.linspace(500, 5500, 100)
     terrain_correction(x, x, np.full(100, 600.0), grid, outer_radius=4000.0, workers=2)
     assert threads == {threading.get_ident()}
+
+
+@pytest.mark.parametrize("radius", [10_000.0, 50_000.0, 166_735.0])
+def test_full_coverage_reads_one_at_every_radius(radius):
+    # Blocks are assigned to zones by their centre; coverage must still count
+    # the disc's area exactly, or fully covered stations get flagged.
+    fine = ElevationGrid.from_array(np.full((400, 400), 100.0), 0.0, 40_000.0, 100.0, 100.0)
+    regional = ElevationGrid.from_array(np.full((200, 200), 100.0), -180_000.0, 220_000.0, 2000.0, 2000.0)
+    xs = np.array([20_000.0, 20_050.0, 13_330.0, 27_770.0])
+    ys = np.array([20_000.0, 20_050.0, 17_770.0, 25_550.0])
+    result = terrain_correction(xs, ys, np.full(4, 100.0), fine, regional, outer_radius=radius)
+    assert np.all(result.coverage > 0.998)
+    assert result.flags == ["", "", "", ""]
+
+
+@pytest.mark.parametrize("x, y", [(2000.0, 20_000.0), (2050.0, 17_330.0), (2010.0, 25_555.0)])
+def test_coverage_near_an_edge_is_the_disc_fraction_inside(x, y):
+    # Analytic: a disc of radius R whose centre is d from a straight edge has
+    # 1 - (R^2 acos(d/R) - d sqrt(R^2 - d^2)) / (pi R^2) of its area inside.
+    radius = 10_000.0
+    fine = ElevationGrid.from_array(np.full((400, 400), 100.0), 0.0, 40_000.0, 100.0, 100.0)
+    result = terrain_correction([x], [y], [100.0], fine, None, outer_radius=radius)
+    d = x
+    expected = 1 - (radius**2 * math.acos(d / radius) - d * math.sqrt(radius**2 - d**2)) / (math.pi * radius**2)
+    assert result.coverage[0] == pytest.approx(expected, abs=0.001)
+    assert result.flags[0].startswith("partial coverage")
