@@ -13,6 +13,7 @@ QGIS (``tools/demo.sh`` does the set-up and runs this).
 
 from __future__ import annotations
 
+import gc
 import importlib.util
 import os
 import sys
@@ -148,6 +149,10 @@ def main(argv: list[str]) -> int:
         print(f"    {path.name}")
     print("  Results support interpretation only; check reductions against the survey's own ties")
     print("  and specifications, and defer to licensed practice and local codes for decisions.")
+    # Drop every QGIS object before QGIS shuts down: a layer still referenced
+    # from Python when exitQgis() runs makes the interpreter crash on exit.
+    del layer, reduction
+    gc.collect()
     plugin.unload()
     app.exitQgis()
     return 0
