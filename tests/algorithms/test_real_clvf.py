@@ -45,6 +45,7 @@ def _read(folder):
     names = ("latWGS84", "zWGS84", "OG", "FAA", "SBA", "TTC", "CBA")
     data = {name: column(name) for name in names}
     complete = np.logical_and.reduce([np.isfinite(data[name]) for name in names])
+    data["Station_ID"] = np.array([row["Station_ID"] for row in rows])
     return len(rows), {name: values[complete] for name, values in data.items()}
 
 
@@ -132,3 +133,25 @@ def test_curvature_term_against_publisher(survey, reduced):
     # With LaFehr's own G = 6.67e-11 (REFERENCES.md 4.2) the polynomial is matched
     # to 0.0005 mGal over 13-1542 m: it is a fit to the same closed form.
     assert np.max(np.abs(curvature_correction(h, DENSITY, 6.67e-11) - polynomial)) < 6e-4
+
+
+def test_station_by_station_residuals_are_reported(survey, reduced, tmp_path_factory):
+    """Write every station's residuals to a CSV and print the worst ones."""
+    _, d = survey
+    residuals = {
+        "faa": reduced["faa"] - d["FAA"],
+        "sba_slab": reduced["faa"] - reduced["slab_corr"] - d["SBA"],
+        "cba": reduced["cba"] - d["CBA"],
+    }
+    report = tmp_path_factory.mktemp("clvf") / "clvf_residuals.csv"
+    with open(report, "w", newline="", encoding="utf-8") as handle:
+        writer = csv.writer(handle)
+        writer.writerow(["station_id", "height_m", "faa_res_mgal", "sba_res_mgal", "cba_res_mgal"])
+        for i, station in enumerate(d["Station_ID"]):
+            writer.writerow([station, f"{d['H'][i]:.2f}"] + [f"{residuals[k][i]:+.4f}" for k in residuals])
+    worst = np.argsort(-np.abs(residuals["cba"]))[:5]
+    print(f"station-by-station residuals (ours - USGS) written to {report}; largest |CBA| residuals:")
+    for i in worst:
+        print(f"  {d['Station_ID'][i]:>12s}  H={d['H'][i]:7.1f} m  FAA {residuals['faa'][i]:+.3f}  CBA {residuals['cba'][i]:+.3f} mGal")
+    with open(report, encoding="utf-8") as handle:
+        assert sum(1 for _ in handle) == d["OG"].size + 1
