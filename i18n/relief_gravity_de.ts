@@ -31,12 +31,12 @@
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="324" />
       <source>Anomaly {} (mGal)</source>
-      <translation type="unfinished" />
+      <translation>Anomalie {} (mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="289" />
       <source>Automatic blanking distance: {:.6g} {} (3 station spacings).</source>
-      <translation type="unfinished" />
+      <translation>Automatischer Ausblendabstand: {:.6g} {} (3 Stationsabstände).</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="165" />
@@ -66,7 +66,7 @@
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="362" />
       <source>Contours {} ({:g} mGal)</source>
-      <translation type="unfinished" />
+      <translation>Isolinien {} ({:g} mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="306" />
@@ -86,7 +86,7 @@
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="279" />
       <source>Grid: {} columns x {} rows of {} {} cells, tension {}.</source>
-      <translation type="unfinished" />
+      <translation>Raster: {} Spalten x {} Zeilen zu {} {} Zellen, Spannung {}.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="93" />
@@ -101,7 +101,7 @@
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="252" />
       <source>Only {} station(s) have a value in the field {}; at least 3 are needed to grid.</source>
-      <translation type="unfinished" />
+      <translation>Nur {} Station(en) haben einen Wert im Feld {}; zum Interpolieren sind mindestens 3 nötig.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="140" />
@@ -131,38 +131,38 @@
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="296" />
       <source>The stations cannot be gridded: {}</source>
-      <translation type="unfinished" />
+      <translation>Die Stationen können nicht interpoliert werden: {}</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="339" />
       <source>The surface is flat ({} mGal): no contours.</source>
-      <translation type="unfinished" />
+      <translation>Die Fläche ist eben ({} mGal): keine Isolinien.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="204" />
       <location filename="../plugin/toolbox/anomaly_grid.py" line="233" />
       <source>anomaly</source>
-      <translation type="unfinished" />
+      <translation>Anomalie</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="96" />
       <source>gravity,anomaly,bouguer,grid,raster,contour,minimum curvature,tension</source>
-      <translation type="unfinished" />
+      <translation>Schwere,Anomalie,Bouguer,Raster,Isolinien,minimale Krümmung,Spannung</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="359" />
       <source>{} contour lines every {:g} mGal.</source>
-      <translation type="unfinished" />
+      <translation>{} Isolinien im Abstand von {:g} mGal.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="246" />
       <source>{} of {} stations skipped: no geometry or no numeric value in {}.</source>
-      <translation type="unfinished" />
+      <translation>{} von {} Stationen übersprungen: keine Geometrie oder kein Zahlenwert in {}.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="314" />
       <source>{} stations gridded; {} of {} cells have a value, from {:.3f} to {:.3f} mGal.</source>
-      <translation type="unfinished" />
+      <translation>{} Stationen interpoliert; {} von {} Zellen haben einen Wert, von {:.3f} bis {:.3f} mGal.</translation>
     </message>
   </context>
   <context>
@@ -187,12 +187,12 @@
     <message>
       <location filename="../plugin/render.py" line="59" />
       <source>Could not open {} as a map layer.</source>
-      <translation type="unfinished" />
+      <translation>{} konnte nicht als Kartenlayer geöffnet werden.</translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="208" />
       <source>Could not write the map image {} (layout export status {}).</source>
-      <translation type="unfinished" />
+      <translation>Das Kartenbild {} konnte nicht geschrieben werden (Exportstatus {}).</translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="159" />
@@ -207,12 +207,12 @@
     <message>
       <location filename="../plugin/render.py" line="172" />
       <source>km</source>
-      <translation type="unfinished" />
+      <translation>km</translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="172" />
       <source>m</source>
-      <translation type="unfinished" />
+      <translation>m</translation>
     </message>
   </context>
   <context>
@@ -230,12 +230,12 @@
     <message>
       <location filename="../plugin/styling.py" line="220" />
       <source>Contour lines of the gridded anomaly; field value in mGal.</source>
-      <translation type="unfinished" />
+      <translation>Isolinien der interpolierten Anomalie; Feld value in mGal.</translation>
     </message>
     <message>
       <location filename="../plugin/styling.py" line="294" />
       <source>Could not save the style {}: {}</source>
-      <translation type="unfinished" />
+      <translation>Der Stil {} konnte nicht gespeichert werden: {}</translation>
     </message>
     <message>
       <location filename="../plugin/styling.py" line="178" />
@@ -277,8 +277,8 @@
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="180" />
-      <source>Existing terrain-correction field (mGal, optional)</source>
-      <translation>Vorhandenes Feld der Geländekorrektion (mGal, optional)</translation>
+      <source>Existing terrain-correction field (mGal)</source>
+      <translation>Vorhandenes Feld der Geländekorrektion (mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="160" />
@@ -322,8 +322,8 @@
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="128" />
-      <source>Reduction density field, per station (optional)</source>
-      <translation>Feld der Reduktionsdichte je Station (optional)</translation>
+      <source>Reduction density field, per station</source>
+      <translation>Feld der Reduktionsdichte je Station</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="159" />
@@ -508,18 +508,18 @@
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="104" />
-      <source>Regional elevation raster for the outer zone (optional)</source>
-      <translation>Regionales Höhenraster für die Außenzone (optional)</translation>
+      <source>Regional elevation raster for the outer zone</source>
+      <translation>Regionales Höhenraster für die Außenzone</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="15" />
       <source>Results support interpretation only. Check every reduction against the survey's own ties and specifications; decisions on drilling, groundwater or engineering, and reporting under a jurisdiction's rules, are for licensed practice and local codes.</source>
-      <translation type="unfinished" />
+      <translation>Die Ergebnisse dienen nur der Interpretation. Prüfen Sie jede Reduktion an den Anschlussmessungen und Vorgaben der Vermessung; Entscheidungen über Bohrungen, Grundwasser oder Bauvorhaben sowie Berichte nach den Regeln einer Rechtsordnung sind Sache zugelassener Fachleute und örtlicher Vorschriften.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="131" />
       <source>The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m).</source>
-      <translation type="unfinished" />
+      <translation>Der Radius der Innenzone ({} m) muss positiv und kleiner als der Radius der Außenzone ({} m) sein.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="145" />
@@ -561,7 +561,7 @@
     <message>
       <location filename="../plugin/stations.py" line="120" />
       <source>The station layer has no coordinate reference system. Assign its CRS (Layer Properties &gt; Source) so latitudes can be computed.</source>
-      <translation type="unfinished" />
+      <translation>Der Stationslayer hat kein Koordinatenbezugssystem. Weisen Sie sein KBS zu (Layereigenschaften &gt; Quelle), damit Breiten berechnet werden können.</translation>
     </message>
     <message>
       <location filename="../plugin/stations.py" line="143" />
@@ -608,8 +608,8 @@
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="93" />
-      <source>Field-estimated innermost-ring correction (mGal, optional)</source>
-      <translation>Im Feld geschätzte Korrektion des innersten Rings (mGal, optional)</translation>
+      <source>Field-estimated innermost-ring correction (mGal)</source>
+      <translation>Im Feld geschätzte Korrektion des innersten Rings (mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="111" />
@@ -658,8 +658,8 @@
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="101" />
-      <source>Treat cells below sea level as water of this density (kg/m³, optional)</source>
-      <translation>Zellen unter dem Meeresspiegel als Wasser dieser Dichte behandeln (kg/m³, optional)</translation>
+      <source>Treat cells below sea level as water of this density (kg/m³)</source>
+      <translation>Zellen unter dem Meeresspiegel als Wasser dieser Dichte behandeln (kg/m³)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="52" />

@@ -137,7 +137,7 @@ def build_model():
             defaultValue=2670.0, optional=True,
         ),
         QgsProcessingParameterRasterLayer(
-            REGIONAL_DEM, "Regional elevation raster for the outer zone (optional)", optional=True
+            REGIONAL_DEM, "Regional elevation raster for the outer zone", optional=True
         ),
     ]
     for k, definition in enumerate(inputs):

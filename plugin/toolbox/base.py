@@ -101,7 +101,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
 
         definitions = [
             QgsProcessingParameterRasterLayer(
-                self.REGIONAL_DEM, _tr("Regional elevation raster for the outer zone (optional)"), optional=True
+                self.REGIONAL_DEM, _tr("Regional elevation raster for the outer zone"), optional=True
             )
         ]
         for key, label, default in (

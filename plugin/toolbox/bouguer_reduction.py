@@ -125,7 +125,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
         self.addParameter(
             QgsProcessingParameterField(
                 self.DENSITY_FIELD,
-                self.tr("Reduction density field, per station (optional)"),
+                self.tr("Reduction density field, per station"),
                 parentLayerParameterName=self.INPUT,
                 type=QgsProcessingParameterField.Numeric,
                 optional=True,
@@ -177,7 +177,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
         self.addParameter(
             QgsProcessingParameterField(
                 self.TC_FIELD,
-                self.tr("Existing terrain-correction field (mGal, optional)"),
+                self.tr("Existing terrain-correction field (mGal)"),
                 parentLayerParameterName=self.INPUT,
                 type=QgsProcessingParameterField.Numeric,
                 optional=True,

@@ -90,7 +90,7 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         self.addParameter(
             QgsProcessingParameterField(
                 self.INNERMOST_TC_FIELD,
-                self.tr("Field-estimated innermost-ring correction (mGal, optional)"),
+                self.tr("Field-estimated innermost-ring correction (mGal)"),
                 parentLayerParameterName=self.INPUT,
                 type=QgsProcessingParameterField.Numeric,
                 optional=True,
@@ -98,7 +98,7 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         )
         water = QgsProcessingParameterNumber(
             self.WATER_DENSITY,
-            self.tr("Treat cells below sea level as water of this density (kg/m³, optional)"),
+            self.tr("Treat cells below sea level as water of this density (kg/m³)"),
             type=QgsProcessingParameterNumber.Double,
             optional=True,
             minValue=0.0,
