@@ -65,6 +65,12 @@ class StationTable:
         for index in np.flatnonzero(mask):
             self.flag(int(index), reason)
 
+    def flag_each(self, reasons) -> None:
+        """Add per-station reasons as the engines give them ("" or "a; b")."""
+        for index, joined in enumerate(reasons):
+            for reason in str(joined).split(";"):
+                self.flag(index, reason.strip())
+
     def field_values(self, name: str | None, scale: float = 1.0, label: str = "") -> np.ndarray:
         """Numeric attribute as a float array (NaN where NULL or not a number)."""
         if not name:

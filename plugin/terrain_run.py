@@ -3,6 +3,8 @@
 
 from __future__ import annotations
 
+from dataclasses import dataclass
+
 import numpy as np
 from qgis.core import QgsCoordinateReferenceSystem, QgsProcessingException
 from qgis.PyQt.QtCore import QCoreApplication
@@ -36,10 +38,27 @@ def check_overlap(raster, x, y, label: str) -> None:
         )
 
 
+@dataclass
+class StationsOnRaster:
+    """An opened elevation raster and the stations' coordinates in its CRS."""
+
+    raster: object
+    x: np.ndarray
+    y: np.ndarray
+
+
+def place_stations(dem_layer, table, context) -> StationsOnRaster:
+    """Open the DEM once and put the stations on it; refuse when none falls on it."""
+    raster = open_elevation(dem_layer)
+    x, y = station_positions_on(raster, table, context)
+    check_overlap(raster, x, y, _tr("elevation raster"))
+    return StationsOnRaster(raster, x, y)
+
+
 def compute_terrain(
     table,
     heights: np.ndarray,
-    dem_layer,
+    placed: StationsOnRaster,
     regional_layer,
     *,
     inner_radius: float,
@@ -59,9 +78,7 @@ def compute_terrain(
     """
     from ..algorithms.terrain import TerrainCancelled, hammer_terrain_correction, terrain_correction
 
-    fine = open_elevation(dem_layer)
-    x, y = station_positions_on(fine, table, context)
-    check_overlap(fine, x, y, _tr("elevation raster"))
+    fine, x, y = placed.raster, placed.x, placed.y
     regional_grid = None
     if regional_layer is not None:
         regional = open_elevation(regional_layer)
@@ -95,10 +112,7 @@ def compute_terrain(
                 progress=progress,
                 is_cancelled=feedback.isCanceled,
             )
-            for i, reason in enumerate(hammer.flags):
-                if reason:
-                    for part in str(reason).split(";"):
-                        table.flag(i, part.strip())
+            table.flag_each(hammer.flags)
             total = np.asarray(hammer.total, dtype=float)
             result["tc_inner"] = np.full(n, np.nan)
             result["tc_outer"] = np.full(n, np.nan)
@@ -124,10 +138,7 @@ def compute_terrain(
             result["tc_total"] = np.asarray(engine.tc_total, dtype=float)
             result["dem_diff"] = np.asarray(engine.height_difference, dtype=float)
             result["coverage"] = np.asarray(engine.coverage, dtype=float)
-            for i, reason in enumerate(engine.flags):
-                if reason:
-                    for part in str(reason).split(";"):
-                        table.flag(i, part.strip())
+            table.flag_each(engine.flags)
     except TerrainCancelled as error:
         raise QgsProcessingException(_tr("Cancelled by the user.")) from error
 
@@ -144,12 +155,9 @@ def compute_terrain(
     return result
 
 
-def heights_from_dem(table, dem_layer, context) -> np.ndarray:
-    """Station heights sampled (bilinear) from a DEM, flagged as such."""
-    raster = open_elevation(dem_layer)
-    x, y = station_positions_on(raster, table, context)
-    check_overlap(raster, x, y, _tr("elevation raster"))
-    heights = raster.sample_bilinear(x, y)
+def heights_from_dem(table, placed: StationsOnRaster) -> np.ndarray:
+    """Station heights sampled (bilinear) from the DEM, flagged as such."""
+    heights = placed.raster.sample_bilinear(placed.x, placed.y)
     table.flag_where(np.isfinite(heights), _tr("height from DEM"))
     table.flag_where(~np.isfinite(heights), _tr("no height (outside DEM)"))
     return heights

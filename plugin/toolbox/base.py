@@ -47,8 +47,19 @@ class ReliefGravityAlgorithm(QgsProcessingAlgorithm):
         return QCoreApplication.translate("ReliefGravityAlgorithm", CAUTION)
 
 
+#: International foot in metres.
+FOOT = 0.3048
+
+
 def _tr(text: str) -> str:
     return QCoreApplication.translate("ReliefGravityAlgorithm", text)
+
+
+def is_unset(value) -> bool:
+    """True for an optional parameter left empty (None, NULL or '')."""
+    from qgis.core import NULL
+
+    return value is None or value == NULL or (isinstance(value, str) and not value.strip())
 
 
 class StationAlgorithm(ReliefGravityAlgorithm):
@@ -59,6 +70,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
     """
 
     INPUT = "INPUT"
+    HEIGHT_FIELD = "HEIGHT_FIELD"
     HEIGHT_UNITS = "HEIGHT_UNITS"
     DEM = "DEM"
     REGIONAL_DEM = "REGIONAL_DEM"
@@ -132,6 +144,37 @@ class StationAlgorithm(ReliefGravityAlgorithm):
                 "The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m)."
             ).format(inner, outer)
         return ""
+
+    def first_field(self, parameters, key, context):
+        """The field chosen for an optional single-field parameter, or None."""
+        names = self.parameterAsFields(parameters, key, context)
+        return names[0] if names else None
+
+    def read_input_stations(self, parameters, context, feedback):
+        """Source, a three-step feedback and the station table of ``INPUT``."""
+        from qgis.core import QgsProcessingException, QgsProcessingMultiStepFeedback
+
+        from ..stations import read_stations
+
+        source = self.parameterAsSource(parameters, self.INPUT, context)
+        if source is None:
+            raise QgsProcessingException(self.invalidSourceError(parameters, self.INPUT))
+        steps = QgsProcessingMultiStepFeedback(3, feedback)
+        if feedback.isCanceled():
+            # A cancel made before the multi-step feedback existed is not forwarded to it.
+            steps.cancel()
+        return source, steps, read_stations(source, context, steps)
+
+    def station_heights(self, parameters, context, table, placed):
+        """Heights in metres from ``HEIGHT_FIELD`` (in ``HEIGHT_UNITS``), else sampled
+        from the DEM the stations were placed on."""
+        from ..terrain_run import heights_from_dem
+
+        height_field = self.first_field(parameters, self.HEIGHT_FIELD, context)
+        if not height_field:
+            return heights_from_dem(table, placed)
+        feet = self.parameterAsEnum(parameters, self.HEIGHT_UNITS, context) == 1
+        return table.field_values(height_field, FOOT if feet else 1.0, label=_tr("height"))
 
     def station_sink(self, parameters, context, source, added, feedback):
         """Output sink: input fields plus ``added``; returns sink, id, fields, indices."""

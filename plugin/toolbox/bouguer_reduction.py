@@ -8,8 +8,6 @@ import warnings
 import numpy as np
 from qgis.core import (
     QgsProcessing,
-    QgsProcessingException,
-    QgsProcessingMultiStepFeedback,
     QgsProcessingOutputNumber,
     QgsProcessingParameterBoolean,
     QgsProcessingParameterDefinition,
@@ -20,12 +18,11 @@ from qgis.core import (
 )
 from qgis.PyQt.QtCore import QVariant
 
-from ..stations import read_stations, write_stations
-from ..terrain_run import EXACT, compute_terrain, heights_from_dem
+from ..stations import write_stations
+from ..terrain_run import EXACT, compute_terrain, place_stations
 from .base import StationAlgorithm
 from .field_checks import check_numeric_fields
 
-FOOT = 0.3048
 NORMAL_FORMULAS = ("grs80", "wgs84", "1967")
 HEIGHT_FORMULAS = ("second_order", "first_order")
 PLAUSIBLE_DENSITY = (1000.0, 3500.0)
@@ -50,7 +47,6 @@ class BouguerReductionAlgorithm(StationAlgorithm):
     """Free-air, simple and complete Bouguer anomalies for a station layer."""
 
     GRAVITY_FIELD = "GRAVITY_FIELD"
-    HEIGHT_FIELD = "HEIGHT_FIELD"
     DENSITY_FIELD = "DENSITY_FIELD"
     DENSITY_FIELD_UNITS = "DENSITY_FIELD_UNITS"
     NORMAL_GRAVITY = "NORMAL_GRAVITY"
@@ -223,31 +219,18 @@ class BouguerReductionAlgorithm(StationAlgorithm):
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 - QGIS API
         from ...algorithms import reduce_gravity
 
-        source = self.parameterAsSource(parameters, self.INPUT, context)
-        if source is None:
-            raise QgsProcessingException(self.invalidSourceError(parameters, self.INPUT))
-        steps = QgsProcessingMultiStepFeedback(3, feedback)
-        if feedback.isCanceled():
-            # A cancel made before the multi-step feedback existed is not forwarded to it.
-            steps.cancel()
-        table = read_stations(source, context, steps)
-
-        def field(key):
-            names = self.parameterAsFields(parameters, key, context)
-            return names[0] if names else None
-
-        gravity_field = field(self.GRAVITY_FIELD)
-        height_field = field(self.HEIGHT_FIELD)
-        feet = self.parameterAsEnum(parameters, self.HEIGHT_UNITS, context) == 1
+        source, steps, table = self.read_input_stations(parameters, context, feedback)
+        gravity_field = self.first_field(parameters, self.GRAVITY_FIELD, context)
+        height_field = self.first_field(parameters, self.HEIGHT_FIELD, context)
         dem = self.parameterAsRasterLayer(parameters, self.DEM, context)
         regional = self.parameterAsRasterLayer(parameters, self.REGIONAL_DEM, context)
-        tc_field = field(self.TC_FIELD)
+        tc_field = self.first_field(parameters, self.TC_FIELD, context)
+        # The DEM is opened and the stations put on it once, for the heights
+        # and for the terrain correction alike.
+        placed = place_stations(dem, table, context) if dem is not None and not (height_field and tc_field) else None
 
         observed = table.field_values(gravity_field, label=self.tr("observed gravity"))
-        if height_field:
-            heights = table.field_values(height_field, FOOT if feet else 1.0, label=self.tr("height"))
-        else:
-            heights = heights_from_dem(table, dem, context)
+        heights = self.station_heights(parameters, context, table, placed)
 
         density = self._densities(parameters, context, table, feedback)
         normal_formula = NORMAL_FORMULAS[self.parameterAsEnum(parameters, self.NORMAL_GRAVITY, context)]
@@ -260,12 +243,11 @@ class BouguerReductionAlgorithm(StationAlgorithm):
         tc_outer = np.full(len(table), np.nan)
         if tc_field:
             tc_total = table.field_values(tc_field, label=self.tr("terrain correction"))
-        elif dem is not None:
-            usable = np.isfinite(heights)
+        elif placed is not None:
             terrain = compute_terrain(
                 table,
                 heights,
-                dem,
+                placed,
                 regional,
                 inner_radius=self.parameterAsDouble(parameters, self.INNER_RADIUS, context),
                 outer_radius=self.parameterAsDouble(parameters, self.OUTER_RADIUS, context),
@@ -277,7 +259,6 @@ class BouguerReductionAlgorithm(StationAlgorithm):
                 feedback=steps,
             )
             tc_inner, tc_outer, tc_total = terrain["tc_inner"], terrain["tc_outer"], terrain["tc_total"]
-            tc_total = np.where(usable, tc_total, np.nan)
         else:
             tc_total = np.full(len(table), np.nan)
             feedback.pushWarning(

@@ -7,7 +7,6 @@ import numpy as np
 from qgis.core import (
     QgsProcessing,
     QgsProcessingException,
-    QgsProcessingMultiStepFeedback,
     QgsProcessingOutputNumber,
     QgsProcessingParameterBoolean,
     QgsProcessingParameterDefinition,
@@ -19,19 +18,17 @@ from qgis.core import (
 )
 from qgis.PyQt.QtCore import QVariant
 
-from ..stations import read_stations, write_stations
-from ..terrain_run import EXACT, compute_terrain, heights_from_dem
-from .base import StationAlgorithm
+from ..stations import write_stations
+from ..terrain_run import EXACT, compute_terrain, place_stations
+from .base import StationAlgorithm, is_unset
 from .field_checks import check_numeric_fields
 
-FOOT = 0.3048
 HAMMER_ZONE_LETTERS = "BCDEFGHIJKLM"
 
 
 class TerrainCorrectionAlgorithm(StationAlgorithm):
     """Terrain correction of gravity stations from elevation rasters."""
 
-    HEIGHT_FIELD = "HEIGHT_FIELD"
     INNERMOST_TC_FIELD = "INNERMOST_TC_FIELD"
     WATER_DENSITY = "WATER_DENSITY"
     METHOD = "METHOD"
@@ -149,33 +146,20 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         return True, ""
 
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 - QGIS API
-        source = self.parameterAsSource(parameters, self.INPUT, context)
-        if source is None:
-            raise QgsProcessingException(self.invalidSourceError(parameters, self.INPUT))
         dem = self.parameterAsRasterLayer(parameters, self.DEM, context)
         if dem is None:
             raise QgsProcessingException(self.invalidRasterError(parameters, self.DEM))
         regional = self.parameterAsRasterLayer(parameters, self.REGIONAL_DEM, context)
-        steps = QgsProcessingMultiStepFeedback(3, feedback)
-        if feedback.isCanceled():
-            # A cancel made before the multi-step feedback existed is not forwarded to it.
-            steps.cancel()
-        table = read_stations(source, context, steps)
-
-        def field(key):
-            names = self.parameterAsFields(parameters, key, context)
-            return names[0] if names else None
-
-        feet = self.parameterAsEnum(parameters, self.HEIGHT_UNITS, context) == 1
-        height_field = field(self.HEIGHT_FIELD)
-        if height_field:
-            heights = table.field_values(height_field, FOOT if feet else 1.0, label=self.tr("height"))
-        else:
-            heights = heights_from_dem(table, dem, context)
-        innermost_name = field(self.INNERMOST_TC_FIELD)
+        source, steps, table = self.read_input_stations(parameters, context, feedback)
+        placed = place_stations(dem, table, context)
+        heights = self.station_heights(parameters, context, table, placed)
+        innermost_name = self.first_field(parameters, self.INNERMOST_TC_FIELD, context)
         innermost = table.field_values(innermost_name) if innermost_name else None
-        water = parameters.get(self.WATER_DENSITY)
-        water_density = None if water in (None, "") else self.parameterAsDouble(parameters, self.WATER_DENSITY, context)
+        water_density = (
+            None
+            if is_unset(parameters.get(self.WATER_DENSITY))
+            else self.parameterAsDouble(parameters, self.WATER_DENSITY, context)
+        )
         method = self.parameterAsEnum(parameters, self.METHOD, context)
         density = self.parameterAsDouble(parameters, self.DENSITY, context)
 
@@ -183,7 +167,7 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         result = compute_terrain(
             table,
             heights,
-            dem,
+            placed,
             regional,
             inner_radius=self.parameterAsDouble(parameters, self.INNER_RADIUS, context),
             outer_radius=self.parameterAsDouble(parameters, self.OUTER_RADIUS, context),
