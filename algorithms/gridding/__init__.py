@@ -8,6 +8,7 @@ from ._geometry import (
     blank_far_cells,
     default_cell_size,
     default_grid_geometry,
+    station_spacing,
 )
 from ._mincurv import minimum_curvature
 from ._spline import biharmonic_spline
@@ -22,4 +23,5 @@ __all__ = [
     "default_grid_geometry",
     "minimum_curvature",
     "nice_contour_interval",
+    "station_spacing",
 ]

@@ -181,6 +181,40 @@ def nice_number(value: float, steps: tuple[float, ...] = (1.0, 2.0, 2.5, 5.0)) -
     return float(best)
 
 
+def station_spacing(x: npt.ArrayLike, y: npt.ArrayLike) -> float:
+    """Typical station spacing: the median distance to the nearest distinct neighbour.
+
+    Parameters
+    ----------
+    x, y : array_like
+        Station eastings and northings (CRS units). Non-finite rows are
+        dropped; coincident stations count once.
+
+    Returns
+    -------
+    float
+        Spacing in CRS units.
+
+    Raises
+    ------
+    ValueError
+        With fewer than 2 distinct stations.
+
+    Examples
+    --------
+    >>> xs, ys = np.meshgrid(np.arange(0.0, 1000.0, 100.0), np.arange(0.0, 500.0, 100.0))
+    >>> station_spacing(xs.ravel(), ys.ravel())
+    100.0
+    """
+    x, y = clean_stations(x, y)
+    points = np.unique(np.column_stack([x, y]), axis=0)
+    if points.shape[0] < 2:
+        msg = f"Need at least 2 distinct stations to estimate a spacing, got {points.shape[0]}."
+        raise ValueError(msg)
+    distances, _ = cKDTree(points).query(points, k=2)
+    return float(np.median(distances[:, 1]))
+
+
 def default_cell_size(x: npt.ArrayLike, y: npt.ArrayLike) -> float:
     """Cell size from the typical station spacing.
 
@@ -208,14 +242,7 @@ def default_cell_size(x: npt.ArrayLike, y: npt.ArrayLike) -> float:
     >>> default_cell_size(xs.ravel(), ys.ravel())
     50.0
     """
-    x, y = clean_stations(x, y)
-    points = np.unique(np.column_stack([x, y]), axis=0)
-    if points.shape[0] < 2:
-        msg = f"Need at least 2 distinct stations to estimate a cell size, got {points.shape[0]}."
-        raise ValueError(msg)
-    distances, _ = cKDTree(points).query(points, k=2)
-    spacing = float(np.median(distances[:, 1]))
-    return nice_number(spacing / 2.0)
+    return nice_number(station_spacing(x, y) / 2.0)
 
 
 def default_grid_geometry(

@@ -15,7 +15,6 @@ from pathlib import Path
 import numpy as np
 from osgeo import gdal, ogr, osr
 from qgis.core import (
-    NULL,
     QgsFeature,
     QgsFeatureSink,
     QgsField,
@@ -40,7 +39,7 @@ from qgis.PyQt.QtCore import QVariant
 
 from ..stations import read_stations
 from ..styling import attach_contour_style, attach_raster_style
-from .base import ReliefGravityAlgorithm
+from .base import ReliefGravityAlgorithm, is_unset
 from .field_checks import check_numeric_fields
 
 gdal.UseExceptions()
@@ -53,11 +52,6 @@ NODATA = -99999.0
 #: neighbouring stations (common practice, no source: a cell more than about
 #: three station spacings from any station is extrapolation, not data).
 BLANK_SPACINGS = 3.0
-
-
-def _is_unset(value) -> bool:
-    """True for an optional parameter left empty (None, NULL or '')."""
-    return value is None or value == NULL or (isinstance(value, str) and not value.strip())
 
 
 class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
@@ -217,7 +211,7 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
 
     def _optional_double(self, parameters, key, context):
         """Value of an optional number, or None when left empty."""
-        if _is_unset(parameters.get(key)):
+        if is_unset(parameters.get(key)):
             return None
         return self.parameterAsDouble(parameters, key, context)
 
@@ -235,7 +229,7 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
             raise QgsProcessingException(problem)
         field_name = self.parameterAsFields(parameters, self.FIELD, context)[0]
 
-        want_contours = self.CONTOURS in parameters and not _is_unset(parameters.get(self.CONTOURS))
+        want_contours = self.CONTOURS in parameters and not is_unset(parameters.get(self.CONTOURS))
         steps = QgsProcessingMultiStepFeedback(4 if want_contours else 3, feedback)
         table = read_stations(source, context, steps)
         values = table.field_values(field_name)
@@ -259,7 +253,7 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
         if cell_size is not None and cell_size <= 0:
             cell_size = None
         extent = None
-        if not _is_unset(parameters.get(self.EXTENT)):
+        if not is_unset(parameters.get(self.EXTENT)):
             rect = self.parameterAsExtent(parameters, self.EXTENT, context, crs)
             if not rect.isNull() and not rect.isEmpty():
                 extent = (rect.xMinimum(), rect.xMaximum(), rect.yMinimum(), rect.yMaximum())
@@ -284,7 +278,7 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
                     gridding.minimum_curvature(x, y, v, geometry, tension=tension), dtype=float
                 )
                 if blank is None:
-                    blank = BLANK_SPACINGS * _median_spacing(x, y)
+                    blank = BLANK_SPACINGS * gridding.station_spacing(x, y)
                     feedback.pushInfo(
                         self.tr("Automatic blanking distance: {:.6g} {} (3 station spacings).").format(blank, units)
                     )
@@ -363,17 +357,6 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
                 )
             steps.setProgress(100)
         return results
-
-
-def _median_spacing(x: np.ndarray, y: np.ndarray) -> float:
-    """Median distance from each station to its nearest distinct neighbour (CRS units)."""
-    from scipy.spatial import cKDTree
-
-    points = np.unique(np.column_stack([x, y]), axis=0)
-    if points.shape[0] < 2:
-        raise ValueError("fewer than 2 distinct station positions")
-    distances, _ = cKDTree(points).query(points, k=2)
-    return float(np.median(distances[:, 1]))
 
 
 def _driver_for(path: str) -> str:
