@@ -200,6 +200,19 @@ def _lafehr_lambda(delta: np.ndarray, alpha: float) -> np.ndarray:
     return ((d + f * delta + delta**2) * root + p + m * np.log(n / (f - delta + root))) / 3.0
 
 
+def _curvature_thickness(h: np.ndarray, cap_radius: float, earth_radius: float) -> np.ndarray:
+    """LaFehr's (1991) cap minus slab as an equivalent slab thickness, mu h - lambda R (m).
+
+    Shared by the cap (slab thickness h plus this) and Bullard B (this alone),
+    so B is formed analytically rather than as a difference of two numbers.
+    """
+    radius = earth_radius + h
+    eta = h / radius
+    mu = eta * eta / 3.0 - eta
+    lam = _lafehr_lambda(earth_radius / radius, cap_radius / earth_radius)
+    return mu * h - lam * radius
+
+
 def spherical_cap_correction(
     height_m: npt.ArrayLike,
     density: npt.ArrayLike = 2670.0,
@@ -274,11 +287,8 @@ def spherical_cap_correction(
     """
     h = np.asarray(height_m, dtype=np.float64)
     rho = np.asarray(density, dtype=np.float64)
-    radius = earth_radius + h
-    eta = h / radius
-    mu = eta * eta / 3.0 - eta
-    lam = _lafehr_lambda(earth_radius / radius, cap_radius / earth_radius)
-    return 2.0 * np.pi * gravitational_constant * rho * ((1.0 + mu) * h - lam * radius) * SI_TO_MGAL
+    thickness = h + _curvature_thickness(h, cap_radius, earth_radius)
+    return 2.0 * np.pi * gravitational_constant * rho * thickness * SI_TO_MGAL
 
 
 def curvature_correction(
@@ -321,11 +331,8 @@ def curvature_correction(
     """
     h = np.asarray(height_m, dtype=np.float64)
     rho = np.asarray(density, dtype=np.float64)
-    radius = earth_radius + h
-    eta = h / radius
-    mu = eta * eta / 3.0 - eta
-    lam = _lafehr_lambda(earth_radius / radius, cap_radius / earth_radius)
-    return 2.0 * np.pi * gravitational_constant * rho * (mu * h - lam * radius) * SI_TO_MGAL
+    thickness = _curvature_thickness(h, cap_radius, earth_radius)
+    return 2.0 * np.pi * gravitational_constant * rho * thickness * SI_TO_MGAL
 
 
 def density_to_kg_per_m3(value: npt.ArrayLike, unit: str = "kg/m3") -> np.ndarray:
