@@ -3,6 +3,7 @@
 
 from __future__ import annotations
 
+import math
 import os
 import shutil
 import subprocess
@@ -34,37 +35,51 @@ def write_dem(path: Path, heights: np.ndarray, west: float, north: float, cell: 
     return path
 
 
-def write_points(path: Path, rows: list[dict], epsg: int | None = 32632, fields=None, layer="stations"):
-    """Write a GeoPackage point layer; ``rows`` hold 'x', 'y' and attributes."""
+def write_points(path: Path, xs, ys, columns=None, epsg: int | None = 32632, types=None, layer="stations"):
+    """Write a GeoPackage point layer and return its path as a string.
+
+    ``columns`` maps a field name to one value per point (None or NaN is
+    NULL); a field's type is ``types[name]`` (an OGR field type) or, when not
+    given, text for string values and real otherwise. ``epsg=None`` writes
+    the layer without a CRS.
+    """
     from osgeo import ogr, osr
 
-    driver = ogr.GetDriverByName("GPKG")
+    columns = columns or {}
+    types = types or {}
     if path.exists():
         path.unlink()
-    datasource = driver.CreateDataSource(str(path))
     srs = None
     if epsg is not None:
         srs = osr.SpatialReference()
         srs.ImportFromEPSG(epsg)
         srs.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)
+    datasource = ogr.GetDriverByName("GPKG").CreateDataSource(str(path))
     lyr = datasource.CreateLayer(layer, srs, ogr.wkbPoint)
-    fields = fields or {}
-    for name, kind in fields.items():
+    for name, values in columns.items():
+        kind = types.get(name, ogr.OFTString if any(isinstance(v, str) for v in values) else ogr.OFTReal)
         lyr.CreateField(ogr.FieldDefn(name, kind))
-    for row in rows:
+    for i, (x, y) in enumerate(zip(xs, ys)):
         feature = ogr.Feature(lyr.GetLayerDefn())
-        for name in fields:
-            value = row.get(name)
-            if value is None:
+        for name, values in columns.items():
+            value = values[i]
+            if value is None or (isinstance(value, float) and math.isnan(value)):
                 feature.SetFieldNull(name)
             else:
                 feature.SetField(name, value)
         geometry = ogr.Geometry(ogr.wkbPoint)
-        geometry.AddPoint_2D(row["x"], row["y"])
+        geometry.AddPoint_2D(float(x), float(y))
         feature.SetGeometry(geometry)
         lyr.CreateFeature(feature)
     datasource = None
-    return path
+    return str(path)
+
+
+def write_station_rows(path: Path, rows: list[dict], epsg: int | None = 32632, fields=None):
+    """Row-wise form of :func:`write_points`: dicts with 'x', 'y' and the fields."""
+    fields = fields or station_fields()
+    columns = {name: [row.get(name) for row in rows] for name in fields}
+    return Path(write_points(path, [r["x"] for r in rows], [r["y"] for r in rows], columns, epsg=epsg, types=fields))
 
 
 @pytest.fixture()
@@ -82,8 +97,6 @@ def hill_dem(tmp_path):
 @pytest.fixture()
 def station_rows():
     """Twelve invented stations on and around the hill, with edge cases."""
-    from osgeo import ogr  # noqa: F401
-
     rng = np.random.default_rng(7)
     rows = []
     for i in range(12):
@@ -104,9 +117,6 @@ def station_rows():
     return rows
 
 
-STATION_FIELDS = None
-
-
 def station_fields():
     from osgeo import ogr
 
@@ -122,7 +132,7 @@ def station_fields():
 
 @pytest.fixture()
 def stations_gpkg(tmp_path, station_rows):
-    return write_points(tmp_path / "stations.gpkg", station_rows, fields=station_fields())
+    return write_station_rows(tmp_path / "stations.gpkg", station_rows)
 
 
 @pytest.fixture()
@@ -130,7 +140,7 @@ def make_points(tmp_path):
     """Factory: make_points(rows, epsg=..., name=...) -> path of a GeoPackage."""
 
     def factory(rows, epsg=32632, name="pts.gpkg", fields=None):
-        return write_points(tmp_path / name, rows, epsg=epsg, fields=fields or station_fields())
+        return write_station_rows(tmp_path / name, rows, epsg=epsg, fields=fields)
 
     return factory
 
@@ -174,7 +184,13 @@ def qgis_process_env(tmp_path_factory):
     return executable, env
 
 
-@pytest.fixture()
+@pytest.fixture(scope="session")
 def dem_writer():
     """The GeoTIFF writer above, for tests that build their own rasters."""
     return write_dem
+
+
+@pytest.fixture(scope="session")
+def points_writer():
+    """The GeoPackage point writer above, for tests that build their own layers."""
+    return write_points

@@ -12,7 +12,7 @@ cell.
 
 from __future__ import annotations
 
-import math
+import functools
 
 import numpy as np
 import pytest
@@ -30,27 +30,10 @@ def plane(x, y):
     return a + b * (np.asarray(x) - 500_000.0) + c * (np.asarray(y) - 5_000_000.0)
 
 
-def write_points(path, xs, ys, columns, epsg=EPSG_PROJECTED):
-    """A point GeoPackage with float (or string) attribute columns; None = NULL."""
-    srs = osr.SpatialReference()
-    srs.ImportFromEPSG(epsg)
-    srs.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)
-    ds = ogr.GetDriverByName("GPKG").CreateDataSource(str(path))
-    layer = ds.CreateLayer("stations", srs, ogr.wkbPoint)
-    for name, values in columns.items():
-        kind = ogr.OFTString if isinstance(values[0], str) else ogr.OFTReal
-        layer.CreateField(ogr.FieldDefn(name, kind))
-    for i, (x, y) in enumerate(zip(xs, ys)):
-        feature = ogr.Feature(layer.GetLayerDefn())
-        point = ogr.Geometry(ogr.wkbPoint)
-        point.AddPoint_2D(float(x), float(y))
-        feature.SetGeometry(point)
-        for name, values in columns.items():
-            if values[i] is not None and not (isinstance(values[i], float) and math.isnan(values[i])):
-                feature.SetField(name, values[i])
-        layer.CreateFeature(feature)
-    ds = None
-    return str(path)
+@pytest.fixture(scope="session")
+def write_points(points_writer):
+    """The shared point-layer writer, in this module's projected CRS by default."""
+    return functools.partial(points_writer, epsg=EPSG_PROJECTED)
 
 
 @pytest.fixture(scope="module")
@@ -62,24 +45,12 @@ def station_xy():
 
 
 @pytest.fixture()
-def plane_stations(tmp_path, station_xy):
+def plane_stations(tmp_path, station_xy, write_points):
     xs, ys = station_xy
     values = list(plane(xs, ys))
     values[3] = None  # NULL: must be skipped and counted
     values[10] = None
     return write_points(tmp_path / "plane.gpkg", xs, ys, {"cba": values, "label": ["s"] * len(xs)})
-
-
-class Messages(QgsProcessingFeedback):
-    def __init__(self):
-        super().__init__()
-        self.info, self.warnings = [], []
-
-    def pushInfo(self, text):  # noqa: N802 - QGIS API
-        self.info.append(text)
-
-    def pushWarning(self, text):  # noqa: N802 - QGIS API
-        self.warnings.append(text)
 
 
 def read_raster(path):
@@ -92,11 +63,11 @@ def test_provider_lists_algorithm(provider):
     assert provider.algorithm("anomalygrid") is not None
 
 
-def test_plane_georeference_nodata_crs(provider, plane_stations, tmp_path):
+def test_plane_georeference_nodata_crs(provider, plane_stations, tmp_path, collecting_feedback):
     import processing
 
     out = tmp_path / "grid.tif"
-    feedback = Messages()
+    feedback = collecting_feedback
     # Extent edges are whole multiples of the 100 m pixel, so the grid must be
     # exactly this box: 3200 m x 2200 m -> 32 columns x 22 rows.
     result = processing.run(
@@ -114,7 +85,7 @@ def test_plane_georeference_nodata_crs(provider, plane_stations, tmp_path):
     )
     assert result["OUTPUT"] == str(out)
     assert result["STATIONS_GRIDDED"] == 58
-    assert any("2 of 60 stations skipped" in m for m in feedback.info)
+    assert any("2 of 60 stations skipped" in m for m in feedback.infos)
     ds, band, data = read_raster(out)
     assert band.DataType == gdal.GDT_Float32
     assert band.GetNoDataValue() == -99999.0
@@ -134,7 +105,7 @@ def test_plane_georeference_nodata_crs(provider, plane_stations, tmp_path):
     np.testing.assert_allclose(data, plane(xx, yy), atol=2e-4)
 
 
-def test_blanking_and_auto_pixel(provider, tmp_path):
+def test_blanking_and_auto_pixel(provider, tmp_path, write_points):
     import processing
     from scipy.spatial import cKDTree
 
@@ -180,7 +151,7 @@ def test_automatic_blanking_is_three_spacings(provider, plane_stations, tmp_path
     assert result["BLANK_DISTANCE_USED"] == pytest.approx(3.0 * spacing)
 
 
-def test_contours_follow_the_plane(provider, tmp_path):
+def test_contours_follow_the_plane(provider, tmp_path, write_points):
     import processing
 
     from relief_gravity.algorithms.gridding import nice_contour_interval
@@ -237,7 +208,7 @@ def test_fixed_contour_interval(provider, plane_stations, tmp_path):
     assert levels and all((2 * v) == round(2 * v) for v in levels)
 
 
-def test_fewer_than_three_values_refused(provider, tmp_path):
+def test_fewer_than_three_values_refused(provider, tmp_path, write_points):
     import processing
 
     path = write_points(
@@ -266,7 +237,7 @@ def test_field_checks(provider, plane_stations, tmp_path):
         )
 
 
-def test_geographic_crs_refused(provider, tmp_path):
+def test_geographic_crs_refused(provider, tmp_path, write_points):
     import processing
 
     path = write_points(

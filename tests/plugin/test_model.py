@@ -30,19 +30,12 @@ def dem_height(x, y):
 
 
 @pytest.fixture(scope="module")
-def survey(tmp_path_factory):
+def survey(tmp_path_factory, dem_writer, points_writer):
     folder = tmp_path_factory.mktemp("survey")
-    srs = osr.SpatialReference()
-    srs.ImportFromEPSG(EPSG)
     xc = WEST + (np.arange(N) + 0.5) * CELL
     yc = NORTH - (np.arange(N) + 0.5) * CELL
     xx, yy = np.meshgrid(xc, yc)
-    dem = gdal.GetDriverByName("GTiff").Create(str(folder / "dem.tif"), N, N, 1, gdal.GDT_Float32)
-    dem.SetGeoTransform((WEST, CELL, 0.0, NORTH, 0.0, -CELL))
-    dem.SetProjection(srs.ExportToWkt())
-    dem.GetRasterBand(1).SetNoDataValue(-9999.0)
-    dem.GetRasterBand(1).WriteArray(dem_height(xx, yy).astype(np.float32))
-    dem = None
+    dem_writer(folder / "dem.tif", dem_height(xx, yy), WEST, NORTH, CELL, epsg=EPSG, nodata=-9999.0)
 
     rng = np.random.default_rng(11)
     x = WEST + 600.0 + rng.uniform(0, 2800, 60)
@@ -51,19 +44,7 @@ def survey(tmp_path_factory):
     # Invented observed gravity: a plausible mid-latitude value, the free-air
     # fall with height and a buried mass deficit of -6 mGal.
     g_obs = 980_700.0 - 0.2 * h - 6.0 * np.exp(-((x - 501_500.0) ** 2 + (y - 5_001_500.0) ** 2) / (2 * 600.0**2))
-    ds = ogr.GetDriverByName("GPKG").CreateDataSource(str(folder / "stations.gpkg"))
-    layer = ds.CreateLayer("stations", srs, ogr.wkbPoint)
-    layer.CreateField(ogr.FieldDefn("g_obs", ogr.OFTReal))
-    layer.CreateField(ogr.FieldDefn("height", ogr.OFTReal))
-    for xi, yi, gi, hi in zip(x, y, g_obs, h):
-        feature = ogr.Feature(layer.GetLayerDefn())
-        point = ogr.Geometry(ogr.wkbPoint)
-        point.AddPoint_2D(float(xi), float(yi))
-        feature.SetGeometry(point)
-        feature.SetField("g_obs", float(gi))
-        feature.SetField("height", float(hi))
-        layer.CreateFeature(feature)
-    ds = None
+    points_writer(folder / "stations.gpkg", x, y, {"g_obs": [float(v) for v in g_obs], "height": [float(v) for v in h]}, epsg=EPSG)
     return folder
 
 

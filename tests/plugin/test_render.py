@@ -10,13 +10,13 @@ from __future__ import annotations
 
 import numpy as np
 import pytest
-from osgeo import gdal, ogr, osr
+from osgeo import gdal
 
 gdal.UseExceptions()
 
 
 @pytest.fixture(scope="module")
-def anomaly_stations(tmp_path_factory):
+def anomaly_stations(tmp_path_factory, points_writer):
     folder = tmp_path_factory.mktemp("render")
     rng = np.random.default_rng(5)
     x = 500_000.0 + rng.uniform(0, 6000, 120)
@@ -26,19 +26,7 @@ def anomaly_stations(tmp_path_factory):
         + 8.0 * np.exp(-((x - 504_500) ** 2 + (y - 5_001_500) ** 2) / (2 * 700.0**2))
         + 0.001 * (x - 500_000)
     )
-    srs = osr.SpatialReference()
-    srs.ImportFromEPSG(32633)
-    ds = ogr.GetDriverByName("GPKG").CreateDataSource(str(folder / "stations.gpkg"))
-    layer = ds.CreateLayer("stations", srs, ogr.wkbPoint)
-    layer.CreateField(ogr.FieldDefn("cba", ogr.OFTReal))
-    for xi, yi, vi in zip(x, y, cba):
-        feature = ogr.Feature(layer.GetLayerDefn())
-        point = ogr.Geometry(ogr.wkbPoint)
-        point.AddPoint_2D(float(xi), float(yi))
-        feature.SetGeometry(point)
-        feature.SetField("cba", float(vi))
-        layer.CreateFeature(feature)
-    ds = None
+    points_writer(folder / "stations.gpkg", x, y, {"cba": [float(v) for v in cba]}, epsg=32633)
     return folder
 
 
