@@ -18,6 +18,7 @@ from qgis.core import (
 )
 from qgis.PyQt.QtCore import QVariant
 
+from ...algorithms import REDUCTION_FIELDS, reduce_gravity
 from ..stations import write_stations
 from ..terrain_run import EXACT, compute_terrain, place_stations
 from .base import StationAlgorithm
@@ -27,20 +28,10 @@ NORMAL_FORMULAS = ("grs80", "wgs84", "1967")
 HEIGHT_FORMULAS = ("second_order", "first_order")
 PLAUSIBLE_DENSITY = (1000.0, 3500.0)
 
-#: Fields added to the copy of the station layer (DESIGN.md), all mGal but qc_flag.
-RESULT_FIELDS = (
-    "normal_g",
-    "height_corr",
-    "atmos_corr",
-    "slab_corr",
-    "curv_corr",
-    "tc_inner",
-    "tc_outer",
-    "tc_total",
-    "faa",
-    "sba",
-    "cba",
-)
+#: Fields added to the copy of the station layer (DESIGN.md), all mGal but
+#: qc_flag: the reduction's fields with the two terrain zones before their total.
+_TC_TOTAL_AT = REDUCTION_FIELDS.index("tc_total")
+RESULT_FIELDS = REDUCTION_FIELDS[:_TC_TOTAL_AT] + ("tc_inner", "tc_outer") + REDUCTION_FIELDS[_TC_TOTAL_AT:]
 
 
 class BouguerReductionAlgorithm(StationAlgorithm):
@@ -217,8 +208,6 @@ class BouguerReductionAlgorithm(StationAlgorithm):
         return True, ""
 
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 - QGIS API
-        from ...algorithms import reduce_gravity
-
         source, steps, table = self.read_input_stations(parameters, context, feedback)
         gravity_field = self.first_field(parameters, self.GRAVITY_FIELD, context)
         height_field = self.first_field(parameters, self.HEIGHT_FIELD, context)
