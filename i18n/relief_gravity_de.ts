@@ -246,174 +246,174 @@
   <context>
     <name>BouguerReductionAlgorithm</name>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="145" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="136" />
       <source>1967 formula (legacy databases)</source>
       <translation>Formel von 1967 (ältere Datenbanken)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="73" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="64" />
       <source>&lt;p&gt;Adds normal gravity, every correction and the free-air (&lt;b&gt;faa&lt;/b&gt;), simple Bouguer (&lt;b&gt;sba&lt;/b&gt;) and complete Bouguer (&lt;b&gt;cba&lt;/b&gt;) anomalies to a copy of a station point layer. All values in mGal.&lt;/p&gt;&lt;p&gt;Default standard: Hinze et al. (2005): GRS80 normal gravity, second-order height correction, atmospheric correction, spherical-cap Bouguer correction to 166.7 km (slab + curvature, LaFehr 1991) and terrain correction to 166.7 km. Heights are heights above the ellipsoid. The 1967 formula, the first-order 0.3086 mGal/m gradient and a flat slab are options to reproduce legacy databases.&lt;/p&gt;&lt;p&gt;faa = g_obs - normal_g + height_corr + atmos_corr; sba = faa - slab_corr - curv_corr; cba = sba + tc_total.&lt;/p&gt;&lt;p&gt;The terrain correction comes from the terrain-correction field when one is chosen, otherwise from the elevation raster with the exact prism engine (inner zone to the inner radius, outer zone to the outer radius); without either, cba is left empty.&lt;/p&gt;&lt;p&gt;Station height: from the height field, or sampled from the elevation raster when no field is chosen (flagged in qc_flag). A station that cannot be reduced keeps its row with empty values and a reason in qc_flag.&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</source>
       <translation type="unfinished" />
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="163" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="154" />
       <source>Apply the atmospheric correction</source>
       <translation>Atmosphärenkorrektion anbringen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="64" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="55" />
       <source>Bouguer reduction (free-air, simple and complete Bouguer anomalies)</source>
       <translation>Bouguer-Reduktion (Freiluft-, einfache und vollständige Bouguer-Anomalie)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="216" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="207" />
       <source>Choose a station height field or an elevation raster to sample heights from.</source>
       <translation>Wählen Sie ein Feld der Stationshöhe oder ein Höhenraster, aus dem Höhen entnommen werden.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="117" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="108" />
       <source>Elevation raster (DEM, metres)</source>
       <translation>Höhenraster (DGM, Meter)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="176" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="167" />
       <source>Existing terrain-correction field (mGal)</source>
       <translation>Vorhandenes Feld der Geländekorrektion (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="156" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="147" />
       <source>First order, 0.3086 mGal/m</source>
       <translation>Erster Ordnung, 0,3086 mGal/m</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="143" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="134" />
       <source>GRS80 (Somigliana closed form)</source>
       <translation>GRS80 (geschlossene Formel nach Somigliana)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="153" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="144" />
       <source>Height (free-air) correction</source>
       <translation>Höhenkorrektion (Freiluft)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="265" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="254" />
       <source>No terrain-correction field and no elevation raster: cba is left empty.</source>
       <translation>Weder Geländekorrektionsfeld noch Höhenraster: cba bleibt leer.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="141" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="132" />
       <source>Normal gravity</source>
       <translation>Normalschwere</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="100" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="91" />
       <source>Observed gravity field (mGal)</source>
       <translation>Feld der gemessenen Schwere (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="185" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="176" />
       <source>Reduced stations</source>
       <translation>Reduzierte Stationen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="67" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="58" />
       <source>Reduces observed gravity at stations to free-air, simple and complete Bouguer anomalies.</source>
       <translation>Reduziert die gemessene Schwere an Stationen auf Freiluft-, einfache und vollständige Bouguer-Anomalien.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="124" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="115" />
       <source>Reduction density field, per station</source>
       <translation>Feld der Reduktionsdichte je Station</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="155" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="146" />
       <source>Second order, latitude dependent (Hinze et al. 2005)</source>
       <translation>Zweiter Ordnung, breitenabhängig (Hinze et al. 2005)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="169" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="160" />
       <source>Spherical cap to 166.7 km (add the curvature correction to the slab)</source>
       <translation>Kugelkappe bis 166,7 km (Krümmungskorrektion zur Platte)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="108" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="99" />
       <source>Station height field (above the ellipsoid; empty = sample the elevation raster)</source>
       <translation>Feld der Stationshöhe (über dem Ellipsoid; leer = aus dem Höhenraster)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="189" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="180" />
       <source>Stations flagged</source>
       <translation>Markierte Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="188" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="179" />
       <source>Stations reduced</source>
       <translation>Reduzierte Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="132" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="123" />
       <source>Units of the density field</source>
       <translation>Einheit des Dichtefeldes</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="144" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="135" />
       <source>WGS84 (Somigliana closed form)</source>
       <translation>WGS84 (geschlossene Formel nach Somigliana)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="204" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="195" />
       <source>density</source>
       <translation>Dichte</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="309" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="298" />
       <source>density missing, default used</source>
       <translation>Dichte fehlt, Vorgabe verwendet</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="133" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="124" />
       <source>g/cm³</source>
       <translation>g/cm³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="70" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="61" />
       <source>gravity,bouguer,free-air,normal gravity,terrain correction,anomaly,GRS80</source>
       <translation>Schwere,Bouguer,Freiluft,Normalschwere,Geländekorrektion,Anomalie,GRS80</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="133" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="124" />
       <source>kg/m³</source>
       <translation>kg/m³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="202" />
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="232" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="193" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="221" />
       <source>observed gravity</source>
       <translation>gemessene Schwere</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="203" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="194" />
       <source>station height</source>
       <translation>Stationshöhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="205" />
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="245" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="196" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="234" />
       <source>terrain correction</source>
       <translation>Geländekorrektion</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="319" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="308" />
       <source>unusual density</source>
       <translation>ungewöhnliche Dichte</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="315" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="304" />
       <source>{} station(s) have a reduction density outside {}-{} kg/m³ (e.g. {}); check the units.</source>
       <translation>{} Station(en) haben eine Reduktionsdichte außerhalb {}-{} kg/m³ (z. B. {}); prüfen Sie die Einheit.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="291" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="280" />
       <source>{} stations: {} with a free-air anomaly, {} with a complete Bouguer anomaly, {} flagged.</source>
       <translation>{} Stationen: {} mit Freiluftanomalie, {} mit vollständiger Bouguer-Anomalie, {} markiert.</translation>
     </message>
