@@ -7,6 +7,7 @@ from ._grid import ElevationGrid
 from ._hammer import HAMMER_ZONES, HammerResult, HammerZone, hammer_terrain_correction, ring_sector_correction
 from ._kernels import column_terrain_effect, line_mass_gravity
 from ._prism import prism_gravity
+from ._sampling import bilinear_from_window, bilinear_setup, inside_extent, sample_bilinear, station_cells
 
 __all__ = [
     "ElevationGrid",
@@ -20,6 +21,11 @@ __all__ = [
     "line_mass_gravity",
     "plane_terrain_effect",
     "prism_gravity",
+    "bilinear_from_window",
+    "bilinear_setup",
+    "inside_extent",
+    "sample_bilinear",
+    "station_cells",
     "ring_sector_correction",
     "terrain_correction",
 ]
