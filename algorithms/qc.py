@@ -81,6 +81,19 @@ VOCABULARY = {
         ("tc_partial", WARNING, "The elevation rasters do not cover the whole correction area (see tc_cover)."),
         ("tc_no_data_zones", WARNING, "Some ring-and-sector compartments had no elevation data and count as flat."),
     ),
+    # --- terrain correction: ring-and-sector (Hammer 1939) ------------------
+    **_entries(
+        (
+            "tc_regional_fill",
+            INFO,
+            "Ring-and-sector: the regional raster gave heights where the fine raster has no data inside its extent.",
+        ),
+        (
+            "tc_no_slope",
+            WARNING,
+            "Ring-and-sector: no elevation data at the station, so the zones finer than a DEM cell count as flat.",
+        ),
+    ),
 }
 
 

@@ -69,12 +69,15 @@ def compute_terrain(
     method: int,
     context,
     feedback,
+    zones: str = "BCDEFGHIJKLM",
 ) -> dict:
     """Terrain correction of every station, in mGal, with flags added to ``table``.
 
     The engine runs at one reference density; the terrain correction is linear
     in density, so per-station densities scale the result (except where water
     cells take their own density, where the reference density is used as given).
+    ``zones`` (ring-and-sector only): contiguous Hammer zone letters or a range
+    such as "B-M".
     """
     from ..algorithms.terrain import TerrainCancelled, hammer_terrain_correction, terrain_correction
 
@@ -103,21 +106,25 @@ def compute_terrain(
         engine_innermost = innermost_tc * reference_density / np.where(density > 0, density, np.nan)
     try:
         if method == RING_SECTOR:
+            # --- ring-and-sector (Hammer 1939): algorithms/terrain/_hammer.py ---
             hammer = hammer_terrain_correction(
                 x,
                 y,
                 heights,
                 fine.elevation_grid(),
                 density=reference_density,
+                zones=zones,
+                regional=regional_grid,
+                inner_radius=inner_radius,
                 progress=progress,
                 is_cancelled=feedback.isCanceled,
             )
             table.flag_each(hammer.flags)
-            total = np.asarray(hammer.total, dtype=float)
-            result["tc_inner"] = np.full(n, np.nan)
-            result["tc_outer"] = np.full(n, np.nan)
-            result["tc_total"] = total
-            result["zones"] = {k: np.asarray(v, dtype=float) for k, v in hammer.zones.items()}
+            for key in ("tc_inner", "tc_outer", "tc_total"):
+                result[key] = np.array(getattr(hammer, key), dtype=float)
+            result["zones"] = {k: np.array(v, dtype=float) for k, v in hammer.zones.items()}
+            result["plane_zones"] = hammer.plane_zones
+            # --- end ring-and-sector ---
         else:
             engine = terrain_correction(
                 x,
@@ -149,8 +156,9 @@ def compute_terrain(
         for key, values in result.get("zones", {}).items():
             result["zones"][key] = values * scale
     if innermost_tc is not None and method == RING_SECTOR:
-        # Hammer's zone A (station to 2 m) is the field-estimated part.
+        # Hammer's zone A (station to 2 m) is the field-estimated part (inner zone).
         extra = np.where(np.isfinite(innermost_tc), innermost_tc, 0.0)
+        result["tc_inner"] = result["tc_inner"] + extra
         result["tc_total"] = result["tc_total"] + extra
     return result
 

@@ -4,7 +4,17 @@
 from ._engine import TerrainResult, plane_terrain_effect, terrain_correction
 from ._errors import TerrainCancelled
 from ._grid import ElevationGrid
-from ._hammer import HAMMER_ZONES, HammerResult, HammerZone, hammer_terrain_correction, ring_sector_correction
+from ._hammer import HammerResult, hammer_terrain_correction, station_gradient
+from ._hammer_zones import (
+    HAMMER_ZONES,
+    HammerZone,
+    parse_zones,
+    plane_ring_correction,
+    reach_sentence,
+    resolved_by,
+    ring_sector_correction,
+    zone_label,
+)
 from ._kernels import column_terrain_effect, line_mass_gravity
 from ._prism import prism_gravity
 from ._sampling import bilinear_from_window, bilinear_setup, inside_extent, sample_bilinear, station_cells
@@ -27,5 +37,11 @@ __all__ = [
     "sample_bilinear",
     "station_cells",
     "ring_sector_correction",
+    "parse_zones",
+    "plane_ring_correction",
+    "reach_sentence",
+    "resolved_by",
+    "station_gradient",
+    "zone_label",
     "terrain_correction",
 ]

@@ -1,135 +1,91 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
-"""Ring-and-sector terrain correction (Hammer 1939) with heights from a DEM.
+"""Ring-and-sector terrain correction (Hammer 1939) with heights from DEMs.
 
 This exists so that DEM-driven results can be compared with chart-based field
-practice; the exact zone engine stays the default method.
+practice; the exact zone engine stays the default method. The rules (zone
+table and its source, sampling, regional fallback, sloping plane for zones
+finer than a DEM cell, inner/outer split) are written out in
+``docs/hammer.md``.
 """
 
 from __future__ import annotations
 
 import math
-from dataclasses import dataclass, field
-from typing import Callable, Dict, List, NamedTuple, Optional, Tuple
+from dataclasses import dataclass
+from types import MappingProxyType
+from typing import Callable, List, Mapping, Optional, Tuple
 
 import numpy as np
 import numpy.typing as npt
 
-from ..constants import FOOT, GRAVITATIONAL_CONSTANT, MEAN_EARTH_RADIUS, SI_TO_MGAL
-from ._engine import COVERAGE_FLAG_BELOW, _inside
+from ..constants import MEAN_EARTH_RADIUS
 from ._errors import TerrainCancelled
 from ._grid import ElevationGrid
-
-
-class HammerZone(NamedTuple):
-    """One ring of the Hammer chart: radii in metres, number of compartments."""
-
-    letter: str
-    inner: float
-    outer: float
-    compartments: int
-
-
-#: Zones B-M of Hammer (1939): radii in feet converted with the international
-#: foot, and compartments per ring. FROM MEMORY (REFERENCES.md §5.1, tag [M]):
-#: not verified against Hammer's paper; only the outer radius (about 13.6
-#: miles, 21.9 km) is consistent with a verified source (Sandberg 1959).
-HAMMER_ZONES: Tuple[HammerZone, ...] = tuple(
-    HammerZone(letter, r1 * FOOT, r2 * FOOT, n)
-    for letter, r1, r2, n in (
-        ("B", 6.56, 54.6, 4),
-        ("C", 54.6, 175.0, 6),
-        ("D", 175.0, 558.0, 6),
-        ("E", 558.0, 1280.0, 8),
-        ("F", 1280.0, 2936.0, 8),
-        ("G", 2936.0, 5018.0, 12),
-        ("H", 5018.0, 8578.0, 12),
-        ("I", 8578.0, 14612.0, 12),
-        ("J", 14612.0, 21826.0, 16),
-        ("K", 21826.0, 32490.0, 16),
-        ("L", 32490.0, 48365.0, 16),
-        ("M", 48365.0, 71996.0, 16),
-    )
+from ._hammer_zones import (
+    HammerZone,
+    parse_zones,
+    plane_ring_correction,
+    resolved_by,
+    ring_sector_correction,
 )
+from ._sampling import MAX_WINDOW_CELLS, bilinear_from_window, bilinear_setup, inside_extent, sample_bilinear
 
 #: Most sample points per compartment along the radius and along the arc.
 MAX_SAMPLES = 24
 
+#: Coverage below this fraction is flagged ``tc_partial`` (the exact engine's
+#: threshold, restated so this module does not reach into the engine).
+COVERAGE_FLAG_BELOW = 0.99
 
-def ring_sector_correction(
-    r1: float, r2: float, n_compartments: int, relief: npt.ArrayLike, density: float = 2670.0
-) -> np.ndarray:
-    """Terrain correction of one ring compartment of uniform relief, in mGal.
-
-    Parameters
-    ----------
-    r1, r2 : float
-        Inner and outer radius of the ring in metres (0 <= r1 < r2).
-    n_compartments : int
-        Number of equal compartments the ring is divided into.
-    relief : array_like
-        Mean height of the compartment minus the station height, in metres
-        (either sign gives a positive correction).
-    density : float
-        Density in kg/m^3.
-
-    Returns
-    -------
-    numpy.ndarray
-        Correction of one compartment in mGal (>= 0).
-
-    Notes
-    -----
-    A flat-topped compartment of a cylinder ring (REFERENCES.md §5.1):
-
-    .. math:: T = \\frac{2\\pi G\\rho}{n}\\left[(r_2 - r_1) + \\sqrt{r_1^2 + z^2}
-              - \\sqrt{r_2^2 + z^2}\\right].
-
-    References
-    ----------
-    Hammer, S., 1939, Terrain corrections for gravimeter stations,
-    Geophysics 4, 184-194.
-
-    Examples
-    --------
-    Ring 1280-2936 ft, 8 compartments, relief 200 ft, 2.0 g/cm^3 (about
-    0.03 mGal, common practice):
-
-    >>> print(f"{float(ring_sector_correction(390.144, 894.893, 8, 60.96, 2000.0)):.4f}")
-    0.0279
-    """
-    if not (0 <= r1 < r2):
-        raise ValueError(f"need 0 <= r1 < r2, got {r1}, {r2}")
-    if n_compartments < 1:
-        raise ValueError(f"n_compartments must be >= 1, got {n_compartments}")
-    z = np.asarray(relief, dtype=float)
-    z2 = z * z
-    # (r2 - r1) + sqrt(r1^2+z^2) - sqrt(r2^2+z^2) written without cancellation.
-    a1, a2 = np.sqrt(r1 * r1 + z2), np.sqrt(r2 * r2 + z2)
-    with np.errstate(divide="ignore", invalid="ignore"):
-        bracket = np.where(z2 > 0, z2 * (1.0 / (a1 + r1) - 1.0 / (a2 + r2)), 0.0)
-    return 2.0 * math.pi * GRAVITATIONAL_CONSTANT * density * SI_TO_MGAL / n_compartments * bracket
+#: Flag codes raised here (all in ``algorithms.qc.VOCABULARY``).
+CODES = ("outside_dem", "no_height", "tc_partial", "tc_no_data_zones", "tc_regional_fill", "tc_no_slope")
 
 
-@dataclass
+@dataclass(frozen=True)
 class HammerResult:
-    """Ring-and-sector terrain correction per station.
+    """Ring-and-sector terrain correction per station (arrays are read-only).
 
     Attributes
     ----------
-    total : numpy.ndarray
-        Sum over the chosen zones, mGal.
-    zones : dict
-        Zone letter -> per-station correction of that ring, mGal.
+    tc_inner, tc_outer, tc_total : numpy.ndarray
+        Correction in mGal: zones (or parts of a zone) within ``inner_radius``,
+        beyond it, and their sum. NaN where not computed.
+    zones : mapping
+        Zone letter -> per-station correction of that whole ring, mGal.
     coverage : numpy.ndarray
-        Fraction (0-1) of the rings' area whose samples had data.
-    flags : list of str
-        Quality notes per station ("" when clean).
+        Fraction (0-1) of the chosen rings' area with data.
+    codes : tuple of tuple of str
+        Flag codes per station (``algorithms.qc`` vocabulary), empty when clean.
+    zone_letters : str
+        The zones used, innermost first.
+    plane_zones : str
+        The zones modelled by the sloping plane (finer than a DEM cell).
+    reach : float
+        Outer radius of the last zone (m): terrain beyond is not corrected.
+    inner_radius : float
+        The inner/outer split radius used (m).
     """
 
-    total: np.ndarray
-    zones: Dict[str, np.ndarray]
+    tc_inner: np.ndarray
+    tc_outer: np.ndarray
+    tc_total: np.ndarray
+    zones: Mapping[str, np.ndarray]
     coverage: np.ndarray
-    flags: List[str] = field(default_factory=list)
+    codes: Tuple[Tuple[str, ...], ...]
+    zone_letters: str
+    plane_zones: str
+    reach: float
+    inner_radius: float
+
+    @property
+    def total(self) -> np.ndarray:
+        """Alias of ``tc_total``."""
+        return self.tc_total
+
+    @property
+    def flags(self) -> List[str]:
+        """Codes per station joined by ``;`` ("" when clean), as ``qc_flag`` holds them."""
+        return [";".join(c) for c in self.codes]
 
 
 def _compartment_samples(zone: HammerZone, cell: float) -> Tuple[np.ndarray, np.ndarray]:
@@ -152,8 +108,8 @@ def _compartment_samples(zone: HammerZone, cell: float) -> Tuple[np.ndarray, np.
     return (r * np.sin(a)).reshape(n, -1), (r * np.cos(a)).reshape(n, -1)
 
 
-def _to_grid_coords(grid: ElevationGrid, x0: float, y0: float, east: np.ndarray, north: np.ndarray):
-    if not grid.geographic:
+def _to_grid_coords(geographic: bool, x0: float, y0: float, east: np.ndarray, north: np.ndarray):
+    if not geographic:
         return x0 + east, y0 + north
     # Point at ground distance s and azimuth alpha on the sphere.
     s = np.hypot(east, north) / MEAN_EARTH_RADIUS
@@ -165,22 +121,119 @@ def _to_grid_coords(grid: ElevationGrid, x0: float, y0: float, east: np.ndarray,
     return np.degrees(lam), np.degrees(phi)
 
 
-def _bilinear_many(z: np.ndarray, row0: int, col0: int, grid: ElevationGrid, x: np.ndarray, y: np.ndarray) -> np.ndarray:
-    """Bilinear heights from a window array; NaN where a corner is missing."""
-    fi = (grid.y_origin - y) / grid.cell_y - 0.5 - row0
-    fj = (x - grid.x_origin) / grid.cell_x - 0.5 - col0
-    i0 = np.floor(fi).astype(np.int64)
-    j0 = np.floor(fj).astype(np.int64)
-    ti, tj = fi - i0, fj - j0
-    ok = (i0 >= 0) & (j0 >= 0) & (i0 + 1 < z.shape[0]) & (j0 + 1 < z.shape[1])
-    i0c, j0c = np.where(ok, i0, 0), np.where(ok, j0, 0)
-    v = (
-        z[i0c, j0c] * (1 - ti) * (1 - tj)
-        + z[i0c, j0c + 1] * (1 - ti) * tj
-        + z[i0c + 1, j0c] * ti * (1 - tj)
-        + z[i0c + 1, j0c + 1] * ti * tj
-    )
-    return np.where(ok, v, np.nan)
+def _cell_sides(grid: ElevationGrid, latitude: float) -> Tuple[float, float]:
+    """Metric cell sides (east-west, north-south) at a latitude, m."""
+    if not grid.geographic:
+        return grid.cell_x, grid.cell_y
+    metre_per_degree = math.pi / 180.0 * MEAN_EARTH_RADIUS
+    return grid.cell_x * metre_per_degree * math.cos(math.radians(latitude)), grid.cell_y * metre_per_degree
+
+
+def station_gradient(grid: ElevationGrid, x: float, y: float) -> Tuple[float, float]:
+    """Gradient (east, north; m/m) of the DEM's bilinear surface at a point.
+
+    Parameters
+    ----------
+    grid : ElevationGrid
+        The fine DEM.
+    x, y : float
+        Point in the grid's CRS.
+
+    Returns
+    -------
+    (float, float)
+        NaN when the 2 x 2 stencil has no data.
+
+    Notes
+    -----
+    The same slope as the exact engine's innermost square: along each axis the
+    differences of the two rows (columns) of the bilinear stencil are blended
+    by the point's fraction; where one of them is missing the other is used.
+
+    Examples
+    --------
+    Rising 10 m per 10 m cell eastward and 20 m per cell northward:
+
+    >>> g = ElevationGrid.from_array([[20.0, 30.0], [0.0, 10.0]], 0, 20, 10, 10)
+    >>> station_gradient(g, 10.0, 10.0)
+    (1.0, 2.0)
+    """
+    i0, j0, ti, tj = (float(v[0]) for v in bilinear_setup(grid, np.array([x]), np.array([y])))
+    p = grid.read_window(int(i0), int(j0), 2, 2)
+    if not np.any(np.isfinite(p)):
+        return math.nan, math.nan
+    cw, ch = _cell_sides(grid, y)
+
+    def blend(d0: float, d1: float, t: float) -> float:
+        if math.isfinite(d0) and math.isfinite(d1):
+            return (1 - t) * d0 + t * d1
+        return d0 if math.isfinite(d0) else (d1 if math.isfinite(d1) else 0.0)
+
+    ge = blend(p[0, 1] - p[0, 0], p[1, 1] - p[1, 0], ti) / cw
+    # Rows run south, so the northward gradient has the other sign.
+    gn = -blend(p[1, 0] - p[0, 0], p[1, 1] - p[0, 1], tj) / ch
+    return float(ge), float(gn)
+
+
+def _split(zone: HammerZone, inner_radius: float) -> List[Tuple[float, float, bool]]:
+    """(r1, r2, counts_to_inner) pieces of a zone cut at ``inner_radius``."""
+    if zone.outer <= inner_radius:
+        return [(zone.inner, zone.outer, True)]
+    if zone.inner >= inner_radius:
+        return [(zone.inner, zone.outer, False)]
+    return [(zone.inner, inner_radius, True), (inner_radius, zone.outer, False)]
+
+
+class _Reader:
+    """Fine-DEM windows: one read for the whole survey when it is small enough."""
+
+    def __init__(self, grid: ElevationGrid, x: np.ndarray, y: np.ndarray, reach: float):
+        self.grid = grid
+        self.cache = None
+        if x.size and reach > 0:
+            r0, c0, r1, c1 = self._bounds(float(np.min(x)), float(np.max(x)), float(np.min(y)), float(np.max(y)), reach)
+            if (r1 - r0) * (c1 - c0) <= MAX_WINDOW_CELLS:
+                self.cache = (r0, c0, grid.read_window(r0, c0, r1 - r0, c1 - c0))
+        self.reach = reach
+
+    def _bounds(self, x_lo: float, x_hi: float, y_lo: float, y_hi: float, reach: float):
+        g = self.grid
+        if g.geographic:
+            dlat = math.degrees(reach / MEAN_EARTH_RADIUS) * 1.01
+            lat = min(max(abs(y_lo), abs(y_hi)) + dlat, 89.0)
+            dlon = dlat / max(math.cos(math.radians(lat)), 1e-3)
+        else:
+            dlat = dlon = reach * 1.01
+        r0 = max(int(math.floor((g.y_origin - (y_hi + dlat)) / g.cell_y)) - 1, 0)
+        c0 = max(int(math.floor((x_lo - dlon - g.x_origin) / g.cell_x)) - 1, 0)
+        r1 = min(int(math.ceil((g.y_origin - (y_lo - dlat)) / g.cell_y)) + 1, g.n_rows)
+        c1 = min(int(math.ceil((x_hi + dlon - g.x_origin) / g.cell_x)) + 1, g.n_cols)
+        return r0, c0, max(r1, r0 + 1), max(c1, c0 + 1)
+
+    def window(self, x: float, y: float):
+        if self.cache is not None:
+            return self.cache
+        r0, c0, r1, c1 = self._bounds(x, x, y, y, self.reach)
+        return r0, c0, self.grid.read_window(r0, c0, r1 - r0, c1 - c0)
+
+
+def _heights(reader: _Reader, regional: Optional[ElevationGrid], x0: float, y0: float, gx: np.ndarray, gy: np.ndarray):
+    """Sample heights: fine DEM first, regional where the fine one has none.
+
+    Returns (heights, True when the regional filled a void inside the fine
+    raster's extent).
+    """
+    fine = reader.grid
+    row0, col0, window = reader.window(x0, y0)
+    on_fine = inside_extent(fine, gx, gy)
+    h = np.where(on_fine, bilinear_from_window(window, row0, col0, *bilinear_setup(fine, gx, gy)), np.nan)
+    filled_void = False
+    missing = ~np.isfinite(h)
+    if regional is not None and np.any(missing):
+        hr = sample_bilinear(regional, gx[missing], gy[missing])
+        h[missing] = hr
+        filled_void = bool(np.any(on_fine[missing] & np.isfinite(hr)))
+    return h, filled_void
 
 
 def hammer_terrain_correction(
@@ -191,10 +244,12 @@ def hammer_terrain_correction(
     density: float = 2670.0,
     zones: str = "BCDEFGHIJKLM",
     *,
+    regional: Optional[ElevationGrid] = None,
+    inner_radius: float = 2000.0,
     progress: Optional[Callable[[float], None]] = None,
     is_cancelled: Optional[Callable[[], bool]] = None,
 ) -> HammerResult:
-    """Hammer (1939) ring-and-sector terrain correction from a DEM.
+    """Hammer (1939) ring-and-sector terrain correction from DEMs.
 
     Parameters
     ----------
@@ -203,14 +258,20 @@ def hammer_terrain_correction(
     station_height : array_like
         Station heights in metres.
     grid : ElevationGrid
-        DEM giving the compartment mean heights.
+        Fine DEM giving the compartment mean heights.
     density : float
         Density in kg/m^3.
     zones : str
-        Zone letters to use, out of "BCDEFGHIJKLM" (zone A, the station zone,
-        is not corrected, as in the chart method).
+        Contiguous zones out of B-M, as letters ("BCDEFGHIJKLM") or a range
+        ("B-M"); see :func:`parse_zones`. Zone A (the station zone) is never
+        sampled.
+    regional : ElevationGrid, optional
+        Coarser DEM in the same CRS, sampled where the fine DEM has no data.
+    inner_radius : float
+        Radius (m) splitting ``tc_inner`` from ``tc_outer``.
     progress, is_cancelled : callable, optional
-        As for :func:`terrain_correction`.
+        Called with the fraction done (0-1); polled once per station, when
+        True :class:`TerrainCancelled` is raised.
 
     Returns
     -------
@@ -218,90 +279,149 @@ def hammer_terrain_correction(
 
     Notes
     -----
-    Each compartment's mean height is the mean of DEM heights (bilinear) at
-    sample points spread over it at equal area (radii at the centres of
-    equal-area sub-rings, azimuths evenly spaced), about one per DEM cell and
-    at most ``MAX_SAMPLES`` x ``MAX_SAMPLES``; samples without data are left
-    out (the covered fraction is reported), and a compartment with none
-    contributes nothing (flagged). The
-    correction of each compartment is :func:`ring_sector_correction` with
-    relief = mean height - station height, flat Earth (the rings end at
-    21.9 km).
+    Each compartment of n in a ring r1..r2 whose mean height differs from the
+    station by z gives :func:`ring_sector_correction`,
+    :math:`T = (2\\pi G\\rho/n)[(r_2 - r_1) + \\sqrt{r_1^2 + z^2} - \\sqrt{r_2^2 + z^2}]`
+    (flat Earth: the chart ends at 21.94 km).
+
+    * Mean heights: bilinear DEM heights at sample points spread over the
+      compartment at equal area (about one per fine cell, at most
+      ``MAX_SAMPLES`` x ``MAX_SAMPLES``); from the fine DEM where it has data,
+      from the regional DEM elsewhere (code ``tc_regional_fill`` when the
+      regional filled a void inside the fine DEM's extent). Samples without
+      data are left out; a compartment without any counts as flat
+      (``tc_no_data_zones``); covered area below 99 % gives ``tc_partial``.
+    * Zones finer than the fine DEM's cell (:func:`resolved_by`) are not
+      sampled: they hold the plane through the station height with the slope
+      of the DEM's bilinear surface at the station (the exact engine's
+      innermost model), integrated over the ring by
+      :func:`plane_ring_correction`. Without DEM data at the station they
+      count as flat (``tc_no_slope``).
+    * Inner/outer: a zone counts to ``tc_inner`` when its outer radius is at
+      most ``inner_radius``, to ``tc_outer`` when its inner radius is at least
+      ``inner_radius``; a zone that ``inner_radius`` cuts is split there, each
+      part with the compartment's one mean height (the ring formula
+      telescopes, so the parts add up to the whole zone exactly).
 
     References
     ----------
-    Hammer, S., 1939, Geophysics 4, 184-194.
+    Hammer, S., 1939, Geophysics 4(3), 184-194; Nowell, D.A.G., 1999,
+    J. Appl. Geophys. 42, 117-134.
 
     Examples
     --------
     >>> import numpy as np
-    >>> g = ElevationGrid.from_array(np.zeros((50, 50)), 0, 500, 10, 10)
-    >>> r = hammer_terrain_correction([250.0], [250.0], [0.0], g, zones="BCD")
-    >>> float(r.total[0])
-    0.0
+    >>> g = ElevationGrid.from_array(np.zeros((50, 50)), 0, 1000, 20, 20)
+    >>> r = hammer_terrain_correction([500.0], [500.0], [0.0], g, zones="B-D")
+    >>> float(r.tc_total[0]), r.plane_zones, r.codes
+    (0.0, 'B', ((),))
     """
     xs = np.atleast_1d(np.asarray(x, dtype=float))
     ys = np.atleast_1d(np.asarray(y, dtype=float))
     hs = np.atleast_1d(np.asarray(station_height, dtype=float))
     if not (xs.size == ys.size == hs.size):
-        raise ValueError("x, y and station_height must have the same length")
-    table = {z.letter: z for z in HAMMER_ZONES}
-    unknown = [c for c in zones if c not in table]
-    if unknown or not zones:
-        raise ValueError(f"zones must be letters out of 'BCDEFGHIJKLM', got {zones!r}")
+        raise ValueError(f"x, y and station_height must have the same length, got {xs.size}, {ys.size}, {hs.size}")
+    chosen = parse_zones(zones)
     if not density > 0:
         raise ValueError(f"density must be > 0 kg/m^3, got {density}")
-    chosen = [table[c] for c in dict.fromkeys(zones)]
+    if not inner_radius >= 0:
+        raise ValueError(f"inner_radius must be >= 0 m, got {inner_radius}")
+    if regional is not None and regional.geographic != grid.geographic:
+        raise ValueError("fine and regional grids must share one CRS (both geographic or both projected)")
     n = xs.size
-    per_zone = {z.letter: np.full(n, np.nan) for z in chosen}
-    flags: List[List[str]] = [[] for _ in range(n)]
-    if grid.geographic:
-        cell = min(grid.cell_y * math.pi / 180 * MEAN_EARTH_RADIUS, grid.cell_x * math.pi / 180 * MEAN_EARTH_RADIUS)
-    else:
-        cell = min(grid.cell_x, grid.cell_y)
-    samples = {z.letter: _compartment_samples(z, cell) for z in chosen}
-    reach = max(z.outer for z in chosen)
+    # Resolution is judged on the fine DEM's larger metric side (at the
+    # survey's mean latitude for degree grids).
+    on = np.isfinite(xs) & np.isfinite(ys)
+    lat = float(np.mean(ys[on])) if grid.geographic and on.any() else 0.0
+    cw, ch = _cell_sides(grid, lat)
+    plane = [z for z in chosen if not resolved_by(z, max(cw, ch))]
+    sampled = [z for z in chosen if resolved_by(z, max(cw, ch))]
+    samples = {z.letter: _compartment_samples(z, min(cw, ch)) for z in sampled}
+    reach = chosen[-1].outer
     full_area = sum(math.pi * (z.outer**2 - z.inner**2) for z in chosen)
+
+    per_zone = {z.letter: np.full(n, np.nan) for z in chosen}
+    tc_inner = np.full(n, np.nan)
+    tc_outer = np.full(n, np.nan)
     coverage = np.full(n, np.nan)
-    inside = _inside(grid, xs, ys)
+    codes: List[List[str]] = [[] for _ in range(n)]
+    inside = on & inside_extent(grid, np.where(on, xs, 0.0), np.where(on, ys, 0.0))
+    reader = _Reader(grid, xs[inside], ys[inside], max((z.outer for z in sampled), default=0.0))
     for i in range(n):
         if is_cancelled is not None and is_cancelled():
             raise TerrainCancelled("terrain correction cancelled")
         if not inside[i]:
-            flags[i].append("outside DEM")
+            codes[i].append("outside_dem")
             continue
         if not np.isfinite(hs[i]):
-            flags[i].append("no height")
+            codes[i].append("no_height")
             continue
-        # One window per station covering its rings.
-        if grid.geographic:
-            dlat = math.degrees(reach / MEAN_EARTH_RADIUS) * 1.01
-            dlon = dlat / max(math.cos(math.radians(min(abs(ys[i]) + dlat, 89.0))), 1e-3)
-        else:
-            dlat = dlon = reach * 1.01
-        row0 = int(math.floor((grid.y_origin - (ys[i] + dlat)) / grid.cell_y)) - 1
-        col0 = int(math.floor((xs[i] - dlon - grid.x_origin) / grid.cell_x)) - 1
-        row1 = int(math.ceil((grid.y_origin - (ys[i] - dlat)) / grid.cell_y)) + 1
-        col1 = int(math.ceil((xs[i] + dlon - grid.x_origin) / grid.cell_x)) + 1
-        window = grid.read_window(row0, col0, row1 - row0, col1 - col0)
-        missing = 0
+        parts = {True: 0.0, False: 0.0}
         covered = 0.0
-        for zone in chosen:
-            east, north = samples[zone.letter]
-            gx, gy = _to_grid_coords(grid, xs[i], ys[i], east, north)
-            h = _bilinear_many(window, row0, col0, grid, gx, gy)
-            ok = np.isfinite(h)
-            count = ok.sum(axis=1)
-            mean = np.where(count > 0, np.where(ok, h, 0.0).sum(axis=1) / np.maximum(count, 1), hs[i])
-            missing += int(np.sum(count == 0))
-            covered += math.pi * (zone.outer**2 - zone.inner**2) * float(count.sum()) / h.size
-            per_zone[zone.letter][i] = float(np.sum(ring_sector_correction(zone.inner, zone.outer, zone.compartments, mean - hs[i], density)))
-        coverage[i] = covered / full_area
+        if plane:
+            ge, gn = station_gradient(grid, xs[i], ys[i])
+            slope = math.hypot(ge, gn)
+            if not math.isfinite(slope):
+                codes[i].append("tc_no_slope")
+                slope = 0.0
+            else:
+                covered += sum(math.pi * (z.outer**2 - z.inner**2) for z in plane)
+            for zone in plane:
+                value = 0.0
+                for r1, r2, to_inner in _split(zone, inner_radius):
+                    t = float(plane_ring_correction(r1, r2, slope, density))
+                    parts[to_inner] += t
+                    value += t
+                per_zone[zone.letter][i] = value
+        if sampled:
+            east = np.concatenate([samples[z.letter][0].ravel() for z in sampled])
+            north = np.concatenate([samples[z.letter][1].ravel() for z in sampled])
+            gx, gy = _to_grid_coords(grid.geographic, xs[i], ys[i], east, north)
+            heights, filled_void = _heights(reader, regional, xs[i], ys[i], gx, gy)
+            if filled_void:
+                codes[i].append("tc_regional_fill")
+            start = 0
+            empty = 0
+            for zone in sampled:
+                shape = samples[zone.letter][0].shape
+                h = heights[start : start + shape[0] * shape[1]].reshape(shape)
+                start += h.size
+                ok = np.isfinite(h)
+                count = ok.sum(axis=1)
+                mean = np.where(count > 0, np.where(ok, h, 0.0).sum(axis=1) / np.maximum(count, 1), hs[i])
+                empty += int(np.sum(count == 0))
+                covered += math.pi * (zone.outer**2 - zone.inner**2) * float(count.sum()) / h.size
+                value = 0.0
+                for r1, r2, to_inner in _split(zone, inner_radius):
+                    t = float(np.sum(ring_sector_correction(r1, r2, zone.compartments, mean - hs[i], density)))
+                    parts[to_inner] += t
+                    value += t
+                per_zone[zone.letter][i] = value
+            if empty:
+                codes[i].append("tc_no_data_zones")
+        tc_inner[i], tc_outer[i] = parts[True], parts[False]
+        coverage[i] = min(covered / full_area, 1.0)
         if coverage[i] < COVERAGE_FLAG_BELOW:
-            flags[i].append(f"partial coverage {int(math.floor(coverage[i] * 100))}%")
-        if missing:
-            flags[i].append(f"{missing} compartments without data")
+            codes[i].insert(0, "tc_partial")
         if progress is not None:
             progress((i + 1) / n)
-    total = np.sum([per_zone[z.letter] for z in chosen], axis=0)
-    return HammerResult(total=total, zones=per_zone, coverage=coverage, flags=["; ".join(f) for f in flags])
+    tc_total = tc_inner + tc_outer
+    zone_arrays = {k: _frozen(v) for k, v in per_zone.items()}
+    return HammerResult(
+        tc_inner=_frozen(tc_inner),
+        tc_outer=_frozen(tc_outer),
+        tc_total=_frozen(tc_total),
+        zones=MappingProxyType(zone_arrays),
+        coverage=_frozen(coverage),
+        codes=tuple(tuple(c) for c in codes),
+        zone_letters="".join(z.letter for z in chosen),
+        plane_zones="".join(z.letter for z in plane),
+        reach=reach,
+        inner_radius=float(inner_radius),
+    )
+
+
+def _frozen(a: np.ndarray) -> np.ndarray:
+    a.setflags(write=False)
+    return a
+

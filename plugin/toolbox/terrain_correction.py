@@ -15,11 +15,12 @@ from qgis.core import (
     QgsProcessingParameterField,
     QgsProcessingParameterNumber,
     QgsProcessingParameterRasterLayer,
+    QgsProcessingParameterString,
 )
 from qgis.PyQt.QtCore import QVariant
 
 from ..stations import write_stations
-from ..terrain_run import EXACT, compute_terrain, place_stations
+from ..terrain_run import EXACT, RING_SECTOR, compute_terrain, place_stations
 from .base import StationAlgorithm, is_unset
 from .field_checks import check_numeric_fields
 
@@ -33,6 +34,7 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
     WATER_DENSITY = "WATER_DENSITY"
     METHOD = "METHOD"
     ZONE_FIELDS = "ZONE_FIELDS"
+    ZONES = "ZONES"
     STATIONS_COMPUTED = "STATIONS_COMPUTED"
     STATIONS_FLAGGED = "STATIONS_FLAGGED"
 
@@ -61,9 +63,14 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
             "zone to the outer radius uses progressively coarser cells, then the regional "
             "raster beyond the fine one, with Earth curvature. Geographic (degree) rasters "
             "work: distances are on the ground.</p>"
-            "<p>Ring-and-sector (Hammer 1939): zones B to M with compartment mean heights "
-            "from the DEM, for comparison with chart-based field practice; tc_total only, "
-            "optionally one field per zone.</p>"
+            "<p>Ring-and-sector (Hammer 1939): the chosen contiguous zones out of B to M "
+            "(2 m to 21.94 km, flat Earth; terrain beyond the last zone is not corrected, and "
+            "the log says how far it reaches) with compartment mean heights from the DEM, and "
+            "from the regional raster where the DEM has no data; zones narrower than a DEM "
+            "cell hold the plane through the station with the DEM's slope. A zone counts to "
+            "tc_inner when it ends within the inner zone radius; a zone the radius cuts is "
+            "split there. For comparison with chart-based field practice; optionally one "
+            "field per zone.</p>"
             "<p>Station heights come from the height field (the height difference is always "
             "taken from the station's own height) or, when empty, from the DEM.</p>"
             "<p>{}</p>"
@@ -115,6 +122,15 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         )
         zones.setFlags(zones.flags() | QgsProcessingParameterDefinition.FlagAdvanced)
         self.addParameter(zones)
+        # --- ring-and-sector zone choice ---
+        self.addParameter(
+            QgsProcessingParameterString(
+                self.ZONES,
+                self.tr("Ring-and-sector: Hammer zones (contiguous letters out of B-M, or a range such as B-M)"),
+                defaultValue=HAMMER_ZONE_LETTERS,
+            )
+        )
+        # --- end ring-and-sector zone choice ---
         self.addParameter(
             QgsProcessingParameterFeatureSink(
                 self.OUTPUT, self.tr("Stations with terrain correction"), QgsProcessing.TypeVectorPoint
@@ -143,7 +159,51 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         problem = self.check_density_and_radii(parameters, context)
         if problem:
             return False, problem
+        problem = self._zone_problem(parameters, context)
+        if problem:
+            return False, problem
         return True, ""
+
+    # --- ring-and-sector zone choice ---
+    def _zones(self, parameters, context):
+        from ...algorithms.terrain import parse_zones
+
+        return parse_zones(self.parameterAsString(parameters, self.ZONES, context) or HAMMER_ZONE_LETTERS)
+
+    def _zone_problem(self, parameters, context) -> str:
+        try:
+            self._zones(parameters, context)
+        except ValueError as error:
+            return self.tr("Hammer zones: {}").format(error)
+        return ""
+
+    def _push_reach(self, zones, plane_zones: str, feedback) -> None:
+        """Say in the log how far the ring-and-sector zones reach."""
+        from ...algorithms.terrain import zone_label
+
+        first, last = zones[0], zones[-1]
+        if first.letter == "B":
+            feedback.pushInfo(
+                self.tr("Ring-and-sector zones {} reach {:.2f} km; terrain beyond is not corrected.").format(
+                    zone_label(zones), last.outer / 1000.0
+                )
+            )
+        else:
+            feedback.pushInfo(
+                self.tr(
+                    "Ring-and-sector zones {} cover {:.1f} m to {:.2f} km; terrain nearer (except a field-estimated "
+                    "innermost correction) and beyond is not corrected."
+                ).format(zone_label(zones), first.inner, last.outer / 1000.0)
+            )
+        if plane_zones:
+            feedback.pushInfo(
+                self.tr(
+                    "Zones {} are narrower than a DEM cell: they hold the plane through the station "
+                    "with the DEM's slope there instead of DEM heights."
+                ).format(", ".join(plane_zones))
+            )
+
+    # --- end ring-and-sector zone choice ---
 
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 - QGIS API
         dem = self.parameterAsRasterLayer(parameters, self.DEM, context)
@@ -162,6 +222,10 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         )
         method = self.parameterAsEnum(parameters, self.METHOD, context)
         density = self.parameterAsDouble(parameters, self.DENSITY, context)
+        problem = self._zone_problem(parameters, context)
+        if problem:
+            raise QgsProcessingException(problem)
+        zones = self._zones(parameters, context)
 
         steps.setCurrentStep(1)
         result = compute_terrain(
@@ -177,7 +241,10 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
             method=method,
             context=context,
             feedback=steps,
+            zones="".join(z.letter for z in zones),
         )
+        if method == RING_SECTOR:
+            self._push_reach(zones, result.get("plane_zones", ""), steps)
         columns = {k: result[k] for k in ("tc_inner", "tc_outer", "tc_total")}
         added = [(k, QVariant.Double) for k in columns]
         if method == EXACT:

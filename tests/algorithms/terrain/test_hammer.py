@@ -99,9 +99,10 @@ def test_flags_and_cancel():
     area = math.pi * 894.89**2 - math.pi * 2.0**2
     inside = 1000.0**2 - math.pi * 2.0**2
     assert r.coverage[0] == pytest.approx(inside / area, abs=0.02)
-    assert r.flags[0] == f"partial coverage {int(math.floor(r.coverage[0] * 100))}%"
-    assert r.flags[1] == "outside DEM" and np.isnan(r.total[1])
-    assert r.flags[2] == "no height" and np.isnan(r.total[2])
+    # Flags are codes of algorithms.qc (they were English sentences before).
+    assert r.flags[0] == "tc_partial" and r.codes[0] == ("tc_partial",)
+    assert r.flags[1] == "outside_dem" and np.isnan(r.total[1])
+    assert r.flags[2] == "no_height" and np.isnan(r.total[2])
     assert set(r.zones) == set("BCDEF")
     with pytest.raises(TerrainCancelled):
         hammer_terrain_correction([500.0], [500.0], [0.0], grid, zones="BC", is_cancelled=lambda: True)
