@@ -81,6 +81,10 @@ VOCABULARY = {
         ("tc_partial", WARNING, "The elevation rasters do not cover the whole correction area (see tc_cover)."),
         ("tc_no_data_zones", WARNING, "Some ring-and-sector compartments had no elevation data and count as flat."),
     ),
+    # --- regional-residual separation ---------------------------------------
+    **_entries(
+        ("outside_grid", NOT_COMPUTED, "The station lies outside the anomaly raster or next to blank cells: no regional or residual value."),
+    ),
 }
 
 
