@@ -147,3 +147,13 @@ def test_through_qgis_process(provider, grid_tif, tmp_path, qgis_process_env):
     assert run_.returncode == 0, run_.stdout + run_.stderr
     py = run({"INPUT": grid_tif, "METHOD": 1, "HEIGHT": 1500.0, "REGIONAL": str(tmp_path / "py_r.tif"), "RESIDUAL": str(tmp_path / "py_s.tif")})
     np.testing.assert_array_equal(read(tmp_path / "cli_r.tif")[0], read(py["REGIONAL"])[0])
+
+
+def test_cancel_raises_and_writes_nothing(provider, grid_tif, tmp_path):
+    from qgis.core import QgsProcessingException, QgsProcessingFeedback
+
+    feedback = QgsProcessingFeedback()
+    feedback.cancel()
+    with pytest.raises(QgsProcessingException, match="Cancelled"):
+        run({"INPUT": grid_tif, "METHOD": 1, "HEIGHT": 500.0, "REGIONAL": str(tmp_path / "r.tif"), "RESIDUAL": str(tmp_path / "s.tif")}, feedback)
+    assert not (tmp_path / "r.tif").exists() and not (tmp_path / "s.tif").exists()
