@@ -94,6 +94,10 @@ VOCABULARY = {
             "Ring-and-sector: no elevation data at the station, so the zones finer than a DEM cell count as flat.",
         ),
     ),
+    # --- regional-residual separation ---------------------------------------
+    **_entries(
+        ("outside_grid", NOT_COMPUTED, "The station lies outside the anomaly raster or next to blank cells: no regional or residual value."),
+    ),
 }
 
 

@@ -15,9 +15,17 @@ ICON = Path(__file__).resolve().parent.parent / "icons" / "relief_gravity.svg"
 def _algorithm_classes():
     from .toolbox.anomaly_grid import AnomalyGridAlgorithm
     from .toolbox.bouguer_reduction import BouguerReductionAlgorithm
+    from .toolbox.density_estimate import DensityEstimateAlgorithm
+    from .toolbox.regional_residual import RegionalResidualAlgorithm
     from .toolbox.terrain_correction import TerrainCorrectionAlgorithm
 
-    return [BouguerReductionAlgorithm, TerrainCorrectionAlgorithm, AnomalyGridAlgorithm]
+    return [
+        BouguerReductionAlgorithm,
+        TerrainCorrectionAlgorithm,
+        AnomalyGridAlgorithm,
+        DensityEstimateAlgorithm,
+        RegionalResidualAlgorithm,
+    ]
 
 
 class ReliefGravityProvider(QgsProcessingProvider):

@@ -6,7 +6,9 @@
 
 The model ``plugin/models/reduce_grid_contour.model3`` chains
 ``reliefgravity:bouguerreduction`` -> ``reliefgravity:anomalygrid`` (with
-contours). It is built in code rather than drawn in the Modeler so that it
+contours); ``plugin/models/reduce_grid_separate.model3`` adds
+``reliefgravity:regionalresidual`` on the grid (sampled back onto the
+reduced stations). It is built in code rather than drawn in the Modeler so that it
 always matches the algorithms' current parameter names; run this script again
 after changing them. The styles are written by ``plugin/styling.py`` from an
 invented anomaly (two Gaussian bodies on a regional gradient), so the raster
@@ -23,6 +25,7 @@ from pathlib import Path
 
 REPO_ROOT = Path(__file__).resolve().parent.parent
 MODEL_PATH = REPO_ROOT / "plugin" / "models" / "reduce_grid_contour.model3"
+SEPARATION_MODEL_PATH = REPO_ROOT / "plugin" / "models" / "reduce_grid_separate.model3"
 
 #: Model parameter names; public like algorithm parameter names (they are the
 #: qgis_process argument names of the model).
@@ -175,6 +178,66 @@ def build_model():
     return model
 
 
+#: Extra parameters and outputs of the reduce -> grid -> regional-residual model.
+SEPARATION_METHOD, CONTINUATION_HEIGHT = "separation_method", "continuation_height"
+REGIONAL, RESIDUAL = "regional", "residual"
+
+
+def build_separation_model():
+    """The reduce -> grid -> regional-residual model: the first model plus a third child."""
+    from qgis.core import (
+        QgsProcessingModelChildParameterSource as Source,
+        QgsProcessingModelParameter,
+        QgsProcessingParameterEnum,
+        QgsProcessingParameterNumber,
+    )
+    from qgis.PyQt.QtCore import QPointF
+
+    model = build_model()
+    model.setName("Reduce, grid and separate regional and residual")
+    help_content = dict(model.helpContent())
+    help_content["ALG_DESC"] = (
+        "Bouguer reduction of a station layer with terrain corrections from a DEM, a minimum-curvature "
+        "grid of the complete Bouguer anomaly (cba, mGal) with contours, then its regional (trend "
+        "surface or upward continuation) and residual rasters, sampled back onto the reduced stations. "
+        "Results support interpretation only; check reductions against the survey's own ties and "
+        "specifications."
+    )
+    help_content[SEPARATION_METHOD] = "Regional from a planar trend surface (default) or upward continuation."
+    help_content[CONTINUATION_HEIGHT] = "Continuation height (m) for the upward-continuation regional."
+    model.setHelpContent(help_content)
+    extra = [
+        QgsProcessingParameterEnum(
+            SEPARATION_METHOD, "Regional from", options=["Polynomial trend surface", "Upward continuation (FFT)"],
+            defaultValue=0,
+        ),
+        QgsProcessingParameterNumber(
+            CONTINUATION_HEIGHT, "Continuation height (m)", type=QgsProcessingParameterNumber.Double,
+            defaultValue=2000.0, minValue=0.0,
+        ),
+    ]
+    for k, definition in enumerate(extra):
+        component = QgsProcessingModelParameter(definition.name())
+        component.setPosition(QPointF(120.0, 480.0 + 70.0 * k))
+        model.addModelParameter(definition, component)
+    separate = _child(
+        "reliefgravity:regionalresidual", "separate", "Regional and residual anomaly",
+        {
+            "INPUT": Source.fromChildOutput("grid", "OUTPUT"),
+            "METHOD": Source.fromModelParameter(SEPARATION_METHOD),
+            "HEIGHT": Source.fromModelParameter(CONTINUATION_HEIGHT),
+            "STATIONS": Source.fromChildOutput("reduce", "OUTPUT"),
+        },
+        420.0, 560.0,
+    )
+    _output(separate, "REGIONAL", REGIONAL, "Regional anomaly raster", 680.0, 540.0)
+    _output(separate, "RESIDUAL", RESIDUAL, "Residual anomaly raster", 680.0, 600.0)
+    _output(separate, "STATIONS_OUTPUT", "stations_separated", "Stations with regional and residual", 680.0, 660.0)
+    model.addChildAlgorithm(separate)
+    model.updateDestinationParameters()
+    return model
+
+
 def build_styles(folder: Path) -> tuple[Path, Path]:
     """Write the .qml styles from an invented anomaly gridded by the plugin itself."""
     import numpy as np
@@ -236,16 +299,16 @@ def main(argv=None) -> int:
     plugin = relief_gravity.classFactory(None)
     plugin.initProcessing()
     try:
-        model = build_model()
-        ok, problems = model.validate()
-        if not ok:
-            print("model does not validate:", *problems, sep="\n  ", file=sys.stderr)
-            return 1
-        args.output.parent.mkdir(parents=True, exist_ok=True)
-        if not model.toFile(str(args.output)):
-            print(f"could not write {args.output}", file=sys.stderr)
-            return 1
-        print(f"wrote {args.output}")
+        for model, target in ((build_model(), args.output), (build_separation_model(), SEPARATION_MODEL_PATH)):
+            ok, problems = model.validate()
+            if not ok:
+                print("model does not validate:", *problems, sep="\n  ", file=sys.stderr)
+                return 1
+            target.parent.mkdir(parents=True, exist_ok=True)
+            if not model.toFile(str(target)):
+                print(f"could not write {target}", file=sys.stderr)
+                return 1
+            print(f"wrote {target}")
         if args.styles:
             for path in build_styles(REPO_ROOT / "plugin" / "styles"):
                 print(f"wrote {path}")

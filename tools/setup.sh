@@ -7,6 +7,10 @@
 set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 PACKAGES="qgis python3-qgis qgis-providers python3-scipy python3-pytest python3-attr python3-venv pyqt5-dev-tools qttools5-dev-tools"
+# Figures of the density estimate (plugin/density_plot.py).
+PACKAGES="$PACKAGES python3-matplotlib"
+# Test-only: what harmonica (reference for upward continuation) needs from Debian.
+PACKAGES="$PACKAGES python3-xarray python3-pooch python3-sklearn python3-dask"
 
 missing=""
 for p in $PACKAGES; do
@@ -23,7 +27,7 @@ fi
 if [ ! -x "$ROOT/.venv/bin/python" ]; then
     /usr/bin/python3 -m venv --system-site-packages "$ROOT/.venv"
 fi
-if ! "$ROOT/.venv/bin/python" -c "import pytest_qgis, boule, choclo" 2>/dev/null; then
+if ! "$ROOT/.venv/bin/python" -c "import pytest_qgis, boule, choclo, harmonica" 2>/dev/null; then
     "$ROOT/.venv/bin/pip" install -q --disable-pip-version-check --no-deps -r "$ROOT/requirements-dev.txt"
 fi
 # Guard: the venv must use Debian's numpy and scipy.

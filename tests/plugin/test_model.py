@@ -170,3 +170,47 @@ def test_model_outputs_are_styled_when_loaded(provider, survey, tmp_path, qgis_n
     assert len(rasters) == 1 and isinstance(rasters[0].renderer(), QgsSingleBandPseudoColorRenderer)
     contours = [layer for layer in layers if isinstance(layer, QgsVectorLayer) and layer.fields().names() == ["fid", "value"]]
     assert len(contours) == 1 and contours[0].labelsEnabled()
+
+
+# --- reduce -> grid -> regional-residual model ------------------------------
+
+SEPARATION_MODEL = REPO_ROOT / "plugin" / "models" / "reduce_grid_separate.model3"
+
+
+def test_separation_model_chains_the_grid_into_regionalresidual(provider, survey, tmp_path):
+    import processing
+    from qgis.core import QgsProcessingModelAlgorithm
+
+    model = QgsProcessingModelAlgorithm()
+    assert model.fromFile(str(SEPARATION_MODEL))
+    assert sorted(model.childAlgorithms()) == ["grid", "reduce", "separate"]
+    source = model.childAlgorithm("separate").parameterSources()["INPUT"][0]
+    assert (source.outputChildId(), source.outputName()) == ("grid", "OUTPUT")
+    assert model.validate()[0]
+    out = tmp_path
+    result = processing.run(
+        model,
+        {
+            "stations": str(survey / "stations.gpkg"), "gravity_field": "g_obs", "height_field": "height",
+            "dem": str(survey / "dem.tif"), "density": 2670.0, "separation_method": 1, "continuation_height": 1000.0,
+            "reduce:reduced_stations": str(out / "reduced.gpkg"), "grid:anomaly": str(out / "cba.tif"),
+            "grid:contours": str(out / "contours.gpkg"), "separate:regional": str(out / "regional.tif"),
+            "separate:residual": str(out / "residual.tif"), "separate:stations_separated": str(out / "separated.gpkg"),
+        },
+    )
+    cba = gdal.Open(str(out / "cba.tif")).ReadAsArray().astype(float)
+    regional = gdal.Open(str(out / "regional.tif")).ReadAsArray().astype(float)
+    residual = gdal.Open(str(out / "residual.tif")).ReadAsArray().astype(float)
+    ok = cba > -99990
+    np.testing.assert_allclose(regional[ok] + residual[ok], cba[ok], atol=1e-4)
+    # The chained regional equals regionalresidual run by hand on the model's grid.
+    direct = processing.run(
+        "reliefgravity:regionalresidual",
+        {"INPUT": str(out / "cba.tif"), "METHOD": 1, "HEIGHT": 1000.0,
+         "REGIONAL": str(out / "r2.tif"), "RESIDUAL": str(out / "s2.tif")},
+    )
+    np.testing.assert_array_equal(gdal.Open(direct["REGIONAL"]).ReadAsArray(), regional.astype(np.float32))
+    separated = ogr.Open(str(out / "separated.gpkg"))
+    values = [f.GetField("residual") for f in separated.GetLayer(0)]
+    assert len(values) == 60 and sum(v is not None for v in values) >= 50
+    assert Path(result["separate:regional"]) == out / "regional.tif"
