@@ -15,9 +15,10 @@ ICON = Path(__file__).resolve().parent.parent / "icons" / "relief_gravity.svg"
 def _algorithm_classes():
     from .toolbox.anomaly_grid import AnomalyGridAlgorithm
     from .toolbox.bouguer_reduction import BouguerReductionAlgorithm
+    from .toolbox.observed_gravity import ObservedGravityAlgorithm
     from .toolbox.terrain_correction import TerrainCorrectionAlgorithm
 
-    return [BouguerReductionAlgorithm, TerrainCorrectionAlgorithm, AnomalyGridAlgorithm]
+    return [ObservedGravityAlgorithm, BouguerReductionAlgorithm, TerrainCorrectionAlgorithm, AnomalyGridAlgorithm]
 
 
 class ReliefGravityProvider(QgsProcessingProvider):
