@@ -6,7 +6,8 @@
 # packages with --no-deps.
 set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
-PACKAGES="qgis python3-qgis qgis-providers python3-scipy python3-pytest python3-attr python3-venv pyqt5-dev-tools qttools5-dev-tools"
+PACKAGES="qgis python3-qgis qgis-providers python3-scipy python3-pytest python3-attr python3-venv pyqt5-dev-tools qttools5-dev-tools python3-astropy python3-pandas"
+# python3-astropy, python3-pandas: test-only references for the Earth tide (Sun and Moon positions; tidegravity's times).
 
 missing=""
 for p in $PACKAGES; do
@@ -23,7 +24,7 @@ fi
 if [ ! -x "$ROOT/.venv/bin/python" ]; then
     /usr/bin/python3 -m venv --system-site-packages "$ROOT/.venv"
 fi
-if ! "$ROOT/.venv/bin/python" -c "import pytest_qgis, boule, choclo" 2>/dev/null; then
+if ! "$ROOT/.venv/bin/python" -c "import pytest_qgis, boule, choclo, tidegravity" 2>/dev/null; then
     "$ROOT/.venv/bin/pip" install -q --disable-pip-version-check --no-deps -r "$ROOT/requirements-dev.txt"
 fi
 # Guard: the venv must use Debian's numpy and scipy.
