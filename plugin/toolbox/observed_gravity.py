@@ -286,7 +286,8 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         flag((station >= 0) & ~result.loop_tied[loop] & use, "network_untied")
         flag(result.outlier, "reading_outlier")
         flag(result.outlier & ~result.used & use, "reading_left_out")
-        self._log_loops(feedback, loop_names, closures, result, drift_method)
+        ids = {index: key for key, index in station_index.items()}
+        self._log_loops(feedback, loop_names, closures, result, drift_method, ids)
         check_cancel(feedback)
         feedback.setProgress(60)
 
@@ -381,13 +382,13 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
                 ) from None
             raise QgsProcessingException(str(error)) from None
 
-    def _log_loops(self, feedback, names, closures, result, method):
+    def _log_loops(self, feedback, names, closures, result, method, ids):
         feedback.pushInfo(self.tr("Loop, base, base readings, hours, misclosure (mGal), drift (mGal/h):"))
         for i, name in enumerate(names):
             hours = closures.end[i] - closures.start[i]
             feedback.pushInfo(
                 "  {}  {}  {}  {:.2f}  {}  {}".format(
-                    name, closures.base[i], closures.base_count[i], hours if np.isfinite(hours) else float("nan"),
+                    name, ids.get(int(closures.base[i]), "-"), closures.base_count[i], hours if np.isfinite(hours) else float("nan"),
                     f"{closures.misclosure[i]:+.4f}" if np.isfinite(closures.misclosure[i]) else "-",
                     f"{result.drift_rate[i]:+.4f}" if np.isfinite(result.drift_rate[i]) and method != "none" else "-",
                 )
