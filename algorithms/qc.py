@@ -98,6 +98,23 @@ VOCABULARY = {
     **_entries(
         ("outside_grid", NOT_COMPUTED, "The station lies outside the anomaly raster or next to blank cells: no regional or residual value."),
     ),
+    # --- readings and observed gravity --------------------------------------
+    **_entries(
+        ("unknown_station", NOT_COMPUTED, "The reading names a station that is not in the station layer: left out."),
+        ("no_reading", NOT_COMPUTED, "The reading is empty or not a number: left out."),
+        ("duplicate_reading", WARNING, "Same station and time as an earlier row: this copy is left out."),
+        ("time_backwards", WARNING, "The time is earlier than a previous row of the same loop: check it."),
+        ("no_instrument_height", INFO, "No instrument height given for this reading: 0 m used."),
+        ("no_tide_position", NOT_COMPUTED, "The station has no usable position for the tide: its readings are left out."),
+        ("reading_outlier", WARNING, "The reading's residual exceeds 3 standard errors."),
+        ("reading_left_out", WARNING, "The reading was left out of the final adjustment (outlier second pass)."),
+        ("loop_single_base", WARNING, "The loop occupies its base once only: no closure, drift not from the base."),
+        ("loop_no_drift", WARNING, "The loop's drift could not be determined from its readings: none applied."),
+        ("network_untied", NOT_COMPUTED, "Not connected through any loop to a station of known gravity."),
+        ("not_read", NOT_COMPUTED, "No usable reading of this station: no observed gravity."),
+        ("single_reading", INFO, "One reading only: no check on this station's value."),
+        ("known_station", INFO, "A station of known gravity (a tie of the network)."),
+    ),
 }
 
 

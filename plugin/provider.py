@@ -16,10 +16,12 @@ def _algorithm_classes():
     from .toolbox.anomaly_grid import AnomalyGridAlgorithm
     from .toolbox.bouguer_reduction import BouguerReductionAlgorithm
     from .toolbox.density_estimate import DensityEstimateAlgorithm
+    from .toolbox.observed_gravity import ObservedGravityAlgorithm
     from .toolbox.regional_residual import RegionalResidualAlgorithm
     from .toolbox.terrain_correction import TerrainCorrectionAlgorithm
 
     return [
+        ObservedGravityAlgorithm,
         BouguerReductionAlgorithm,
         TerrainCorrectionAlgorithm,
         AnomalyGridAlgorithm,

@@ -4,7 +4,9 @@
     QT_QPA_PLATFORM=offscreen .venv/bin/python tools/build_model.py            # model only
     QT_QPA_PLATFORM=offscreen .venv/bin/python tools/build_model.py --styles   # model and styles
 
-The model ``plugin/models/reduce_grid_contour.model3`` chains
+The models: ``plugin/models/readings_reduce_grid.model3`` starts from meter
+readings (``reliefgravity:observedgravity`` first, then as below);
+``plugin/models/reduce_grid_contour.model3`` chains
 ``reliefgravity:bouguerreduction`` -> ``reliefgravity:anomalygrid`` (with
 contours); ``plugin/models/reduce_grid_separate.model3`` adds
 ``reliefgravity:regionalresidual`` on the grid (sampled back onto the
@@ -26,6 +28,7 @@ from pathlib import Path
 REPO_ROOT = Path(__file__).resolve().parent.parent
 MODEL_PATH = REPO_ROOT / "plugin" / "models" / "reduce_grid_contour.model3"
 SEPARATION_MODEL_PATH = REPO_ROOT / "plugin" / "models" / "reduce_grid_separate.model3"
+READINGS_MODEL_PATH = REPO_ROOT / "plugin" / "models" / "readings_reduce_grid.model3"
 
 #: Model parameter names; public like algorithm parameter names (they are the
 #: qgis_process argument names of the model).
@@ -238,6 +241,97 @@ def build_separation_model():
     return model
 
 
+def build_readings_model():
+    """The readings -> observed gravity -> reduce -> grid -> contour model."""
+    from qgis.core import (
+        QgsProcessing,
+        QgsProcessingModelAlgorithm,
+        QgsProcessingModelChildParameterSource as Source,
+        QgsProcessingModelParameter,
+        QgsProcessingParameterEnum,
+        QgsProcessingParameterFeatureSource,
+        QgsProcessingParameterField,
+        QgsProcessingParameterNumber,
+        QgsProcessingParameterRasterLayer,
+    )
+    from qgis.PyQt.QtCore import QPointF
+
+    model = QgsProcessingModelAlgorithm(
+        "Readings to observed gravity, reduce, grid and contour", "Relief Gravity", "reliefgravity"
+    )
+    model.setHelpContent(
+        {
+            "ALG_DESC": (
+                "Gravimeter readings to observed gravity (Longman tide, calibration, instrument height, "
+                "least-squares drift and base ties), then the Bouguer reduction with terrain corrections "
+                "from a DEM and a minimum-curvature grid of the complete Bouguer anomaly with contours. "
+                "Results support interpretation only; check them against the survey's own ties and "
+                "specifications."
+            ),
+        }
+    )
+    field = QgsProcessingParameterField
+    inputs = [
+        QgsProcessingParameterFeatureSource("readings", "Meter readings (table)", [QgsProcessing.TypeVector]),
+        field("station_field", "Station id field of the readings", parentLayerParameterName="readings"),
+        field("time_field", "Time field (ISO 8601 text or date-time)", parentLayerParameterName="readings"),
+        QgsProcessingParameterNumber("utc_offset", "UTC offset of times without one (hours)",
+                                     type=QgsProcessingParameterNumber.Double, defaultValue=0.0),
+        field("reading_field", "Reading field", parentLayerParameterName="readings"),
+        QgsProcessingParameterEnum("reading_units", "Reading units", options=["Counter units", "mGal"], defaultValue=0),
+        QgsProcessingParameterFeatureSource("calibration", "Calibration table (counter, mgal, factor)",
+                                            [QgsProcessing.TypeVector], optional=True),
+        field("instrument_height_field", "Instrument height field (m)", parentLayerParameterName="readings", optional=True),
+        field("loop_field", "Loop field (empty: one loop per local day)", parentLayerParameterName="readings", optional=True),
+        QgsProcessingParameterFeatureSource(STATIONS, "Gravity stations", [QgsProcessing.TypeVectorPoint]),
+        field("stations_id_field", "Station id field", parentLayerParameterName=STATIONS),
+        field("known_gravity_field", "Known gravity field (mGal)", parentLayerParameterName=STATIONS),
+        field(HEIGHT_FIELD, "Station height field (m above the ellipsoid)", parentLayerParameterName=STATIONS,
+              type=QgsProcessingParameterField.Numeric),
+        QgsProcessingParameterRasterLayer(DEM, "Elevation raster (DEM, metres)"),
+        QgsProcessingParameterRasterLayer(REGIONAL_DEM, "Regional elevation raster for the outer zone", optional=True),
+        QgsProcessingParameterNumber(DENSITY, "Reduction density (kg/m³)", type=QgsProcessingParameterNumber.Double,
+                                     defaultValue=2670.0, optional=True),
+    ]
+    for k, definition in enumerate(inputs):
+        component = QgsProcessingModelParameter(definition.name())
+        component.setPosition(QPointF(120.0, 40.0 + 55.0 * k))
+        model.addModelParameter(definition, component)
+
+    wired = {key.upper(): Source.fromModelParameter(key) for key in (
+        "readings", "station_field", "time_field", "utc_offset", "reading_field", "reading_units", "calibration",
+        "instrument_height_field", "loop_field", "stations_id_field", "known_gravity_field")}
+    wired.update({"STATIONS": Source.fromModelParameter(STATIONS), "HEIGHT_FIELD": Source.fromModelParameter(HEIGHT_FIELD)})
+    observed = _child("reliefgravity:observedgravity", "observed", "Observed gravity from readings", wired, 420.0, 120.0)
+    _output(observed, "OUTPUT", "observed_stations", "Stations with observed gravity", 680.0, 80.0)
+    _output(observed, "READINGS_OUTPUT", "readings", "Reduced readings", 680.0, 140.0)
+    model.addChildAlgorithm(observed)
+    reduce = _child(
+        "reliefgravity:bouguerreduction", "reduce", "Bouguer reduction",
+        {
+            "INPUT": Source.fromChildOutput("observed", "OUTPUT"),
+            "GRAVITY_FIELD": Source.fromStaticValue("g_obs"),
+            "HEIGHT_FIELD": Source.fromModelParameter(HEIGHT_FIELD),
+            "DEM": Source.fromModelParameter(DEM),
+            "DENSITY": Source.fromModelParameter(DENSITY),
+            "REGIONAL_DEM": Source.fromModelParameter(REGIONAL_DEM),
+        },
+        420.0, 320.0,
+    )
+    _output(reduce, "OUTPUT", REDUCED, "Reduced stations", 680.0, 300.0)
+    model.addChildAlgorithm(reduce)
+    grid = _child(
+        "reliefgravity:anomalygrid", "grid", "Anomaly grid and contours",
+        {"INPUT": Source.fromChildOutput("reduce", "OUTPUT"), "FIELD": Source.fromStaticValue("cba")},
+        420.0, 500.0,
+    )
+    _output(grid, "OUTPUT", ANOMALY, "Complete Bouguer anomaly raster", 680.0, 480.0)
+    _output(grid, "CONTOURS", CONTOURS, "Anomaly contours", 680.0, 560.0)
+    model.addChildAlgorithm(grid)
+    model.updateDestinationParameters()
+    return model
+
+
 def build_styles(folder: Path) -> tuple[Path, Path]:
     """Write the .qml styles from an invented anomaly gridded by the plugin itself."""
     import numpy as np
@@ -299,7 +393,8 @@ def main(argv=None) -> int:
     plugin = relief_gravity.classFactory(None)
     plugin.initProcessing()
     try:
-        for model, target in ((build_model(), args.output), (build_separation_model(), SEPARATION_MODEL_PATH)):
+        for model, target in ((build_model(), args.output), (build_separation_model(), SEPARATION_MODEL_PATH),
+                              (build_readings_model(), READINGS_MODEL_PATH)):
             ok, problems = model.validate()
             if not ok:
                 print("model does not validate:", *problems, sep="\n  ", file=sys.stderr)

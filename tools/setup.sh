@@ -11,6 +11,8 @@ PACKAGES="qgis python3-qgis qgis-providers python3-scipy python3-pytest python3-
 PACKAGES="$PACKAGES python3-matplotlib"
 # Test-only: what harmonica (reference for upward continuation) needs from Debian.
 PACKAGES="$PACKAGES python3-xarray python3-pooch python3-sklearn python3-dask"
+# Test-only references for the Earth tide (Sun and Moon positions; tidegravity's times).
+PACKAGES="$PACKAGES python3-astropy python3-pandas"
 
 missing=""
 for p in $PACKAGES; do
@@ -27,7 +29,7 @@ fi
 if [ ! -x "$ROOT/.venv/bin/python" ]; then
     /usr/bin/python3 -m venv --system-site-packages "$ROOT/.venv"
 fi
-if ! "$ROOT/.venv/bin/python" -c "import pytest_qgis, boule, choclo, harmonica" 2>/dev/null; then
+if ! "$ROOT/.venv/bin/python" -c "import pytest_qgis, boule, choclo, harmonica, tidegravity" 2>/dev/null; then
     "$ROOT/.venv/bin/pip" install -q --disable-pip-version-check --no-deps -r "$ROOT/requirements-dev.txt"
 fi
 # Guard: the venv must use Debian's numpy and scipy.

@@ -23,7 +23,12 @@ def test_demo_runner_writes_outputs_and_exits_cleanly(tmp_path):
         timeout=600,
     )
     assert completed.returncode == 0, completed.stdout[-3000:] + completed.stderr[-3000:]
-    for name in ("reduced_stations.gpkg", "cba_grid.tif", "cba_contours.gpkg", "cba_map.png"):
+    for name in ("observed_stations.gpkg", "reduced_readings.gpkg", "reduced_stations.gpkg", "cba_grid.tif", "cba_contours.gpkg", "cba_map.png"):
         assert (out / name).stat().st_size > 0, name
     assert "stations reduced            : 351 of 351" in completed.stdout
     assert "licensed practice" in completed.stdout
+    # From raw readings: the recovered observed gravity is within the reading noise of the truth.
+    line = next(x for x in completed.stdout.splitlines() if "g_obs - true gravity" in x)
+    rms = float(line.split("rms")[1].split(",")[0])
+    assert rms < 0.02, line
+    assert "misclosure on the opening base" in completed.stdout
