@@ -1,12 +1,12 @@
 <!DOCTYPE qgis PUBLIC 'http://mrcc.com/qgis.dtd' 'SYSTEM'>
-<qgis maxScale="0" version="3.22.16-Białowieża" minScale="1e+08" hasScaleBasedVisibilityFlag="0" styleCategories="AllStyleCategories">
+<qgis minScale="1e+08" hasScaleBasedVisibilityFlag="0" maxScale="0" version="3.22.16-Białowieża" styleCategories="AllStyleCategories">
   <flags>
     <Identifiable>1</Identifiable>
     <Removable>1</Removable>
     <Searchable>1</Searchable>
     <Private>0</Private>
   </flags>
-  <temporal mode="0" fetchMode="0" enabled="0">
+  <temporal fetchMode="0" enabled="0" mode="0">
     <fixedRange>
       <start></start>
       <end></end>
@@ -14,75 +14,75 @@
   </temporal>
   <customproperties>
     <Option type="Map">
-      <Option value="Value" type="QString" name="identify/format"/>
+      <Option type="QString" name="identify/format" value="Value"/>
     </Option>
   </customproperties>
   <pipe-data-defined-properties>
     <Option type="Map">
-      <Option value="" type="QString" name="name"/>
+      <Option type="QString" name="name" value=""/>
       <Option name="properties"/>
-      <Option value="collection" type="QString" name="type"/>
+      <Option type="QString" name="type" value="collection"/>
     </Option>
   </pipe-data-defined-properties>
   <pipe>
     <provider>
-      <resampling enabled="false" zoomedInResamplingMethod="nearestNeighbour" zoomedOutResamplingMethod="nearestNeighbour" maxOversampling="2"/>
+      <resampling enabled="false" zoomedInResamplingMethod="nearestNeighbour" maxOversampling="2" zoomedOutResamplingMethod="nearestNeighbour"/>
     </provider>
-    <rasterrenderer nodataColor="" alphaBand="-1" classificationMin="-18.013361587524415" band="1" type="singlebandpseudocolor" classificationMax="5.453832740783692" opacity="1">
+    <rasterrenderer opacity="1" type="singlebandpseudocolor" band="1" alphaBand="-1" classificationMax="1" nodataColor="" classificationMin="0">
       <minMaxOrigin>
         <limits>CumulativeCut</limits>
-        <extent>WholeRaster</extent>
+        <extent>UpdatedCanvas</extent>
         <statAccuracy>Exact</statAccuracy>
         <cumulativeCutLower>0.02</cumulativeCutLower>
         <cumulativeCutUpper>0.98</cumulativeCutUpper>
         <stdDevFactor>2</stdDevFactor>
       </minMaxOrigin>
       <rastershader>
-        <colorrampshader labelPrecision="1" clip="0" colorRampType="INTERPOLATED" maximumValue="5.4538327407836924" classificationMode="3" minimumValue="-18.013361587524415">
+        <colorrampshader labelPrecision="2" maximumValue="1" colorRampType="INTERPOLATED" minimumValue="0" clip="0" classificationMode="1">
           <colorramp type="gradient" name="[source]">
             <Option type="Map">
-              <Option value="43,131,186,255" type="QString" name="color1"/>
-              <Option value="215,25,28,255" type="QString" name="color2"/>
-              <Option value="0" type="QString" name="discrete"/>
-              <Option value="gradient" type="QString" name="rampType"/>
-              <Option value="0.25;171,221,164,255:0.5;255,255,191,255:0.75;253,174,97,255" type="QString" name="stops"/>
+              <Option type="QString" name="color1" value="43,131,186,255"/>
+              <Option type="QString" name="color2" value="215,25,28,255"/>
+              <Option type="QString" name="discrete" value="0"/>
+              <Option type="QString" name="rampType" value="gradient"/>
+              <Option type="QString" name="stops" value="0.25;171,221,164,255:0.5;255,255,191,255:0.75;253,174,97,255"/>
             </Option>
-            <prop v="43,131,186,255" k="color1"/>
-            <prop v="215,25,28,255" k="color2"/>
-            <prop v="0" k="discrete"/>
-            <prop v="gradient" k="rampType"/>
-            <prop v="0.25;171,221,164,255:0.5;255,255,191,255:0.75;253,174,97,255" k="stops"/>
+            <prop k="color1" v="43,131,186,255"/>
+            <prop k="color2" v="215,25,28,255"/>
+            <prop k="discrete" v="0"/>
+            <prop k="rampType" v="gradient"/>
+            <prop k="stops" v="0.25;171,221,164,255:0.5;255,255,191,255:0.75;253,174,97,255"/>
           </colorramp>
-          <item label="-18.0" color="#2b83ba" value="-18.013361587524415" alpha="255"/>
-          <item label="-11.1" color="#5ea7b1" value="-11.070613906860352" alpha="255"/>
-          <item label="-7.4" color="#91cba8" value="-7.430793064117432" alpha="255"/>
-          <item label="-6.0" color="#bce4a9" value="-5.955261600494385" alpha="255"/>
-          <item label="-5.3" color="#ddf1b4" value="-5.31633464050293" alpha="255"/>
-          <item label="-4.2" color="#ffffbf" value="-4.209261894226074" alpha="255"/>
-          <item label="-2.0" color="#fedf99" value="-2.043854606628418" alpha="255"/>
-          <item label="0.2" color="#fdbe74" value="0.222957225799561" alpha="255"/>
-          <item label="1.5" color="#f59053" value="1.542641028404236" alpha="255"/>
-          <item label="2.6" color="#e65538" value="2.616738109588622" alpha="255"/>
-          <item label="5.5" color="#d7191c" value="5.453832740783692" alpha="255"/>
-          <rampLegendSettings minimumLabel="" suffix=" mGal" useContinuousLegend="0" maximumLabel="" direction="0" prefix="" orientation="2">
+          <item label="0.00" value="0" alpha="255" color="#2b83ba"/>
+          <item label="0.10" value="0.1" alpha="255" color="#5ea7b1"/>
+          <item label="0.20" value="0.2" alpha="255" color="#91cba8"/>
+          <item label="0.30" value="0.3" alpha="255" color="#bce4a9"/>
+          <item label="0.40" value="0.4" alpha="255" color="#ddf1b4"/>
+          <item label="0.50" value="0.5" alpha="255" color="#ffffbf"/>
+          <item label="0.60" value="0.6" alpha="255" color="#fedf99"/>
+          <item label="0.70" value="0.7" alpha="255" color="#fdbe74"/>
+          <item label="0.80" value="0.8" alpha="255" color="#f59053"/>
+          <item label="0.90" value="0.9" alpha="255" color="#e65538"/>
+          <item label="1.00" value="1" alpha="255" color="#d7191c"/>
+          <rampLegendSettings useContinuousLegend="1" minimumLabel="" suffix=" mGal" maximumLabel="" direction="0" prefix="" orientation="2">
             <numericFormat id="basic">
               <Option type="Map">
-                <Option value="" type="QChar" name="decimal_separator"/>
-                <Option value="1" type="int" name="decimals"/>
-                <Option value="0" type="int" name="rounding_type"/>
-                <Option value="false" type="bool" name="show_plus"/>
-                <Option value="true" type="bool" name="show_thousand_separator"/>
-                <Option value="true" type="bool" name="show_trailing_zeros"/>
-                <Option value="" type="QChar" name="thousand_separator"/>
+                <Option type="QChar" name="decimal_separator" value=""/>
+                <Option type="int" name="decimals" value="2"/>
+                <Option type="int" name="rounding_type" value="0"/>
+                <Option type="bool" name="show_plus" value="false"/>
+                <Option type="bool" name="show_thousand_separator" value="true"/>
+                <Option type="bool" name="show_trailing_zeros" value="false"/>
+                <Option type="QChar" name="thousand_separator" value=""/>
               </Option>
             </numericFormat>
           </rampLegendSettings>
         </colorrampshader>
       </rastershader>
     </rasterrenderer>
-    <brightnesscontrast brightness="0" gamma="1" contrast="0"/>
-    <huesaturation colorizeBlue="128" saturation="0" invertColors="0" colorizeRed="255" grayscaleMode="0" colorizeGreen="128" colorizeStrength="100" colorizeOn="0"/>
-    <rasterresampler maxOversampling="2"/>
+    <brightnesscontrast gamma="1" contrast="0" brightness="0"/>
+    <huesaturation colorizeGreen="128" colorizeOn="0" grayscaleMode="0" saturation="0" colorizeRed="255" invertColors="0" colorizeBlue="128" colorizeStrength="100"/>
+    <rasterresampler zoomedOutResampler="bilinear" maxOversampling="2" zoomedInResampler="bilinear"/>
     <resamplingStage>resamplingFilter</resamplingStage>
   </pipe>
   <blendMode>0</blendMode>
