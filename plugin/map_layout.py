@@ -27,6 +27,7 @@ from qgis.core import (
     QgsLayoutPoint,
     QgsLayoutSize,
     QgsPrintLayout,
+    QgsScaleBarSettings,
     QgsTextFormat,
     QgsUnitTypes,
 )
@@ -194,6 +195,12 @@ def build_layout(project, crs, extent, map_width, map_height, title, colour_bar=
     scale_bar.setUnits(QgsUnitTypes.DistanceKilometers if kilometres else QgsUnitTypes.DistanceMeters)
     scale_bar.setUnitLabel(_tr("km") if kilometres else _tr("m"))
     scale_bar.applyDefaultSize(scale_bar.units())
+    # Segments sized to fit 15-30 mm whatever the extent, so the template's bar follows the user's map.
+    scale_bar.setSegmentSizeMode(QgsScaleBarSettings.SegmentSizeFitWidth)
+    scale_bar.setMinimumBarWidth(15.0)
+    scale_bar.setMaximumBarWidth(30.0)
+    scale_bar.setNumberOfSegments(2)
+    scale_bar.setNumberOfSegmentsLeft(0)
     bar_text = QgsTextFormat()
     bar_text.setFont(_font(7.5))
     bar_text.setSize(7.5)

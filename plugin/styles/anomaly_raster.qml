@@ -1,12 +1,12 @@
 <!DOCTYPE qgis PUBLIC 'http://mrcc.com/qgis.dtd' 'SYSTEM'>
-<qgis minScale="1e+08" hasScaleBasedVisibilityFlag="0" maxScale="0" version="3.22.16-Białowieża" styleCategories="AllStyleCategories">
+<qgis version="3.22.16-Białowieża" maxScale="0" minScale="1e+08" styleCategories="AllStyleCategories" hasScaleBasedVisibilityFlag="0">
   <flags>
     <Identifiable>1</Identifiable>
     <Removable>1</Removable>
     <Searchable>1</Searchable>
     <Private>0</Private>
   </flags>
-  <temporal fetchMode="0" enabled="0" mode="0">
+  <temporal mode="0" enabled="0" fetchMode="0">
     <fixedRange>
       <start></start>
       <end></end>
@@ -14,21 +14,21 @@
   </temporal>
   <customproperties>
     <Option type="Map">
-      <Option type="QString" name="identify/format" value="Value"/>
+      <Option value="Value" type="QString" name="identify/format"/>
     </Option>
   </customproperties>
   <pipe-data-defined-properties>
     <Option type="Map">
-      <Option type="QString" name="name" value=""/>
+      <Option value="" type="QString" name="name"/>
       <Option name="properties"/>
-      <Option type="QString" name="type" value="collection"/>
+      <Option value="collection" type="QString" name="type"/>
     </Option>
   </pipe-data-defined-properties>
   <pipe>
     <provider>
-      <resampling enabled="false" zoomedInResamplingMethod="nearestNeighbour" maxOversampling="2" zoomedOutResamplingMethod="nearestNeighbour"/>
+      <resampling maxOversampling="2" enabled="false" zoomedOutResamplingMethod="nearestNeighbour" zoomedInResamplingMethod="nearestNeighbour"/>
     </provider>
-    <rasterrenderer opacity="1" type="singlebandpseudocolor" band="1" alphaBand="-1" classificationMax="1" nodataColor="" classificationMin="0">
+    <rasterrenderer type="singlebandpseudocolor" classificationMin="0" opacity="1" nodataColor="" alphaBand="-1" band="1" classificationMax="1">
       <minMaxOrigin>
         <limits>CumulativeCut</limits>
         <extent>UpdatedCanvas</extent>
@@ -38,51 +38,51 @@
         <stdDevFactor>2</stdDevFactor>
       </minMaxOrigin>
       <rastershader>
-        <colorrampshader labelPrecision="2" maximumValue="1" colorRampType="INTERPOLATED" minimumValue="0" clip="0" classificationMode="1">
+        <colorrampshader colorRampType="INTERPOLATED" classificationMode="1" labelPrecision="2" clip="0" minimumValue="0" maximumValue="1">
           <colorramp type="gradient" name="[source]">
             <Option type="Map">
-              <Option type="QString" name="color1" value="43,131,186,255"/>
-              <Option type="QString" name="color2" value="215,25,28,255"/>
-              <Option type="QString" name="discrete" value="0"/>
-              <Option type="QString" name="rampType" value="gradient"/>
-              <Option type="QString" name="stops" value="0.25;171,221,164,255:0.5;255,255,191,255:0.75;253,174,97,255"/>
+              <Option value="43,131,186,255" type="QString" name="color1"/>
+              <Option value="215,25,28,255" type="QString" name="color2"/>
+              <Option value="0" type="QString" name="discrete"/>
+              <Option value="gradient" type="QString" name="rampType"/>
+              <Option value="0.25;171,221,164,255:0.5;255,255,191,255:0.75;253,174,97,255" type="QString" name="stops"/>
             </Option>
-            <prop k="color1" v="43,131,186,255"/>
-            <prop k="color2" v="215,25,28,255"/>
-            <prop k="discrete" v="0"/>
-            <prop k="rampType" v="gradient"/>
-            <prop k="stops" v="0.25;171,221,164,255:0.5;255,255,191,255:0.75;253,174,97,255"/>
+            <prop v="43,131,186,255" k="color1"/>
+            <prop v="215,25,28,255" k="color2"/>
+            <prop v="0" k="discrete"/>
+            <prop v="gradient" k="rampType"/>
+            <prop v="0.25;171,221,164,255:0.5;255,255,191,255:0.75;253,174,97,255" k="stops"/>
           </colorramp>
-          <item label="0.00" value="0" alpha="255" color="#2b83ba"/>
-          <item label="0.10" value="0.1" alpha="255" color="#5ea7b1"/>
-          <item label="0.20" value="0.2" alpha="255" color="#91cba8"/>
-          <item label="0.30" value="0.3" alpha="255" color="#bce4a9"/>
-          <item label="0.40" value="0.4" alpha="255" color="#ddf1b4"/>
-          <item label="0.50" value="0.5" alpha="255" color="#ffffbf"/>
-          <item label="0.60" value="0.6" alpha="255" color="#fedf99"/>
-          <item label="0.70" value="0.7" alpha="255" color="#fdbe74"/>
-          <item label="0.80" value="0.8" alpha="255" color="#f59053"/>
-          <item label="0.90" value="0.9" alpha="255" color="#e65538"/>
-          <item label="1.00" value="1" alpha="255" color="#d7191c"/>
-          <rampLegendSettings useContinuousLegend="1" minimumLabel="" suffix=" mGal" maximumLabel="" direction="0" prefix="" orientation="2">
+          <item value="0" label="0.00" alpha="255" color="#2b83ba"/>
+          <item value="0.1" label="0.10" alpha="255" color="#5ea7b1"/>
+          <item value="0.2" label="0.20" alpha="255" color="#91cba8"/>
+          <item value="0.3" label="0.30" alpha="255" color="#bce4a9"/>
+          <item value="0.4" label="0.40" alpha="255" color="#ddf1b4"/>
+          <item value="0.5" label="0.50" alpha="255" color="#ffffbf"/>
+          <item value="0.6" label="0.60" alpha="255" color="#fedf99"/>
+          <item value="0.7" label="0.70" alpha="255" color="#fdbe74"/>
+          <item value="0.8" label="0.80" alpha="255" color="#f59053"/>
+          <item value="0.9" label="0.90" alpha="255" color="#e65538"/>
+          <item value="1" label="1.00" alpha="255" color="#d7191c"/>
+          <rampLegendSettings direction="0" maximumLabel="" suffix=" mGal" orientation="2" prefix="" useContinuousLegend="1" minimumLabel="">
             <numericFormat id="basic">
               <Option type="Map">
-                <Option type="QChar" name="decimal_separator" value=""/>
-                <Option type="int" name="decimals" value="2"/>
-                <Option type="int" name="rounding_type" value="0"/>
-                <Option type="bool" name="show_plus" value="false"/>
-                <Option type="bool" name="show_thousand_separator" value="true"/>
-                <Option type="bool" name="show_trailing_zeros" value="false"/>
-                <Option type="QChar" name="thousand_separator" value=""/>
+                <Option value="" type="QChar" name="decimal_separator"/>
+                <Option value="2" type="int" name="decimals"/>
+                <Option value="0" type="int" name="rounding_type"/>
+                <Option value="false" type="bool" name="show_plus"/>
+                <Option value="true" type="bool" name="show_thousand_separator"/>
+                <Option value="false" type="bool" name="show_trailing_zeros"/>
+                <Option value="" type="QChar" name="thousand_separator"/>
               </Option>
             </numericFormat>
           </rampLegendSettings>
         </colorrampshader>
       </rastershader>
     </rasterrenderer>
-    <brightnesscontrast gamma="1" contrast="0" brightness="0"/>
-    <huesaturation colorizeGreen="128" colorizeOn="0" grayscaleMode="0" saturation="0" colorizeRed="255" invertColors="0" colorizeBlue="128" colorizeStrength="100"/>
-    <rasterresampler zoomedOutResampler="bilinear" maxOversampling="2" zoomedInResampler="bilinear"/>
+    <brightnesscontrast contrast="0" gamma="1" brightness="0"/>
+    <huesaturation grayscaleMode="0" saturation="0" colorizeOn="0" colorizeRed="255" colorizeStrength="100" invertColors="0" colorizeBlue="128" colorizeGreen="128"/>
+    <rasterresampler maxOversampling="2" zoomedOutResampler="bilinear" zoomedInResampler="bilinear"/>
     <resamplingStage>resamplingFilter</resamplingStage>
   </pipe>
   <blendMode>0</blendMode>
