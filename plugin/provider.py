@@ -15,9 +15,10 @@ ICON = Path(__file__).resolve().parent.parent / "icons" / "relief_gravity.svg"
 def _algorithm_classes():
     from .toolbox.anomaly_grid import AnomalyGridAlgorithm
     from .toolbox.bouguer_reduction import BouguerReductionAlgorithm
+    from .toolbox.survey_report import SurveyReportAlgorithm
     from .toolbox.terrain_correction import TerrainCorrectionAlgorithm
 
-    return [BouguerReductionAlgorithm, TerrainCorrectionAlgorithm, AnomalyGridAlgorithm]
+    return [BouguerReductionAlgorithm, TerrainCorrectionAlgorithm, AnomalyGridAlgorithm, SurveyReportAlgorithm]
 
 
 class ReliefGravityProvider(QgsProcessingProvider):

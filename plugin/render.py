@@ -86,7 +86,8 @@ def map_caption(facts: RunFacts, station_count: int | None, interval: float | No
         _tr("{} stations").format(station_count) if station_count is not None else _tr("stations not shown"),
         _tr("reduced {}").format(facts.date) if facts.date else _tr("map drawn {}").format(today),
     ]
-    return " · ".join(parts)
+    text = " · ".join(parts)
+    return text[:1].upper() + text[1:]
 
 
 def _colour_bar_svg(raster, folder: Path):
