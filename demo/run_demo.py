@@ -147,6 +147,8 @@ def main(argv: list[str]) -> int:
     print(f"  outputs in {output}:")
     for path in (reduced_path, grid_path, contour_path, png_path):
         print(f"    {path.name}")
+    print(f"  survey report               : {write_report(output, reduced_path, grid_path, contour_path)}")
+    print(f"  map to hand over            : {png_path}")
     print("  Results support interpretation only; check reductions against the survey's own ties")
     print("  and specifications, and defer to licensed practice and local codes for decisions.")
     # Drop every QGIS object before QGIS shuts down: a layer still referenced
@@ -156,6 +158,16 @@ def main(argv: list[str]) -> int:
     plugin.unload()
     app.exitQgis()
     return 0
+
+
+def write_report(output, reduced_path, grid_path, contour_path) -> Path:
+    """The survey report (one HTML file) beside the other outputs."""
+    import processing
+
+    report = output / "survey_report.html"
+    processing.run("reliefgravity:surveyreport", {"INPUT": str(reduced_path), "HEIGHT_FIELD": "elev_m",
+                   "GRID": str(grid_path), "CONTOURS": str(contour_path), "OUTPUT": str(report)})
+    return report
 
 
 if __name__ == "__main__":

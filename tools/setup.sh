@@ -7,6 +7,8 @@
 set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 PACKAGES="qgis python3-qgis qgis-providers python3-scipy python3-pytest python3-attr python3-venv pyqt5-dev-tools qttools5-dev-tools"
+# Survey report: plots (matplotlib) and the headless-browser test (chromium).
+PACKAGES="$PACKAGES python3-matplotlib chromium"
 
 missing=""
 for p in $PACKAGES; do
