@@ -194,6 +194,8 @@ def main(argv: list[str]) -> int:
     for path in (observed_path, readings_path, reduced_path, grid_path, contour_path, png_path,
                  output / "density_fit.png", output / "cba_residual_map.png"):
         print(f"    {path.name}")
+    print(f"  survey report               : {write_report(output, reduced_path, grid_path, contour_path)}")
+    print(f"  map to hand over            : {png_path}")
     print("  Results support interpretation only; check reductions against the survey's own ties")
     print("  and specifications, and defer to licensed practice and local codes for decisions.")
     # Drop every QGIS object before QGIS shuts down: a layer still referenced
@@ -203,6 +205,16 @@ def main(argv: list[str]) -> int:
     plugin.unload()
     app.exitQgis()
     return 0
+
+
+def write_report(output, reduced_path, grid_path, contour_path) -> Path:
+    """The survey report (one HTML file) beside the other outputs."""
+    import processing
+
+    report = output / "survey_report.html"
+    processing.run("reliefgravity:surveyreport", {"INPUT": str(reduced_path), "HEIGHT_FIELD": "elev_m",
+                   "GRID": str(grid_path), "CONTOURS": str(contour_path), "OUTPUT": str(report)})
+    return report
 
 
 if __name__ == "__main__":

@@ -94,11 +94,13 @@ def read_record(path: str, layer: str | None = None) -> dict | None:
                 if lyr is not None:
                     text = lyr.GetMetadataItem(KEY)
                 ds = None
-        if text is None:
+        if text is None and not file_path.lower().endswith(".gpkg"):
             ds = gdal.Open(file_path)
             if ds is not None:
                 text = ds.GetMetadataItem(KEY)
                 ds = None
+    except RuntimeError:  # gdal.UseExceptions() is on: an unreadable file has no record
+        text = None
     finally:
         gdal.PopErrorHandler()
     if not text:

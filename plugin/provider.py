@@ -18,6 +18,7 @@ def _algorithm_classes():
     from .toolbox.density_estimate import DensityEstimateAlgorithm
     from .toolbox.observed_gravity import ObservedGravityAlgorithm
     from .toolbox.regional_residual import RegionalResidualAlgorithm
+    from .toolbox.survey_report import SurveyReportAlgorithm
     from .toolbox.terrain_correction import TerrainCorrectionAlgorithm
 
     return [
@@ -27,6 +28,7 @@ def _algorithm_classes():
         AnomalyGridAlgorithm,
         DensityEstimateAlgorithm,
         RegionalResidualAlgorithm,
+        SurveyReportAlgorithm,
     ]
 
 

@@ -1,45 +1,39 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
-"""A PNG of the anomaly map (raster, contours, stations, legend, scale bar), rendered headless.
+"""A PNG of the anomaly map, rendered headless: smooth raster, index contours, stations,
+colour bar with round ticks, coordinate ticks and CRS, north arrow, scale bar, caption.
 
-Built as a QGIS print layout in a private project, so the user's project is
-never touched and the same code works in the desktop, in qgis_process and in
-a plain script (``QT_QPA_PLATFORM=offscreen``).
+Built as a QGIS print layout (:mod:`.map_layout`) in a private project, so the
+user's project is never touched and the same code works in the desktop, in
+qgis_process and in a plain script (``QT_QPA_PLATFORM=offscreen``).
 """
 
 from __future__ import annotations
 
+import datetime as _dt
+import shutil
+import tempfile
 from pathlib import Path
 
 from qgis.core import (
+    QgsExpressionContextUtils,
     QgsLayoutExporter,
-    QgsLayoutItemLabel,
-    QgsLayoutItemLegend,
-    QgsLayoutItemMap,
-    QgsLayoutItemScaleBar,
-    QgsLayoutPoint,
-    QgsLayoutSize,
-    QgsMapLayerLegendUtils,
     QgsMarkerSymbol,
-    QgsPrintLayout,
     QgsProject,
     QgsRasterLayer,
     QgsSingleSymbolRenderer,
-    QgsUnitTypes,
     QgsVectorLayer,
 )
-from qgis.PyQt.QtCore import QCoreApplication, QSize, Qt
-from qgis.PyQt.QtGui import QColor, QFont
+from qgis.PyQt.QtCore import QCoreApplication, QSize
 
-from .styling import style_anomaly_raster, style_contours
-from .toolbox.base import CAUTION
+from . import colour_bar as bar
+from .map_layout import CAPTION_VARIABLE, MARGIN, SIDE_WIDTH, GAP, ANNOTATION_SPACE, build_layout
+from .provenance import read_record
+from .run_facts import RunFacts, interval_from_levels, run_facts, standard_text
+from .styling import INDEX_EVERY, UNITS, set_smooth_resampling, style_anomaly_raster, style_contours
 
-#: Page layout in millimetres (common cartographic proportions, no source).
+#: Page width in millimetres; the map frame takes what the side column leaves.
 PAGE_WIDTH = 270.0
-MARGIN = 6.0
-LEGEND_WIDTH = 50.0
-TITLE_HEIGHT = 12.0
-MAX_MAP_HEIGHT = 220.0
-CAUTION_HEIGHT = 8.0
+MAX_MAP_HEIGHT = 200.0
 
 
 def _tr(text: str) -> str:
@@ -60,23 +54,51 @@ def _as_layer(source, kind, name):
     return layer
 
 
+def _source_path(source):
+    if source is None:
+        return None
+    return str(source) if isinstance(source, (str, Path)) else source.source()
+
+
 def _station_symbol():
     return QgsMarkerSymbol.createSimple(
         {"name": "circle", "color": "20,20,20,255", "outline_color": "255,255,255,255",
-         "outline_width": "0.2", "size": "1.6"}
+         "outline_width": "0.2", "size": "1.5"}
     )
 
 
-def _label(layout, text, size_pt, bold=False):
-    item = QgsLayoutItemLabel(layout)
-    item.setText(text)
-    font = QFont()
-    font.setPointSizeF(size_pt)
-    font.setBold(bold)
-    item.setFont(font)
-    item.setFontColor(QColor(30, 30, 30))
-    layout.addLayoutItem(item)
-    return item
+def _format_number(value: float) -> str:
+    return f"{value:.6g}"
+
+
+def map_caption(facts: RunFacts, station_count: int | None, interval: float | None, today: str) -> str:
+    """The caption line: density, standard, contour interval, station count and date (with fall-backs)."""
+    parts = [
+        _tr("Reduction density {} kg/m³").format(_format_number(facts.density))
+        if facts.density is not None
+        else _tr("reduction density not recorded"),
+        standard_text(facts) or _tr("reduction standard not recorded"),
+        _tr("contour interval {} mGal (index contours every {} mGal, labelled)").format(
+            _format_number(interval), _format_number(INDEX_EVERY * interval)
+        )
+        if interval
+        else _tr("no contours"),
+        _tr("{} stations").format(station_count) if station_count is not None else _tr("stations not shown"),
+        _tr("reduced {}").format(facts.date) if facts.date else _tr("map drawn {}").format(today),
+    ]
+    text = " · ".join(parts)
+    return text[:1].upper() + text[1:]
+
+
+def _colour_bar_svg(raster, folder: Path):
+    renderer = raster.renderer()
+    items = renderer.shader().rasterShaderFunction().colorRampItemList()
+    stops = [(item.value, item.color.name()) for item in items]
+    svg = bar.colour_bar_svg(stops, renderer.classificationMin(), renderer.classificationMax(), UNITS)
+    path = folder / "colour_bar.svg"
+    path.write_text(svg, encoding="utf-8")
+    width, height = bar.colour_bar_size()
+    return path, width, height
 
 
 def render_anomaly_map(
@@ -86,12 +108,17 @@ def render_anomaly_map(
     stations=None,
     title: str | None = None,
     width_px: int = 1600,
+    smooth: bool = True,
 ) -> Path:
     """Render the anomaly map to ``png_path`` and return its path.
 
     The page is always :data:`PAGE_WIDTH` mm wide and ``width_px`` only sets
     the resolution, so text, legend and map keep their proportions at any
-    image size.
+    image size. The caption reads the provenance records of the raster and
+    the stations (density, standard, contour interval, date); what they do
+    not hold is said ("not recorded") or taken from the layers (contour
+    interval from the contour levels, station count from the station layer,
+    today's date as the drawing date).
 
     Parameters
     ----------
@@ -105,11 +132,14 @@ def render_anomaly_map(
         Map title; default "Complete Bouguer anomaly".
     width_px : int
         Image width in pixels; the height follows the raster's aspect.
+    smooth : bool
+        Bilinear display resampling (default); False shows the cells.
     """
     png_path = Path(png_path)
     project = QgsProject()
     raster = _as_layer(raster_path, "raster", _tr("Anomaly (mGal)"))
     style_anomaly_raster(raster, _tr("Anomaly (mGal)"))
+    set_smooth_resampling(raster, smooth)
     layers = [raster]
     contour_layer = _as_layer(contours, "vector", _tr("Contours (mGal)"))
     if contour_layer is not None:
@@ -122,83 +152,61 @@ def render_anomaly_map(
     # Added bottom layer first: the layer tree (and so the legend) then lists
     # stations, contours, raster from the top.
     project.addMapLayers(list(reversed(layers)))
-    # One legend entry per colour stop, highest on top, so the uneven
-    # (equalised) stop values can be read; the first entry repeats the band
-    # name, which the layer name already gives, so it is left out.
-    n_stops = len(raster.renderer().shader().rasterShaderFunction().colorRampItemList())
-    raster_node = project.layerTreeRoot().findLayer(raster.id())
-    QgsMapLayerLegendUtils.setLegendNodeOrder(raster_node, list(range(n_stops, 0, -1)))
     project.setCrs(raster.crs())
 
-    mm = QgsUnitTypes.LayoutMillimeters
+    records = [read_record(path) for path in (_source_path(raster_path), _source_path(stations)) if path]
+    facts = run_facts(records)
+    interval = facts.contour_interval
+    if contour_layer is not None and not interval:
+        interval = interval_from_levels(feature["value"] for feature in contour_layer.getFeatures())
+    if contour_layer is None:
+        interval = None
+    count = station_layer.featureCount() if station_layer is not None else None
+    today = _dt.date.today().isoformat()
+    QgsExpressionContextUtils.setProjectVariable(project, CAPTION_VARIABLE, map_caption(facts, count, interval, today))
+
     extent = raster.extent()
-    map_width = PAGE_WIDTH - 3 * MARGIN - LEGEND_WIDTH
+    map_width = PAGE_WIDTH - 2 * MARGIN - ANNOTATION_SPACE - GAP - SIDE_WIDTH
     map_height = map_width * extent.height() / extent.width()
     if map_height > MAX_MAP_HEIGHT:  # tall survey: keep the page printable
         map_width *= MAX_MAP_HEIGHT / map_height
         map_height = MAX_MAP_HEIGHT
-    map_top = MARGIN + TITLE_HEIGHT
 
-    layout = QgsPrintLayout(project)
-    layout.initializeDefaults()
+    work = Path(tempfile.mkdtemp(prefix="relief_gravity_map_"))
+    try:
+        layout, page_width, page_height = build_layout(
+            project,
+            raster.crs(),
+            extent,
+            map_width,
+            map_height,
+            title or _tr("Complete Bouguer anomaly"),
+            colour_bar=_colour_bar_svg(raster, work),
+            legend_layers=layers[:-1],
+            kilometres=extent.width() > 4000.0,
+        )
+        layout.itemById("main_map").setLayers(layers)
+        dpi = width_px / page_width * 25.4
+        settings = QgsLayoutExporter.ImageExportSettings()
+        settings.dpi = dpi
+        settings.generateWorldFile = False
+        # Exact pixel size: mm -> px rounding would otherwise lose a pixel.
+        settings.imageSize = QSize(int(width_px), int(round(page_height / 25.4 * dpi)))
+        png_path.parent.mkdir(parents=True, exist_ok=True)
+        export_png(layout, png_path, settings)
+    finally:
+        shutil.rmtree(work, ignore_errors=True)
+    return png_path
 
-    heading = _label(layout, title or _tr("Complete Bouguer anomaly"), 16, bold=True)
-    heading.attemptMove(QgsLayoutPoint(MARGIN, MARGIN, mm))
-    heading.attemptResize(QgsLayoutSize(PAGE_WIDTH - 2 * MARGIN, TITLE_HEIGHT, mm))
 
-    map_item = QgsLayoutItemMap(layout)
-    map_item.attemptMove(QgsLayoutPoint(MARGIN, map_top, mm))
-    map_item.attemptResize(QgsLayoutSize(map_width, map_height, mm))
-    map_item.setCrs(raster.crs())
-    map_item.setLayers(layers)
-    map_item.setExtent(extent)
-    map_item.setFrameEnabled(True)
-    layout.addLayoutItem(map_item)
-
-    legend = QgsLayoutItemLegend(layout)
-    legend.setTitle(_tr("Legend"))
-    legend.setLinkedMap(map_item)
-    legend.setLegendFilterByMapEnabled(False)
-    legend.setResizeToContents(True)
-    layout.addLayoutItem(legend)
-    legend.attemptMove(QgsLayoutPoint(2 * MARGIN + map_width, map_top, mm))
-    legend.adjustBoxSize()
-
-    scale_bar = QgsLayoutItemScaleBar(layout)
-    scale_bar.setStyle("Single Box")
-    scale_bar.setLinkedMap(map_item)
-    kilometres = extent.width() > 4000.0
-    scale_bar.setUnits(QgsUnitTypes.DistanceKilometers if kilometres else QgsUnitTypes.DistanceMeters)
-    scale_bar.setUnitLabel(_tr("km") if kilometres else _tr("m"))
-    scale_bar.applyDefaultSize(scale_bar.units())
-    layout.addLayoutItem(scale_bar)
-    scale_bar.attemptMove(QgsLayoutPoint(MARGIN, map_top + map_height + 3.0, mm))
-    scale_bar.refresh()
-
-    # The caution sits below whichever is lower: scale bar or legend.
-    content_bottom = max(
-        scale_bar.pos().y() + scale_bar.rect().height(),
-        legend.pos().y() + legend.rect().height(),
-    )
-    caution = _label(layout, QCoreApplication.translate("ReliefGravityAlgorithm", CAUTION), 7)
-    caution.setHAlign(Qt.AlignLeft)
-    caution.attemptMove(QgsLayoutPoint(MARGIN, content_bottom + 4.0, mm))
-    caution.attemptResize(QgsLayoutSize(PAGE_WIDTH - 2 * MARGIN, CAUTION_HEIGHT, mm))
-    page_height = content_bottom + 4.0 + CAUTION_HEIGHT + MARGIN
-    layout.pageCollection().page(0).setPageSize(QgsLayoutSize(PAGE_WIDTH, page_height, mm))
-
-    dpi = width_px / PAGE_WIDTH * 25.4
-    settings = QgsLayoutExporter.ImageExportSettings()
-    settings.dpi = dpi
-    settings.generateWorldFile = False
-    # Exact pixel size: mm -> px rounding would otherwise lose a pixel.
-    settings.imageSize = QSize(int(width_px), int(round(page_height / 25.4 * dpi)))
-    png_path.parent.mkdir(parents=True, exist_ok=True)
+def export_png(layout, png_path, settings=None) -> None:
+    """Export a layout to PNG, raising RuntimeError when QGIS reports a failure."""
     # After writing, QGIS 3.22 always reopens the image through GDAL for
     # update (georeference/metadata); GDAL's PNG driver refuses and prints
     # "ERROR 6" although the PNG is complete. Silence that one call.
     from osgeo import gdal
 
+    settings = settings or QgsLayoutExporter.ImageExportSettings()
     gdal.PushErrorHandler("CPLQuietErrorHandler")
     try:
         status = QgsLayoutExporter(layout).exportToImage(str(png_path), settings)
@@ -206,4 +214,3 @@ def render_anomaly_map(
         gdal.PopErrorHandler()
     if status != QgsLayoutExporter.Success:
         raise RuntimeError(_tr("Could not write the map image {} (layout export status {}).").format(png_path, status))
-    return png_path

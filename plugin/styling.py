@@ -2,17 +2,21 @@
 """Styles of the anomaly raster and its contours, and the layer post-processors that apply them.
 
 Raster: QGIS's built-in "Spectral" ramp, inverted so that lows are blue and
-highs red (the usual reading of anomaly maps), **histogram-equalised between
-the 2nd and 98th percentiles** of the valid cells: the ramp's colours are
-spaced evenly along the ramp but placed at equally spaced percentiles, so
-every colour covers about the same area of the map and a few extreme values
-cannot wash out the structure. Cells below the 2nd or above the 98th
-percentile take the end colours.
+highs red (the usual reading of anomaly maps), **stretched linearly between
+the 2nd and 98th percentiles** of the valid cells (a cumulative-count cut: a
+few extreme values cannot wash out the structure; cells beyond the cut take
+the end colours). The legend is one continuous colour bar in mGal, and the
+display is resampled bilinearly, so the cells do not show as blocks.
 
-Contours: thin dark lines labelled with their value along the line.
+Contours: index contours (every fifth level, i.e. at multiples of five
+contour intervals) heavier and labelled with their value; the levels
+between them thin and unlabelled. The interval is read from the layer's own
+levels by a QGIS expression, so the style fits any contour layer with a
+``value`` field.
 
 The same code writes the shipped ``.qml`` files (``tools/build_model.py
---styles``); see :func:`write_style_files`.
+--styles``); see :func:`write_style_files`. The raster file carries no value
+range: QGIS computes the 2-98 % cut of the data in view when it draws.
 """
 
 from __future__ import annotations
@@ -22,6 +26,7 @@ from pathlib import Path
 import numpy as np
 from qgis.core import (
     QgsBasicNumericFormat,
+    QgsBilinearRasterResampler,
     QgsColorRampLegendNodeSettings,
     QgsColorRampShader,
     QgsLayerMetadata,
@@ -30,12 +35,12 @@ from qgis.core import (
     QgsProcessingLayerPostProcessorInterface,
     QgsRasterMinMaxOrigin,
     QgsRasterShader,
+    QgsRuleBasedLabeling,
+    QgsRuleBasedRenderer,
     QgsSingleBandPseudoColorRenderer,
-    QgsSingleSymbolRenderer,
     QgsStyle,
     QgsTextBufferSettings,
     QgsTextFormat,
-    QgsVectorLayerSimpleLabeling,
 )
 from qgis.PyQt.QtCore import QCoreApplication
 from qgis.PyQt.QtGui import QColor
@@ -47,14 +52,33 @@ CONTOURS_QML = STYLES_DIR / "anomaly_contours.qml"
 #: Built-in QGIS ramp and its direction (inverted: blue low, red high).
 RAMP_NAME = "Spectral"
 RAMP_INVERTED = True
-#: Percentile window of the stretch and number of colour stops in it.
+#: Cumulative-count cut of the stretch (percent) and number of colour stops
+#: in it (equally spaced values: a linear stretch).
 LOW_PERCENTILE = 2.0
 HIGH_PERCENTILE = 98.0
 N_STOPS = 11
 UNITS = "mGal"
+#: Every INDEX_EVERY-th contour level (multiples of INDEX_EVERY intervals) is
+#: an index contour (common cartographic practice, no source).
+INDEX_EVERY = 5
 
 #: Label of a contour: its value without trailing zeros ("12.5", "-3", "0.25").
 CONTOUR_LABEL_EXPRESSION = "regexp_replace(format_number(\"value\", 3), '\\\\.?0+$', '')"
+
+#: The contour interval of the layer being drawn: the smallest step between
+#: its distinct levels (0 when it has fewer than two).
+CONTOUR_INTERVAL_EXPRESSION = (
+    "with_variable('rg_levels', array_sort(array_distinct(aggregate(@layer, 'array_agg', \"value\"))), "
+    "if(array_length(@rg_levels) < 2, 0, array_min(array_foreach(generate_series(1, array_length(@rg_levels) - 1), "
+    "@rg_levels[@element] - @rg_levels[@element - 1]))))"
+)
+
+#: True for an index contour: its value is a whole multiple of INDEX_EVERY
+#: intervals (every level is one when the layer has a single level).
+INDEX_CONTOUR_EXPRESSION = (
+    "with_variable('rg_step', {every} * ({interval}), "
+    "@rg_step <= 0 or abs(\"value\" / @rg_step - round(\"value\" / @rg_step)) < 1e-6)"
+).format(every=INDEX_EVERY, interval=CONTOUR_INTERVAL_EXPRESSION)
 
 
 def _tr(text: str) -> str:
@@ -69,23 +93,20 @@ def anomaly_colour_ramp():
     return ramp
 
 
-def equalised_stops(values, n_stops: int = N_STOPS, low: float = LOW_PERCENTILE, high: float = HIGH_PERCENTILE):
-    """Stop values: ``n_stops`` equally spaced percentiles from ``low`` to ``high`` (NaN ignored).
+def stretch_limits(values, low: float = LOW_PERCENTILE, high: float = HIGH_PERCENTILE) -> tuple[float, float]:
+    """The ``low`` and ``high`` percentiles of the finite values: the linear stretch.
 
-    Returns an increasing array; repeated percentiles (flat data) are spread
-    linearly so the shader always has strictly increasing stops.
+    Flat or empty data get a 1-wide window around their value (0 when
+    empty), so the shader always has an increasing range.
     """
     finite = np.asarray(values, dtype=float)
     finite = finite[np.isfinite(finite)]
     if finite.size == 0:
-        return np.linspace(0.0, 1.0, n_stops)
-    stops = np.percentile(finite, np.linspace(low, high, n_stops))
-    if not np.all(np.diff(stops) > 0):
-        lo, hi = float(stops[0]), float(stops[-1])
-        if hi <= lo:
-            lo, hi = lo - 0.5, lo + 0.5
-        stops = np.linspace(lo, hi, n_stops)
-    return stops
+        return -0.5, 0.5
+    lo, hi = (float(v) for v in np.percentile(finite, [low, high]))
+    if not hi > lo:
+        lo, hi = lo - 0.5, lo + 0.5
+    return lo, hi
 
 
 def _raster_values(layer) -> np.ndarray:
@@ -120,60 +141,73 @@ def _read_values(layer) -> np.ndarray:
     return _raster_values(layer)
 
 
-def raster_renderer(layer, values=None) -> QgsSingleBandPseudoColorRenderer:
-    """The anomaly renderer for ``layer`` (histogram-equalised, 2-98 %)."""
-    if values is None:
-        values = _read_values(layer)
-    stops = equalised_stops(values)
+def raster_renderer(layer, values=None, follow_view: bool = False) -> QgsSingleBandPseudoColorRenderer:
+    """The anomaly renderer for ``layer``: Spectral, linear 2-98 % stretch, continuous legend.
+
+    ``follow_view=True`` lets QGIS recompute the cut from the data in view
+    each time it draws (what the shipped ``.qml`` does, so it fits any
+    raster); otherwise the cut is the whole raster's, computed here.
+    """
+    if follow_view:
+        # Placeholder range: QGIS replaces it with the cut of the data in
+        # view on the first draw, so nothing of this raster stays in a .qml.
+        lo, hi = 0.0, 1.0
+    else:
+        lo, hi = stretch_limits(_read_values(layer) if values is None else values)
     ramp = anomaly_colour_ramp()
-    decimals = 2 if stops[-1] - stops[0] < 10 else 1
+    decimals = 2 if hi - lo < 10 else 1
     items = [
-        QgsColorRampShader.ColorRampItem(
-            float(value), ramp.color(k / (len(stops) - 1)), "{:.{}f}".format(value, decimals)
-        )
-        for k, value in enumerate(stops)
+        QgsColorRampShader.ColorRampItem(float(value), ramp.color(k / (N_STOPS - 1)), "{:.{}f}".format(value, decimals))
+        for k, value in enumerate(np.linspace(lo, hi, N_STOPS))
     ]
-    shader = QgsColorRampShader(float(stops[0]), float(stops[-1]))
+    shader = QgsColorRampShader(lo, hi)
     shader.setSourceColorRamp(anomaly_colour_ramp())
     shader.setColorRampType(QgsColorRampShader.Interpolated)
-    # Quantile mode: "Classify" in Layer Properties redoes the equalisation.
-    shader.setClassificationMode(QgsColorRampShader.Quantile)
+    # Continuous mode: a new min/max spreads the stops evenly again.
+    shader.setClassificationMode(QgsColorRampShader.Continuous)
     shader.setColorRampItemList(items)
     shader.setClip(False)
     shader.setLabelPrecision(decimals)
     legend = QgsColorRampLegendNodeSettings()
-    # One entry per stop: the equalised stop values are uneven, and a
-    # two-label gradient bar would hide that.
-    legend.setUseContinuousLegend(False)
+    legend.setUseContinuousLegend(True)
     legend.setSuffix(" " + UNITS)
     number_format = QgsBasicNumericFormat()
     number_format.setNumberDecimalPlaces(decimals)
-    number_format.setShowTrailingZeros(True)
+    number_format.setShowTrailingZeros(False)
     legend.setNumericFormat(number_format)
     shader.setLegendSettings(legend)
     raster_shader = QgsRasterShader()
     raster_shader.setRasterShaderFunction(shader)
     renderer = QgsSingleBandPseudoColorRenderer(layer.dataProvider(), 1, raster_shader)
-    renderer.setClassificationMin(float(stops[0]))
-    renderer.setClassificationMax(float(stops[-1]))
+    renderer.setClassificationMin(lo)
+    renderer.setClassificationMax(hi)
     origin = QgsRasterMinMaxOrigin()
     origin.setLimits(QgsRasterMinMaxOrigin.CumulativeCut)
     origin.setCumulativeCutLower(LOW_PERCENTILE / 100.0)
     origin.setCumulativeCutUpper(HIGH_PERCENTILE / 100.0)
-    origin.setExtent(QgsRasterMinMaxOrigin.WholeRaster)
+    origin.setExtent(QgsRasterMinMaxOrigin.UpdatedCanvas if follow_view else QgsRasterMinMaxOrigin.WholeRaster)
     origin.setStatAccuracy(QgsRasterMinMaxOrigin.Exact)
     renderer.setMinMaxOrigin(origin)
     return renderer
 
 
-def style_anomaly_raster(layer, title: str = "", abstract: str = "") -> None:
-    """Apply the anomaly style and the mGal metadata to a raster layer.
+def set_smooth_resampling(layer, smooth: bool = True) -> None:
+    """Bilinear display resampling (or back to nearest neighbour with ``smooth=False``)."""
+    resampler = layer.resampleFilter()
+    resampler.setZoomedInResampler(QgsBilinearRasterResampler() if smooth else None)
+    resampler.setZoomedOutResampler(QgsBilinearRasterResampler() if smooth else None)
+    resampler.setMaxOversampling(2.0)
+
+
+def style_anomaly_raster(layer, title: str = "", abstract: str = "", follow_view: bool = False) -> None:
+    """Apply the anomaly style (colours, bilinear resampling) and the mGal metadata to a raster layer.
 
     Usable from the QGIS Python console to restyle a layer after its data
     changed: ``from relief_gravity.plugin.styling import style_anomaly_raster;
     style_anomaly_raster(iface.activeLayer())``.
     """
-    layer.setRenderer(raster_renderer(layer))
+    layer.setRenderer(raster_renderer(layer, follow_view=follow_view))
+    set_smooth_resampling(layer)
     title = title or _tr("Anomaly (mGal)")
     abstract = abstract or _tr("Gravity anomaly in mGal.")
     metadata = QgsLayerMetadata(layer.metadata())
@@ -189,8 +223,7 @@ def style_anomaly_raster(layer, title: str = "", abstract: str = "") -> None:
     layer.triggerRepaint()
 
 
-def contour_labeling() -> QgsVectorLayerSimpleLabeling:
-    """Labels along the contour lines, with their value."""
+def _label_settings() -> QgsPalLayerSettings:
     settings = QgsPalLayerSettings()
     settings.fieldName = CONTOUR_LABEL_EXPRESSION
     settings.isExpression = True
@@ -199,20 +232,44 @@ def contour_labeling() -> QgsVectorLayerSimpleLabeling:
     settings.repeatDistanceUnit = 0  # millimetres (QgsUnitTypes.RenderMillimeters)
     text = QgsTextFormat()
     text.setSize(7.0)
-    text.setColor(QColor(40, 40, 40))
+    text.setColor(QColor(30, 30, 30))
     buffer = QgsTextBufferSettings()
     buffer.setEnabled(True)
     buffer.setSize(0.8)
     buffer.setColor(QColor(255, 255, 255, 220))
     text.setBuffer(buffer)
     settings.setFormat(text)
-    return QgsVectorLayerSimpleLabeling(settings)
+    return settings
+
+
+def contour_labeling() -> QgsRuleBasedLabeling:
+    """Labels along the index contours only, with their value."""
+    root = QgsRuleBasedLabeling.Rule(None)
+    rule = QgsRuleBasedLabeling.Rule(_label_settings())
+    rule.setFilterExpression(INDEX_CONTOUR_EXPRESSION)
+    rule.setDescription(_tr("Index contours"))
+    root.appendChild(rule)
+    return QgsRuleBasedLabeling(root)
+
+
+def contour_renderer() -> QgsRuleBasedRenderer:
+    """Index contours 0.5 mm dark, the others 0.2 mm grey."""
+    root = QgsRuleBasedRenderer.Rule(None)
+    for label, width, colour, expression in (
+        (_tr("Index contour"), "0.5", "35,35,35,255", INDEX_CONTOUR_EXPRESSION),
+        (_tr("Contour"), "0.2", "70,70,70,220", "ELSE"),
+    ):
+        symbol = QgsLineSymbol.createSimple({"line_color": colour, "line_width": width})
+        rule = QgsRuleBasedRenderer.Rule(symbol, 0, 0, "" if expression == "ELSE" else expression, label)
+        if expression == "ELSE":
+            rule.setIsElse(True)
+        root.appendChild(rule)
+    return QgsRuleBasedRenderer(root)
 
 
 def style_contours(layer, name: str = "") -> None:
-    """Thin dark contour lines labelled with their value (mGal)."""
-    symbol = QgsLineSymbol.createSimple({"line_color": "50,50,50,255", "line_width": "0.25"})
-    layer.setRenderer(QgsSingleSymbolRenderer(symbol))
+    """Contour lines in mGal: index contours heavier and labelled, the others thin."""
+    layer.setRenderer(contour_renderer())
     layer.setLabeling(contour_labeling())
     layer.setLabelsEnabled(True)
     metadata = QgsLayerMetadata(layer.metadata())
@@ -278,14 +335,13 @@ def attach_contour_style(context, destination, name: str) -> bool:
 def write_style_files(raster_layer, contour_layer, folder: Path = STYLES_DIR) -> tuple[Path, Path]:
     """Style the two layers with the code above and save them as ``.qml`` files.
 
-    The raster file's colour stops are those of ``raster_layer``'s data: after
-    loading it onto another anomaly raster, press *Classify* in Layer
-    Properties > Symbology (the mode is Quantile, so the equalisation is
-    redone) or call :func:`style_anomaly_raster`.
+    The raster file's stretch follows the view (``follow_view=True``): QGIS
+    recomputes the 2-98 % cut from the raster it is applied to when it draws,
+    so no value range of ``raster_layer`` stays in the file.
     """
     folder = Path(folder)
     folder.mkdir(parents=True, exist_ok=True)
-    style_anomaly_raster(raster_layer)
+    style_anomaly_raster(raster_layer, follow_view=True)
     style_contours(contour_layer)
     paths = (folder / RASTER_QML.name, folder / CONTOURS_QML.name)
     for layer, path in zip((raster_layer, contour_layer), paths):

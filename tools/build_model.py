@@ -376,7 +376,7 @@ def build_styles(folder: Path) -> tuple[Path, Path]:
 def main(argv=None) -> int:
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     parser.add_argument("--output", type=Path, default=MODEL_PATH, help="model file to write")
-    parser.add_argument("--styles", action="store_true", help="also write plugin/styles/*.qml")
+    parser.add_argument("--styles", action="store_true", help="also write plugin/styles/*.qml and plugin/layouts/*.qpt")
     args = parser.parse_args(argv)
 
     from qgis.core import QgsApplication
@@ -407,6 +407,14 @@ def main(argv=None) -> int:
         if args.styles:
             for path in build_styles(REPO_ROOT / "plugin" / "styles"):
                 print(f"wrote {path}")
+            from relief_gravity.plugin.map_layout import write_layout_template
+
+            template = REPO_ROOT / "plugin" / "layouts" / "anomaly_map.qpt"
+            template.parent.mkdir(parents=True, exist_ok=True)
+            if not write_layout_template(template):
+                print(f"could not write {template}", file=sys.stderr)
+                return 1
+            print(f"wrote {template}")
     finally:
         plugin.unload()
         app.exitQgis()

@@ -7,8 +7,8 @@
 set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 PACKAGES="qgis python3-qgis qgis-providers python3-scipy python3-pytest python3-attr python3-venv pyqt5-dev-tools qttools5-dev-tools"
-# Figures of the density estimate (plugin/density_plot.py).
-PACKAGES="$PACKAGES python3-matplotlib"
+# Figures of the density estimate and the survey report (matplotlib); the report's headless-browser test (chromium).
+PACKAGES="$PACKAGES python3-matplotlib chromium"
 # Test-only: what harmonica (reference for upward continuation) needs from Debian.
 PACKAGES="$PACKAGES python3-xarray python3-pooch python3-sklearn python3-dask"
 # Test-only references for the Earth tide (Sun and Moon positions; tidegravity's times).

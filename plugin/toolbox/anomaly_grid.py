@@ -107,9 +107,10 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
             "<p>Stations with an empty or non-numeric value are skipped and counted in the log; "
             "at least 3 are needed. The stations must be in a projected CRS (metres): "
             "reproject a layer in degrees first.</p>"
-            "<p>When loaded into a project the raster gets a histogram-equalised colour ramp "
-            "between the 2nd and 98th percentiles and the contours are labelled. The same "
-            "styles ship as .qml files in the plugin's plugin/styles folder.</p>"
+            "<p>When loaded into a project the raster gets a colour ramp stretched linearly "
+            "between the 2nd and 98th percentiles with bilinear smoothing, and every fifth "
+            "contour is drawn heavier and labelled. The same styles ship as .qml files in the "
+            "plugin's plugin/styles folder.</p>"
             "<p>{}</p>"
         ).format(self.caution())
 
