@@ -373,5 +373,5 @@ def record_provenance(algorithm_id, output, parameters, input_source, settings, 
     step = provenance.make_step(algorithm_id, plain_parameters(parameters), settings)
     try:
         provenance.write_record(str(output), provenance.chained(previous, step))
-    except OSError as error:
+    except (OSError, RuntimeError) as error:
         feedback.pushWarning(_tr("The provenance record could not be written: {}").format(error))
