@@ -96,7 +96,9 @@ def prepare_heights(table, raw, height_datum, dem_datum, given_geoid, placed, fe
         in_dem = raw + station_offset - dem_offset
         ellipsoidal = raw + station_offset
         if dem is not None:
-            scale = height_scale_problem(in_dem, dem)
+            # Compared in the stations' own datum, so a wrong unit scales
+            # the geoid height too and the two stay comparable.
+            scale = height_scale_problem(raw, np.asarray(dem) + dem_offset - station_offset)
             if scale is not None:
                 raise QgsProcessingException(_height_scale_sentence(scale, declared_units, raw, dem))
     if height_datum == datums.STATION_ELLIPSOIDAL:
