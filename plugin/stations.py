@@ -167,6 +167,9 @@ def read_stations(source, context, feedback) -> StationTable:
     bad = ~np.isnan(lat) & ((np.abs(lat) > 90.0) | (np.abs(lon) > 360.0))
     lat[bad] = np.nan
     lon[bad] = np.nan
+    unsound = _round_trip_fails(crs, table.x, table.y, lon, lat, context.transformContext())
+    lon[unsound] = np.nan
+    lat[unsound] = np.nan
     check_area_of_use(crs, table.x, table.y, lon, lat)
     table.flag_where(bad, "bad_latitude")
     table.flag_where(np.isnan(lat) & ~np.isnan(table.x) & ~bad, "no_position")
@@ -195,6 +198,30 @@ def _station_point(geometry):
     if max(xs) - min(xs) > SAME_POINT or max(ys) - min(ys) > SAME_POINT:
         return math.nan, math.nan, True
     return xs[0], ys[0], False
+
+
+def _round_trip_fails(crs, x, y, lon, lat, transform_context) -> np.ndarray:
+    """Stations whose latitude/longitude does not transform back to their coordinates.
+
+    Map projections' inverse formulas wrap absurd inputs to real-looking
+    places (a UTM northing of 1e12 m comes back as 32 N); the way back
+    exposes them. Tolerance 1 m, or 1e-7 of the coordinate (common practice,
+    no source).
+    """
+    bad = np.zeros(len(x), dtype=bool)
+    if crs.isGeographic():
+        return bad
+    back = QgsCoordinateTransform(GEOGRAPHIC, crs, transform_context)
+    for i in np.flatnonzero(np.isfinite(lon) & np.isfinite(lat)):
+        try:
+            point = back.transform(float(lon[i]), float(lat[i]))
+        except QgsCsException:
+            bad[i] = True
+            continue
+        tolerance = max(1.0, 1e-7 * max(abs(x[i]), abs(y[i])))
+        if not (abs(point.x() - x[i]) <= tolerance and abs(point.y() - y[i]) <= tolerance):
+            bad[i] = True
+    return bad
 
 
 def check_area_of_use(crs, x, y, lon, lat) -> None:
