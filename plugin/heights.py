@@ -244,3 +244,22 @@ def geoid_description(height_datum: int, dem_datum: int) -> str:
     if height_datum == datums.STATION_GEOID_GIVEN:
         parts.append("station geoid heights from GEOID_FIELD or GEOID_RASTER")
     return "; ".join(parts) or "none (ellipsoidal heights and DEM)"
+
+
+def warn_partial_coverage(coverage, outer_radius: float, regional_given: bool, feedback) -> None:
+    """Say plainly in the log when the rasters do not reach the outer radius."""
+    cover = np.asarray(coverage, dtype=float)
+    short = np.isfinite(cover) & (cover < 0.99)
+    if not short.any():
+        return
+    advice = (
+        _tr("Give a regional elevation raster (REGIONAL_DEM) reaching {:.1f} km around every station.")
+        if not regional_given
+        else _tr("The regional elevation raster does not reach {:.1f} km around these stations; extend it.")
+    ).format(outer_radius / 1000.0)
+    feedback.pushWarning(
+        _tr(
+            "{} station(s) have elevation data over only part of the correction area (lowest tc_cover {:.2f}); "
+            "their terrain correction misses the far terrain (flagged tc_partial). {}"
+        ).format(int(short.sum()), float(np.nanmin(cover[short])), advice)
+    )

@@ -208,7 +208,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
         self.addParameter(
             QgsProcessingParameterNumber(
                 self.DENSITY,
-                _tr("Reduction density (kg/m³, 500-5000)"),
+                _tr("Reduction density (kg/m³)"),
                 type=QgsProcessingParameterNumber.Double,
                 defaultValue=2670.0,
             )
@@ -224,7 +224,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
             )
         ]
         for key, label, default in (
-            (self.INNER_RADIUS, _tr("Inner zone radius (m, above 0 and below the outer radius)"), self.DEFAULT_INNER_RADIUS),
+            (self.INNER_RADIUS, _tr("Inner zone radius (m)"), self.DEFAULT_INNER_RADIUS),
             (self.OUTER_RADIUS, _tr("Outer zone radius (m)"), 166735.0),
         ):
             definitions.append(

@@ -27,7 +27,15 @@ from ...algorithms.plausibility import (
     gravity_out_of_range,
     gravity_to_mgal,
 )
-from ..heights import DEM_DATUM_KEYS, HEIGHT_DATUM_KEYS, check_dem_values, flag_mismatches, geoid_description, prepare_heights
+from ..heights import (
+    DEM_DATUM_KEYS,
+    HEIGHT_DATUM_KEYS,
+    check_dem_values,
+    flag_mismatches,
+    geoid_description,
+    prepare_heights,
+    warn_partial_coverage,
+)
 from ..raster_io import raster_path
 from ..stations import write_stations
 from ..terrain_run import EXACT, compute_terrain, place_stations
@@ -334,6 +342,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             }
             engine_columns.update({k: terrain[k] for k in terrain if k in ENGINE_EXTRA_FIELDS})
             flag_mismatches(table, terrain["dem_diff"], heights, placed, height_datum, dem_datum, feedback)
+            warn_partial_coverage(terrain["coverage"], outer, regional is not None, feedback)
         else:
             tc_total = np.full(len(table), np.nan)
             feedback.pushWarning(

@@ -18,7 +18,15 @@ from qgis.core import (
 )
 from qgis.PyQt.QtCore import QVariant
 
-from ..heights import DEM_DATUM_KEYS, HEIGHT_DATUM_KEYS, check_dem_values, flag_mismatches, geoid_description, prepare_heights
+from ..heights import (
+    DEM_DATUM_KEYS,
+    HEIGHT_DATUM_KEYS,
+    check_dem_values,
+    flag_mismatches,
+    geoid_description,
+    prepare_heights,
+    warn_partial_coverage,
+)
 from ..raster_io import raster_path
 from ..stations import write_stations
 from ..terrain_run import EXACT, compute_terrain, place_stations
@@ -220,6 +228,7 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
             columns.update({k: result[k] for k in result if k in ENGINE_EXTRA_FIELDS})
             added += [(k, QVariant.Double) for k in columns if k not in dict(added)]
             flag_mismatches(table, result["dem_diff"], heights, placed, height_datum, dem_datum, feedback)
+            warn_partial_coverage(result["coverage"], outer, regional is not None, feedback)
         elif self.parameterAsBoolean(parameters, self.ZONE_FIELDS, context):
             for letter in HAMMER_ZONE_LETTERS:
                 if letter in result["zones"]:
