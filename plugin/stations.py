@@ -359,3 +359,5 @@ def write_stations(sink, table: StationTable, fields: QgsFields, indices: dict, 
         out.setAttributes(attributes)
         if not sink.addFeature(out, QgsFeatureSink.FastInsert):
             raise QgsProcessingException(_tr("Could not write a station to the output layer."))
+        if feedback is not None:
+            feedback.setProgress(100.0 * (i + 1) / len(table.features))

@@ -284,3 +284,42 @@ def test_integer_faa_input_gives_real_grid(survey, tmp_path, points_writer):
     assert band.DataType == gdal.GDT_Float32
     values = band.ReadAsArray()
     assert not np.allclose(values, np.round(values))
+
+
+class _CancelLater:
+    """A feedback that cancels once the run has reported more than ``at`` % progress."""
+
+    @staticmethod
+    def make(at):
+        from qgis.core import QgsProcessingFeedback
+
+        class Feedback(QgsProcessingFeedback):
+            def __init__(self):
+                super().__init__()
+                self.seen = 0.0
+                self.progressChanged.connect(self._check)
+
+            def _check(self, value):
+                self.seen = max(self.seen, value)
+                if value > at:
+                    self.cancel()
+
+        return Feedback()
+
+
+@pytest.mark.parametrize("at", [20.0, 45.0, 70.0])
+def test_cancel_during_the_run_raises_and_leaves_nothing(survey, tmp_path, at):
+    from qgis.core import QgsProcessingException
+
+    params = {"INPUT": str(survey["stations"]), "GRAVITY_FIELD": "g_obs", "HEIGHT_FIELD": "h", "DEM": str(survey["dem"]),
+              "DEM_DATUM": 1, "OUTER_RADIUS": sc.OUTER, "OUTPUT": str(tmp_path / "out.gpkg")}
+    feedback = _CancelLater.make(at)
+    with pytest.raises(QgsProcessingException, match="[Cc]ancel"):
+        sc.run("bouguerreduction", params, feedback)
+    assert feedback.seen > at
+    assert sc.leftovers(tmp_path) == []
+    feedback = _CancelLater.make(at)
+    with pytest.raises(QgsProcessingException, match="[Cc]ancel"):
+        sc.run("anomalygrid", {"INPUT": str(survey["stations"]), "FIELD": "g_obs", "OUTPUT": str(tmp_path / "out.tif"),
+                               "CONTOURS": str(tmp_path / "out_iso.gpkg")}, feedback)
+    assert sc.leftovers(tmp_path) == []
