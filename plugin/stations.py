@@ -238,8 +238,10 @@ def check_area_of_use(crs, x, y, lon, lat) -> None:
     if not finite.any():
         return
     unplaced = finite & ~np.isfinite(lat)
-    if not crs.isGeographic() and np.any(finite & (np.abs(x) <= 360.0) & (np.abs(y) <= 90.0)):
-        index = int(np.flatnonzero(finite & (np.abs(x) <= 360.0) & (np.abs(y) <= 90.0))[0])
+    # (0, 0) is a common placeholder for "no position": left to the area check.
+    degree_like = finite & (np.abs(x) <= 360.0) & (np.abs(y) <= 90.0) & ~((x == 0) & (y == 0))
+    if not crs.isGeographic() and np.any(degree_like):
+        index = int(np.flatnonzero(degree_like)[0])
         raise QgsProcessingException(
             _tr(
                 "Station {} has coordinates ({:.6g}, {:.6g}) that look like longitude and latitude, "
