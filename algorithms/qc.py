@@ -74,6 +74,15 @@ VOCABULARY = {
         ("density_default", INFO, "Density missing for this station: the default density was used."),
         ("density_unusual", WARNING, "Density outside 1000-3500 kg/m3: check its units."),
     ),
+    # --- station inputs: datums, units, geometry (issue 8) ------------------
+    **_entries(
+        ("multipart_distinct", NOT_COMPUTED, "The station is a multi-part point whose parts lie apart: its position is ambiguous."),
+        ("gravity_implausible", NOT_COMPUTED, "Observed gravity outside Earth's range (975000-984000 mGal) after units: no anomaly computed."),
+        ("density_bad", NOT_COMPUTED, "Density outside 500-5000 kg/m3: no Bouguer anomaly computed for this station."),
+        ("height_dem_mismatch", WARNING, "Station height disagrees with the DEM by more than the local relief explains (see dem_diff)."),
+        ("geoid_missing", NOT_COMPUTED, "No geoid height at the station: its heights cannot be converted between datums."),
+        ("no_tc", NOT_COMPUTED, "No terrain correction for this station: no complete Bouguer anomaly."),
+    ),
     # --- terrain correction -------------------------------------------------
     **_entries(
         ("outside_dem", NOT_COMPUTED, "The station lies outside the elevation raster: no terrain correction."),

@@ -122,6 +122,10 @@ def main(argv: list[str]) -> int:
             "HEIGHT_FIELD": "elev_m",
             "DEM": str(files["dem"]),
             "REGIONAL_DEM": str(files["regional"]),
+            # Corvahl's invented world has sea level on the ellipsoid: station
+            # heights and both DEMs are heights above the ellipsoid (demo/README.md).
+            "HEIGHT_DATUM": 0,
+            "DEM_DATUM": 1,
             "DENSITY": 2670.0,
             "OUTPUT": str(reduced_path),
         },

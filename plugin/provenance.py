@@ -87,15 +87,23 @@ def read_record(path: str, layer: str | None = None) -> dict | None:
     text = None
     gdal.PushErrorHandler("CPLQuietErrorHandler")
     try:
+        # With gdal.UseExceptions() (set by other modules) a file that is
+        # not of the kind tried raises instead of returning None.
         if file_path.lower().endswith(".gpkg") or layer is not None:
-            ds = ogr.Open(file_path, 0)
+            try:
+                ds = ogr.Open(file_path, 0)
+            except RuntimeError:
+                ds = None
             if ds is not None:
                 lyr = ds.GetLayerByName(layer) if layer else ds.GetLayer(0)
                 if lyr is not None:
                     text = lyr.GetMetadataItem(KEY)
                 ds = None
         if text is None and not file_path.lower().endswith(".gpkg"):
-            ds = gdal.Open(file_path)
+            try:
+                ds = gdal.Open(file_path)
+            except RuntimeError:
+                ds = None
             if ds is not None:
                 text = ds.GetMetadataItem(KEY)
                 ds = None

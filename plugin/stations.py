@@ -25,6 +25,8 @@ from qgis.core import (
 )
 from qgis.PyQt.QtCore import QCoreApplication, QVariant
 
+from .flags import code_of, merged_flag, notes_for
+
 GEOGRAPHIC = QgsCoordinateReferenceSystem("EPSG:4326")
 
 
@@ -58,8 +60,10 @@ class StationTable:
         return len(self.features)
 
     def flag(self, index: int, reason: str) -> None:
-        if reason and reason not in self.flags[index]:
-            self.flags[index].append(reason)
+        """Add a flag code (a reason given as text is mapped to its code)."""
+        code = code_of(reason)
+        if code and code not in self.flags[index]:
+            self.flags[index].append(code)
 
     def flag_where(self, mask: np.ndarray, reason: str) -> None:
         for index in np.flatnonzero(mask):
@@ -71,13 +75,14 @@ class StationTable:
             for reason in str(joined).split(";"):
                 self.flag(index, reason.strip())
 
-    def field_values(self, name: str | None, scale: float = 1.0, label: str = "") -> np.ndarray:
-        """Numeric attribute as a float array (NaN where NULL or not a number)."""
+    def field_values(self, name: str | None, scale: float = 1.0, missing_code: str = "") -> np.ndarray:
+        """Numeric attribute as a float array (NaN where NULL or not a number),
+        flagged ``missing_code`` where missing."""
         if not name:
             return np.full(len(self), np.nan)
         values = np.array([as_float(f[name]) for f in self.features], dtype=float) * scale
-        if label:
-            self.flag_where(np.isnan(values), _tr("no {}").format(label))
+        if missing_code:
+            self.flag_where(np.isnan(values), missing_code)
         return values
 
     def coordinates_in(self, crs, transform_context) -> tuple[np.ndarray, np.ndarray]:
@@ -128,20 +133,18 @@ def read_stations(source, context, feedback) -> StationTable:
                 "CRS (Layer Properties > Source) so latitudes can be computed."
             )
         )
-    features, xs, ys = [], [], []
+    features, xs, ys, multipart = [], [], [], []
     total = source.featureCount() or 0
     for i, feature in enumerate(source.getFeatures(QgsFeatureRequest())):
         if feedback is not None and feedback.isCanceled():
             raise QgsProcessingException(_tr("Cancelled by the user."))
         features.append(QgsFeature(feature))
         geometry = feature.geometry()
-        if geometry is None or geometry.isNull() or geometry.isEmpty():
-            xs.append(math.nan)
-            ys.append(math.nan)
-        else:
-            point = geometry.centroid().asPoint() if geometry.isMultipart() else geometry.asPoint()
-            xs.append(point.x())
-            ys.append(point.y())
+        x, y, distinct = _station_point(geometry)
+        xs.append(x)
+        ys.append(y)
+        if distinct:
+            multipart.append(i)
         if feedback is not None and total:
             feedback.setProgress(100.0 * (i + 1) / total)
     if not features:
@@ -157,32 +160,166 @@ def read_stations(source, context, feedback) -> StationTable:
         flags=[[] for _ in features],
     )
     table.source_crs = crs
-    table.flag_where(np.isnan(table.x), _tr("no geometry"))
+    for index in multipart:
+        table.flag(index, "multipart_distinct")
+    table.flag_where(np.isnan(table.x) & ~np.isin(np.arange(len(features)), multipart), "no_geometry")
     lon, lat = table.coordinates_in(GEOGRAPHIC, context.transformContext())
     bad = ~np.isnan(lat) & ((np.abs(lat) > 90.0) | (np.abs(lon) > 360.0))
     lat[bad] = np.nan
     lon[bad] = np.nan
-    table.flag_where(bad, _tr("latitude out of range"))
-    table.flag_where(np.isnan(lat) & ~np.isnan(table.x) & ~bad, _tr("position not transformable"))
+    unsound = _round_trip_fails(crs, table.x, table.y, lon, lat, context.transformContext())
+    lon[unsound] = np.nan
+    lat[unsound] = np.nan
+    check_area_of_use(crs, table.x, table.y, lon, lat)
+    table.flag_where(bad, "bad_latitude")
+    table.flag_where(np.isnan(lat) & ~np.isnan(table.x) & ~bad, "no_position")
     table.longitude, table.latitude = lon, lat
     return table
+
+
+#: Parts of a multi-part station closer than this (layer units) count as one
+#: point (common practice, no source: a duplicated vertex, not two places).
+SAME_POINT = 0.01
+
+
+def _station_point(geometry):
+    """(x, y, distinct) of a station geometry: NaN for none; ``distinct`` when
+    a multi-part point has parts farther apart than ``SAME_POINT``."""
+    if geometry is None or geometry.isNull() or geometry.isEmpty():
+        return math.nan, math.nan, False
+    if not geometry.isMultipart():
+        point = geometry.asPoint()
+        return point.x(), point.y(), False
+    parts = geometry.asMultiPoint()
+    if not parts:
+        return math.nan, math.nan, False
+    xs = [p.x() for p in parts]
+    ys = [p.y() for p in parts]
+    if max(xs) - min(xs) > SAME_POINT or max(ys) - min(ys) > SAME_POINT:
+        return math.nan, math.nan, True
+    return xs[0], ys[0], False
+
+
+def _round_trip_fails(crs, x, y, lon, lat, transform_context) -> np.ndarray:
+    """Stations whose latitude/longitude does not transform back to their coordinates.
+
+    Map projections' inverse formulas wrap absurd inputs to real-looking
+    places (a UTM northing of 1e12 m comes back as 32 N); the way back
+    exposes them. Tolerance 1 m, or 1e-7 of the coordinate (common practice,
+    no source).
+    """
+    bad = np.zeros(len(x), dtype=bool)
+    if crs.isGeographic():
+        return bad
+    back = QgsCoordinateTransform(GEOGRAPHIC, crs, transform_context)
+    for i in np.flatnonzero(np.isfinite(lon) & np.isfinite(lat)):
+        try:
+            point = back.transform(float(lon[i]), float(lat[i]))
+        except QgsCsException:
+            bad[i] = True
+            continue
+        tolerance = max(1.0, 1e-7 * max(abs(x[i]), abs(y[i])))
+        if not (abs(point.x() - x[i]) <= tolerance and abs(point.y() - y[i]) <= tolerance):
+            bad[i] = True
+    return bad
+
+
+def check_area_of_use(crs, x, y, lon, lat) -> None:
+    """Stop when stations lie outside the CRS's area of use (by more than a margin).
+
+    Coordinates that no transformation can place, a northing of 1e12 m, or
+    longitude/latitude numbers in a layer declared projected give latitudes
+    that are not the station's; reducing them would give a wrong anomaly.
+    The margin is 10 % of the area's size, at least 1 degree (common
+    practice, no source: projected CRSs are often used a little beyond their
+    zone).
+    """
+    finite = np.isfinite(x) & np.isfinite(y)
+    if not finite.any():
+        return
+    unplaced = finite & ~np.isfinite(lat)
+    # (0, 0) is a common placeholder for "no position": left to the area check.
+    degree_like = finite & (np.abs(x) <= 360.0) & (np.abs(y) <= 90.0) & ~((x == 0) & (y == 0))
+    if not crs.isGeographic() and np.any(degree_like):
+        index = int(np.flatnonzero(degree_like)[0])
+        raise QgsProcessingException(
+            _tr(
+                "Station {} has coordinates ({:.6g}, {:.6g}) that look like longitude and latitude, "
+                "but the layer is declared in {} (units of metres). Assign the layer's true CRS "
+                "(for example EPSG:4326) in Layer Properties > Source, or reproject it."
+            ).format(index + 1, float(x[index]), float(y[index]), crs.authid() or crs.description())
+        )
+    bounds = crs.bounds()
+    outside = unplaced.copy()
+    if bounds is not None and not bounds.isEmpty() and bounds.width() > 0:
+        margin_x = max(1.0, 0.1 * bounds.width())
+        margin_y = max(1.0, 0.1 * bounds.height())
+        placed = np.isfinite(lon) & np.isfinite(lat)
+        # Longitudes compared modulo 360 so areas crossing the antimeridian work.
+        west, east = bounds.xMinimum() - margin_x, bounds.xMaximum() + margin_x
+        lon_ok = ((lon - west) % 360.0) <= (east - west) if east - west < 360 else np.ones_like(lon, bool)
+        lat_ok = (lat >= bounds.yMinimum() - margin_y) & (lat <= bounds.yMaximum() + margin_y)
+        outside |= placed & ~(lon_ok & lat_ok)
+    outside |= finite & np.isfinite(lat) & (np.abs(lat) > 90.0)
+    if np.any(outside):
+        index = int(np.flatnonzero(outside)[0])
+        raise QgsProcessingException(
+            _tr(
+                "{} station(s) lie outside the area of use of the layer's CRS {} (first: station {} at "
+                "{:.6g}, {:.6g}). Their latitudes would be wrong. Check the coordinates and assign the "
+                "layer's true CRS (Layer Properties > Source)."
+            ).format(
+                int(outside.sum()), crs.authid() or crs.description(), index + 1, float(x[index]), float(y[index])
+            )
+        )
+
+
+def check_point_layer(source) -> None:
+    """Stop with a sentence when the station layer is not a point layer."""
+    from qgis.core import QgsWkbTypes
+
+    kind = QgsWkbTypes.geometryType(source.wkbType())
+    if kind != QgsWkbTypes.PointGeometry:
+        raise QgsProcessingException(
+            _tr(
+                "The station layer holds {} geometries; stations must be points. Convert it first "
+                "(for example Vector > Geometry Tools > Centroids) or choose the point layer."
+            ).format(QgsWkbTypes.geometryDisplayString(kind))
+        )
+
+
+#: Text fields the algorithms write; every other added field is a real number.
+TEXT_FIELDS = ("qc_flag", "qc_note")
 
 
 def output_fields(input_fields: QgsFields, added: list[tuple[str, QVariant.Type]]):
     """Input fields followed by the added ones.
 
-    Returns the fields and, for each added name, its index. A name already in
-    the input is reused (its values are replaced in the output copy only).
+    Returns the fields, for each added name its index, and the names that
+    were already in the input. A name already in the input is reused (its
+    values are replaced in the output copy only) and retyped to the added
+    type, so results are real numbers whatever type the input field had
+    (an integer ``faa`` would round them).
     """
-    fields = QgsFields(input_fields)
-    indices, reused = {}, []
+    kinds = dict(added)
+    fields = QgsFields()
+    reused = []
+    for index in range(input_fields.count()):
+        original = input_fields.at(index)
+        name = original.name()
+        if name in kinds:
+            reused.append(name)
+            if original.type() != kinds[name]:
+                kind = kinds[name]
+                fields.append(QgsField(name, kind, len=254 if kind == QVariant.String else 0))
+                continue
+        fields.append(QgsField(original))
+    indices = {}
     for name, kind in added:
         index = fields.lookupField(name)
         if index < 0:
             fields.append(QgsField(name, kind, len=254 if kind == QVariant.String else 0))
             index = fields.lookupField(name)
-        else:
-            reused.append(name)
         indices[name] = index
     return fields, indices, reused
 
@@ -190,10 +327,18 @@ def output_fields(input_fields: QgsFields, added: list[tuple[str, QVariant.Type]
 def write_stations(sink, table: StationTable, fields: QgsFields, indices: dict, columns: dict, feedback) -> None:
     """Write a copy of every station with the computed columns filled in.
 
-    ``columns`` maps field name to a float array (NaN is written as NULL) or,
-    for ``qc_flag``, is derived from the table's flags.
+    ``columns`` maps field name to a float array (NaN is written as NULL).
+    Added fields not in ``columns`` keep the input's value (as a real number):
+    a run that does not recompute ``tc_inner`` keeps the earlier one.
+    ``qc_flag`` merges the input's codes with this run's; ``qc_note`` holds
+    their translated meanings.
     """
     n_input = len(table.features[0].fields()) if table.features else 0
+    kept = [
+        (name, index)
+        for name, index in indices.items()
+        if name not in columns and name not in TEXT_FIELDS and index < n_input
+    ]
     for i, feature in enumerate(table.features):
         if feedback is not None and feedback.isCanceled():
             raise QgsProcessingException(_tr("Cancelled by the user."))
@@ -202,10 +347,19 @@ def write_stations(sink, table: StationTable, fields: QgsFields, indices: dict, 
         for name, values in columns.items():
             value = float(values[i])
             attributes[indices[name]] = value if math.isfinite(value) else None
+        for name, index in kept:
+            value = as_float(attributes[index])
+            attributes[index] = value if math.isfinite(value) else None
         if "qc_flag" in indices:
-            attributes[indices["qc_flag"]] = "; ".join(table.flags[i])
+            earlier = attributes[indices["qc_flag"]] if indices["qc_flag"] < n_input else None
+            flag = merged_flag(earlier if earlier != NULL else None, table.flags[i])
+            attributes[indices["qc_flag"]] = flag
+            if "qc_note" in indices:
+                attributes[indices["qc_note"]] = notes_for(flag)
         out = QgsFeature(fields)
         out.setGeometry(feature.geometry())
         out.setAttributes(attributes)
         if not sink.addFeature(out, QgsFeatureSink.FastInsert):
             raise QgsProcessingException(_tr("Could not write a station to the output layer."))
+        if feedback is not None:
+            feedback.setProgress(100.0 * (i + 1) / len(table.features))

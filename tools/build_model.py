@@ -34,6 +34,7 @@ READINGS_MODEL_PATH = REPO_ROOT / "plugin" / "models" / "readings_reduce_grid.mo
 #: qgis_process argument names of the model).
 STATIONS, GRAVITY_FIELD, HEIGHT_FIELD, DEM, DENSITY = "stations", "gravity_field", "height_field", "dem", "density"
 REGIONAL_DEM = "regional_dem"
+HEIGHT_DATUM, DEM_DATUM = "height_datum", "dem_datum"
 #: Model outputs; qgis_process names them "<child id>:<output name>".
 REDUCED, ANOMALY, CONTOURS = "reduced_stations", "anomaly", "contours"
 
@@ -101,6 +102,7 @@ def build_model():
         QgsProcessingModelAlgorithm,
         QgsProcessingModelChildParameterSource as Source,
         QgsProcessingModelParameter,
+        QgsProcessingParameterEnum,
         QgsProcessingParameterField,
         QgsProcessingParameterFeatureSource,
         QgsProcessingParameterNumber,
@@ -116,15 +118,27 @@ def build_model():
             "ALG_DESC": (
                 "Bouguer reduction of a station layer with terrain corrections from a DEM, "
                 "then a minimum-curvature grid of the complete Bouguer anomaly (cba, mGal) "
-                "with contours. Results support interpretation only; check reductions "
-                "against the survey's own ties and specifications."
+                "with contours. The standard terrain correction reaches 166.7 km: give a "
+                "regional elevation raster that reaches 166.7 km around every station, "
+                "otherwise the stations are flagged tc_partial and cba misses the far "
+                "terrain. Set the two datums to what your heights and DEM are (most "
+                "global DEMs: EGM96 geoid; GNSS heights: ellipsoidal). Results support "
+                "interpretation only; check reductions against the survey's own ties and "
+                "specifications; decisions on drilling, groundwater or engineering are for "
+                "licensed practice and local codes."
             ),
             STATIONS: "Gravity stations (points, projected CRS in metres).",
             GRAVITY_FIELD: "Observed gravity (mGal).",
             HEIGHT_FIELD: "Station height above the ellipsoid (m); empty = sample the DEM.",
             DEM: "Elevation raster (m) for the terrain correction.",
             DENSITY: "Reduction density (kg/m³), default 2670.",
-            REGIONAL_DEM: "Optional coarser elevation raster reaching 166.7 km around the stations (outer zone).",
+            REGIONAL_DEM: (
+                "Coarser elevation raster reaching 166.7 km around the stations (outer zone). "
+                "Needed for the standard correction; without it the far terrain is missing and "
+                "the stations are flagged."
+            ),
+            HEIGHT_DATUM: "What the station heights are: ellipsoidal (GNSS, default) or orthometric above EGM96.",
+            DEM_DATUM: "What the DEM heights are above: the EGM96 geoid (most global DEMs, default), the ellipsoid, or the same as the stations.",
         }
     )
     inputs = [
@@ -143,7 +157,17 @@ def build_model():
             defaultValue=2670.0, optional=True,
         ),
         QgsProcessingParameterRasterLayer(
-            REGIONAL_DEM, "Regional elevation raster for the outer zone", optional=True
+            REGIONAL_DEM, "Regional elevation raster reaching 166.7 km (needed for the standard correction)", optional=True
+        ),
+        QgsProcessingParameterEnum(
+            HEIGHT_DATUM, "Station heights are",
+            options=["Ellipsoidal heights (e.g. from GNSS)", "Orthometric heights above the EGM96 geoid"],
+            defaultValue=0,
+        ),
+        QgsProcessingParameterEnum(
+            DEM_DATUM, "Elevation raster heights are above",
+            options=["EGM96 geoid (most global DEMs)", "Ellipsoid", "Same as the station heights"],
+            defaultValue=0,
         ),
     ]
     for k, definition in enumerate(inputs):
@@ -160,6 +184,8 @@ def build_model():
             "DEM": Source.fromModelParameter(DEM),
             "DENSITY": Source.fromModelParameter(DENSITY),
             "REGIONAL_DEM": Source.fromModelParameter(REGIONAL_DEM),
+            "HEIGHT_DATUM": Source.fromModelParameter(HEIGHT_DATUM),
+            "DEM_DATUM": Source.fromModelParameter(DEM_DATUM),
         },
         420.0, 200.0,
     )

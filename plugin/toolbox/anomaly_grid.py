@@ -53,6 +53,27 @@ NODATA = -99999.0
 #: three station spacings from any station is extrapolation, not data).
 BLANK_SPACINGS = 3.0
 
+#: Largest grid accepted, in cells, and the memory the solver needs per cell
+#: (bytes; bench/bench_gridding.py measured about 1.2 GB for 1,000 x 1,000
+#: cells). The limit keeps a run within about 2.6 GB.
+MAX_CELLS = 2_000_000
+BYTES_PER_CELL = 1300
+
+#: Most contour levels drawn in one run (a finer interval is a typing slip).
+MAX_CONTOUR_LEVELS = 1000
+
+
+def available_memory() -> int | None:
+    """Bytes of memory available now (Linux /proc/meminfo), None when unknown."""
+    try:
+        with open("/proc/meminfo", encoding="ascii") as handle:
+            for line in handle:
+                if line.startswith("MemAvailable:"):
+                    return int(line.split()[1]) * 1024
+    except (OSError, ValueError, IndexError):
+        return None
+    return None
+
 
 class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
     """Grid an anomaly field of a station layer by minimum curvature; contour it."""
@@ -104,6 +125,10 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
             "NoData; empty = three times the median station spacing, 0 = no blanking. "
             "<b>Contour interval</b>: empty = a round interval (1, 2, 2.5 or 5 times a power of ten) giving about 10 to 15 "
             "contours.</p>"
+            "<p>Limits: at most {:,} grid cells (the memory is estimated before the grid is "
+            "made); at most {:,} contour levels; a field with one value everywhere is refused. "
+            "The outputs may not overwrite the station layer or each other; nothing is left "
+            "behind when a run fails or is cancelled.</p>"
             "<p>Stations with an empty or non-numeric value are skipped and counted in the log; "
             "at least 3 are needed. The stations must be in a projected CRS (metres): "
             "reproject a layer in degrees first.</p>"
@@ -112,7 +137,7 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
             "contour is drawn heavier and labelled. The same styles ship as .qml files in the "
             "plugin's plugin/styles folder.</p>"
             "<p>{}</p>"
-        ).format(self.caution())
+        ).format(MAX_CELLS, MAX_CONTOUR_LEVELS, self.caution())
 
     def initAlgorithm(self, config=None):  # noqa: N802 - QGIS API
         self.addParameter(
@@ -217,11 +242,47 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
         return self.parameterAsDouble(parameters, key, context)
 
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 - QGIS API
+        from ..outputs import StagedOutput, layer_source, refuse_overwriting_inputs
+        from .base import record_provenance
+
+        source_path = layer_source(self, parameters, self.INPUT, context)
+        want_contours = self.CONTOURS in parameters and not is_unset(parameters.get(self.CONTOURS))
+        outputs = {self.tr("anomaly raster"): self.parameterAsOutputLayer(parameters, self.OUTPUT, context)}
+        if want_contours:
+            outputs[self.tr("contour layer")] = self.parameterAsOutputLayer(parameters, self.CONTOURS, context)
+        refuse_overwriting_inputs(outputs, {self.tr("station layer"): source_path})
+        staged = [StagedOutput(self, parameters, self.OUTPUT, context, self.tr("anomaly raster"))]
+        if want_contours:
+            staged.append(StagedOutput(self, staged[0].parameters, self.CONTOURS, context, self.tr("contour layer")))
+        try:
+            results, settings = self._grid(staged[-1].parameters, context, feedback, want_contours)
+            if feedback.isCanceled():
+                raise QgsProcessingException(self.tr("Cancelled by the user."))
+            results[self.OUTPUT] = staged[0].finish(results[self.OUTPUT])
+            if want_contours and self.CONTOURS in results:
+                results[self.CONTOURS] = staged[1].finish(results[self.CONTOURS])
+        except BaseException:
+            for item in staged:
+                item.discard()
+            raise
+        raster_style, contour_style = settings.pop("_raster_style"), settings.pop("_contour_style")
+        record_provenance(self.id(), results[self.OUTPUT], parameters, source_path, settings, feedback)
+        if want_contours and self.CONTOURS in results:
+            record_provenance(self.id(), results[self.CONTOURS], parameters, source_path, settings, feedback)
+        # Styles are attached to the final paths (the staged ones are gone).
+        attach_raster_style(context, results[self.OUTPUT], *raster_style)
+        if want_contours and self.CONTOURS in results:
+            attach_contour_style(context, results[self.CONTOURS], contour_style)
+        return results
+
+    def _grid(self, parameters, context, feedback, want_contours):
         from ...algorithms import gridding
+        from ..stations import check_point_layer
 
         source = self.parameterAsSource(parameters, self.INPUT, context)
         if source is None:
             raise QgsProcessingException(self.invalidSourceError(parameters, self.INPUT))
+        check_point_layer(source)
         crs = source.sourceCrs()
         if crs.isValid() and crs.isGeographic():
             raise QgsProcessingException(self._geographic_message(crs))
@@ -230,7 +291,6 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
             raise QgsProcessingException(problem)
         field_name = self.parameterAsFields(parameters, self.FIELD, context)[0]
 
-        want_contours = self.CONTOURS in parameters and not is_unset(parameters.get(self.CONTOURS))
         steps = QgsProcessingMultiStepFeedback(4 if want_contours else 3, feedback)
         table = read_stations(source, context, steps)
         values = table.field_values(field_name)
@@ -249,6 +309,13 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
                 ).format(int(usable.sum()), field_name)
             )
         x, y, v = table.x[usable], table.y[usable], values[usable]
+        if float(np.ptp(v)) == 0.0:
+            raise QgsProcessingException(
+                self.tr(
+                    "Every station has the same value in {} ({:g}): a constant field has no anomaly to "
+                    "grid or contour. Check that the field holds the anomaly."
+                ).format(field_name, float(v[0]))
+            )
 
         cell_size = self._optional_double(parameters, self.PIXEL_SIZE, context)
         if cell_size is not None and cell_size <= 0:
@@ -264,12 +331,13 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
         units = QgsUnitTypes.toAbbreviatedString(crs.mapUnits())
 
         if feedback.isCanceled():
-            return {}
+            raise QgsProcessingException(self.tr("Cancelled by the user."))
         steps.setCurrentStep(1)
         with warnings.catch_warnings(record=True) as caught:
             warnings.simplefilter("always")
             try:
                 geometry = gridding.default_grid_geometry(x, y, cell_size=cell_size, extent=extent)
+                self._check_size(geometry, units)
                 feedback.pushInfo(
                     self.tr("Grid: {} columns x {} rows of {} {} cells, tension {}.").format(
                         geometry.n_cols, geometry.n_rows, geometry.cell_size, units, tension
@@ -293,18 +361,24 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
         for warning in caught:
             feedback.pushWarning(str(warning.message))
         if feedback.isCanceled():
-            return {}
+            raise QgsProcessingException(self.tr("Cancelled by the user."))
 
         valid = np.isfinite(surface)
         if not valid.any():
             raise QgsProcessingException(
                 self.tr("Every cell was blanked: increase the blanking distance or set it to 0.")
             )
+        vmin, vmax = float(np.nanmin(surface)), float(np.nanmax(surface))
+        interval = self._contour_interval(parameters, context, vmin, vmax, feedback) if want_contours else None
         steps.setCurrentStep(2)
         output_path = self.parameterAsOutputLayer(parameters, self.OUTPUT, context)
-        _write_raster(output_path, surface, geometry, crs.toWkt(), field_name)
+        try:
+            _write_raster(output_path, surface, geometry, crs.toWkt(), field_name)
+        except RuntimeError as error:
+            raise QgsProcessingException(
+                self.tr("The anomaly raster could not be written to {}: {}").format(output_path, error)
+            ) from error
         steps.setProgress(100)
-        vmin, vmax = float(np.nanmin(surface)), float(np.nanmax(surface))
         feedback.pushInfo(
             self.tr("{} stations gridded; {} of {} cells have a value, from {:.3f} to {:.3f} mGal.").format(
                 int(usable.sum()), int(valid.sum()), valid.size, vmin, vmax
@@ -322,17 +396,20 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
             "{} {} cells; values in mGal; cells farther than {:.6g} {} from a station are NoData "
             "(0 = no blanking)."
         ).format(field_name, int(usable.sum()), tension, geometry.cell_size, units, blank, units)
-        attach_raster_style(context, output_path, layer_title, abstract)
+        settings = {
+            "field": field_name,
+            "method": "minimum curvature with tension (Briggs 1974; Smith & Wessel 1990)",
+            "tension": tension,
+            "cell_size": float(geometry.cell_size),
+            "extent": list(geometry.geotransform),
+            "blanking_distance": float(blank),
+            "contour_interval_mgal": interval,
+            "_raster_style": (layer_title, abstract),
+            "_contour_style": self.tr("Contours {} ({:g} mGal)").format(field_name, interval or 0.0),
+        }
 
         if want_contours:
             steps.setCurrentStep(3)
-            interval = self._optional_double(parameters, self.CONTOUR_INTERVAL, context)
-            if (interval is None or interval <= 0) and vmax > vmin:
-                interval = float(gridding.nice_contour_interval(vmin, vmax))
-            elif interval is None or interval <= 0:
-                # A flat surface has no contours; any interval gives none.
-                feedback.pushWarning(self.tr("The surface is flat ({} mGal): no contours.").format(vmin))
-                interval = 1.0
             results[self.INTERVAL_USED] = interval
             fields = QgsFields()
             fields.append(QgsField("value", QVariant.Double))
@@ -343,7 +420,7 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
                 count = 0
                 for level, wkb in _contour_lines(surface, geometry, interval):
                     if feedback.isCanceled():
-                        break
+                        raise QgsProcessingException(self.tr("Cancelled by the user."))
                     feature = QgsFeature(fields)
                     geometry_out = QgsGeometry()
                     geometry_out.fromWkb(wkb)
@@ -352,12 +429,51 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
                     sink.addFeature(feature, QgsFeatureSink.FastInsert)
                     count += 1
                 feedback.pushInfo(self.tr("{} contour lines every {:g} mGal.").format(count, interval))
+                del sink
                 results[self.CONTOURS] = contour_id
-                attach_contour_style(
-                    context, contour_id, self.tr("Contours {} ({:g} mGal)").format(field_name, interval)
-                )
             steps.setProgress(100)
-        return results
+        return results, settings
+
+    def _check_size(self, geometry, units) -> None:
+        """Refuse a grid above MAX_CELLS or above the memory available, before allocating."""
+        cells = int(geometry.n_cols) * int(geometry.n_rows)
+        needed = cells * BYTES_PER_CELL
+        free = available_memory()
+        if cells > MAX_CELLS or (free is not None and needed > free):
+            raise QgsProcessingException(
+                self.tr(
+                    "A grid of {} x {} = {:,} cells of {:g} {} would need about {:.1f} GB of memory "
+                    "(limit {:,} cells{}). Choose a larger pixel size or a smaller extent."
+                ).format(
+                    geometry.n_cols,
+                    geometry.n_rows,
+                    cells,
+                    geometry.cell_size,
+                    units,
+                    needed / 1e9,
+                    MAX_CELLS,
+                    "" if free is None else self.tr("; {:.1f} GB available now").format(free / 1e9),
+                )
+            )
+
+    def _contour_interval(self, parameters, context, vmin, vmax, feedback) -> float:
+        """The interval to draw: the user's (checked) or a round automatic one."""
+        from ...algorithms import gridding
+
+        interval = self._optional_double(parameters, self.CONTOUR_INTERVAL, context)
+        if interval is None or interval <= 0:
+            return float(gridding.nice_contour_interval(vmin, vmax))
+        levels = math.floor(vmax / interval) - math.ceil(vmin / interval) + 1
+        if levels > MAX_CONTOUR_LEVELS:
+            raise QgsProcessingException(
+                self.tr(
+                    "A contour interval of {:g} mGal over values from {:.3f} to {:.3f} mGal gives {:,} "
+                    "levels (limit {:,}). Choose a larger interval, e.g. {:g} mGal, or leave it empty."
+                ).format(
+                    interval, vmin, vmax, levels, MAX_CONTOUR_LEVELS, float(gridding.nice_contour_interval(vmin, vmax))
+                )
+            )
+        return interval
 
 
 def _driver_for(path: str) -> str:

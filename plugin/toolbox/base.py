@@ -62,6 +62,29 @@ def is_unset(value) -> bool:
     return value is None or value == NULL or (isinstance(value, str) and not value.strip())
 
 
+def density_sentence(value: float, setting: str) -> str:
+    """Sentence for a density outside the limits (naming the likely unit slip), or ''."""
+    from ...algorithms.plausibility import DENSITY_LIMITS, density_problem
+
+    problem = density_problem(value)
+    if problem is None:
+        return ""
+    low, high = DENSITY_LIMITS
+    if problem.factor == 1000.0:
+        return _tr(
+            "A density of {:g} kg/m³ ({}) looks like g/cm³: densities must lie between {:g} and {:g} "
+            "kg/m³; enter {:g} for {:g} g/cm³."
+        ).format(value, setting, low, high, value * 1000.0, value)
+    if problem.factor == 0.001:
+        return _tr(
+            "A density of {:g} kg/m³ ({}) is 1,000 times too large (g/cm³ values multiplied twice, or "
+            "g/m³?): densities must lie between {:g} and {:g} kg/m³; enter {:g}."
+        ).format(value, setting, low, high, value / 1000.0)
+    return _tr("A density of {:g} kg/m³ ({}) is outside the accepted range {:g}-{:g} kg/m³.").format(
+        value, setting, low, high
+    )
+
+
 class StationAlgorithm(ReliefGravityAlgorithm):
     """Parameters and checks shared by the algorithms that add fields to stations.
 
@@ -77,7 +100,16 @@ class StationAlgorithm(ReliefGravityAlgorithm):
     DENSITY = "DENSITY"
     INNER_RADIUS = "INNER_RADIUS"
     OUTER_RADIUS = "OUTER_RADIUS"
+    HEIGHT_DATUM = "HEIGHT_DATUM"
+    DEM_DATUM = "DEM_DATUM"
+    GEOID_FIELD = "GEOID_FIELD"
+    GEOID_RASTER = "GEOID_RASTER"
     OUTPUT = "OUTPUT"
+
+    #: Default inner zone radius, m: the outer edge of Hammer's zone F,
+    #: 2 936 ft (Hammer 1939, table 1), where national databases split inner
+    #: and outer corrections (see docs/datums.md for the sources checked).
+    DEFAULT_INNER_RADIUS = 895.0
 
     def add_stations_parameter(self) -> None:
         from qgis.core import QgsProcessing, QgsProcessingParameterFeatureSource
@@ -91,9 +123,84 @@ class StationAlgorithm(ReliefGravityAlgorithm):
 
         self.addParameter(
             QgsProcessingParameterEnum(
-                self.HEIGHT_UNITS, _tr("Height units"), options=[_tr("Metres"), _tr("Feet")], defaultValue=0
+                self.HEIGHT_UNITS, _tr("Height units"), options=[_tr("Metres"), _tr("Feet"), _tr("Centimetres")], defaultValue=0
             )
         )
+
+    def add_datum_parameters(self) -> None:
+        """HEIGHT_DATUM, GEOID_FIELD, GEOID_RASTER and DEM_DATUM (docs/datums.md)."""
+        from qgis.core import (
+            QgsProcessingParameterEnum,
+            QgsProcessingParameterField,
+            QgsProcessingParameterRasterLayer,
+        )
+
+        from ..heights import dem_datum_names, height_datum_names
+
+        self.addParameter(
+            QgsProcessingParameterEnum(
+                self.HEIGHT_DATUM, _tr("Station heights are"), options=height_datum_names(), defaultValue=0
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterField(
+                self.GEOID_FIELD,
+                _tr("Geoid height field (m, geoid above the ellipsoid)"),
+                parentLayerParameterName=self.INPUT,
+                type=QgsProcessingParameterField.Numeric,
+                optional=True,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterRasterLayer(
+                self.GEOID_RASTER, _tr("Geoid height raster (m, geoid above the ellipsoid)"), optional=True
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterEnum(
+                self.DEM_DATUM, _tr("Elevation raster heights are above"), options=dem_datum_names(), defaultValue=0
+            )
+        )
+
+    def check_datums(self, parameters, context) -> str:
+        """Sentence for an incomplete datum choice, or ''."""
+        from ...algorithms.datums import STATION_GEOID_GIVEN
+
+        height_datum = self.parameterAsEnum(parameters, self.HEIGHT_DATUM, context)
+        field = self.parameterAsFields(parameters, self.GEOID_FIELD, context)
+        raster = parameters.get(self.GEOID_RASTER)
+        has_raster = not is_unset(raster)
+        if height_datum == STATION_GEOID_GIVEN and bool(field) == has_raster:
+            return _tr(
+                "HEIGHT_DATUM says the geoid height comes from a field or a raster: choose exactly one "
+                "of GEOID_FIELD and GEOID_RASTER."
+            )
+        if height_datum != STATION_GEOID_GIVEN and (field or has_raster):
+            return _tr(
+                "A geoid height field or raster is given but HEIGHT_DATUM does not use it: set HEIGHT_DATUM "
+                "to 'orthometric, geoid height from GEOID_FIELD or GEOID_RASTER', or clear them."
+            )
+        return ""
+
+    def given_geoid(self, parameters, context, table):
+        """The user's geoid heights at the stations (m), or None."""
+        from ..geoid import check_geoid_values
+        from ..raster_io import open_elevation
+        from ..terrain_run import station_positions_on
+
+        field = self.first_field(parameters, self.GEOID_FIELD, context)
+        if field:
+            values = table.field_values(field)
+            check_geoid_values(values, _tr("the field {}").format(field))
+            return values
+        layer = self.parameterAsRasterLayer(parameters, self.GEOID_RASTER, context)
+        if layer is None:
+            return None
+        raster = open_elevation(layer)
+        x, y = station_positions_on(raster, table, context)
+        values = raster.sample_bilinear(x, y)
+        check_geoid_values(values, _tr("the raster {}").format(layer.name()))
+        return values
 
     def add_density_parameter(self) -> None:
         from qgis.core import QgsProcessingParameterNumber
@@ -117,7 +224,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
             )
         ]
         for key, label, default in (
-            (self.INNER_RADIUS, _tr("Inner zone radius (m)"), 2000.0),
+            (self.INNER_RADIUS, _tr("Inner zone radius (m)"), self.DEFAULT_INNER_RADIUS),
             (self.OUTER_RADIUS, _tr("Outer zone radius (m)"), 166735.0),
         ):
             definitions.append(
@@ -133,10 +240,9 @@ class StationAlgorithm(ReliefGravityAlgorithm):
     def check_density_and_radii(self, parameters, context) -> str:
         """Sentence describing an impossible density or radius pair, or ''."""
         density = self.parameterAsDouble(parameters, self.DENSITY, context)
-        if not density > 0:
-            return _tr("The reduction density must be positive (kg/m³); got {}.").format(density)
-        if density < 20:
-            return _tr("A reduction density of {} kg/m³ looks like g/cm³: enter 2670 for 2.67 g/cm³.").format(density)
+        problem = density_sentence(density, "DENSITY")
+        if problem:
+            return problem
         inner = self.parameterAsDouble(parameters, self.INNER_RADIUS, context)
         outer = self.parameterAsDouble(parameters, self.OUTER_RADIUS, context)
         if not 0 < inner < outer:
@@ -156,25 +262,25 @@ class StationAlgorithm(ReliefGravityAlgorithm):
 
         from ..stations import read_stations
 
+        from ..stations import check_point_layer
+
         source = self.parameterAsSource(parameters, self.INPUT, context)
         if source is None:
             raise QgsProcessingException(self.invalidSourceError(parameters, self.INPUT))
+        check_point_layer(source)
         steps = QgsProcessingMultiStepFeedback(3, feedback)
         if feedback.isCanceled():
             # A cancel made before the multi-step feedback existed is not forwarded to it.
             steps.cancel()
         return source, steps, read_stations(source, context, steps)
 
-    def station_heights(self, parameters, context, table, placed):
-        """Heights in metres from ``HEIGHT_FIELD`` (in ``HEIGHT_UNITS``), else sampled
-        from the DEM the stations were placed on."""
-        from ..terrain_run import heights_from_dem
-
+    def raw_station_heights(self, parameters, context, table):
+        """Heights in metres from ``HEIGHT_FIELD`` (in ``HEIGHT_UNITS``), None when no field."""
         height_field = self.first_field(parameters, self.HEIGHT_FIELD, context)
         if not height_field:
-            return heights_from_dem(table, placed)
-        feet = self.parameterAsEnum(parameters, self.HEIGHT_UNITS, context) == 1
-        return table.field_values(height_field, FOOT if feet else 1.0, label=_tr("height"))
+            return None
+        scale = (1.0, FOOT, 0.01)[self.parameterAsEnum(parameters, self.HEIGHT_UNITS, context)]
+        return table.field_values(height_field, scale, missing_code="no_height")
 
     def station_sink(self, parameters, context, source, added, feedback):
         """Output sink: input fields plus ``added``; returns sink, id, fields, indices."""
@@ -191,3 +297,81 @@ class StationAlgorithm(ReliefGravityAlgorithm):
         if sink is None:
             raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
         return sink, dest_id, fields, indices
+
+    # --- safe output and provenance ------------------------------------------------
+
+    def stage_station_output(self, parameters, context):
+        """Refuse an output over an input; stage the output in a temporary folder."""
+        from ..outputs import StagedOutput, layer_source, refuse_overwriting_inputs
+
+        inputs = {_tr("station layer"): layer_source(self, parameters, self.INPUT, context)}
+        for key, label in (
+            (self.DEM, _tr("elevation raster")),
+            (self.REGIONAL_DEM, _tr("regional elevation raster")),
+            (self.GEOID_RASTER, _tr("geoid raster")),
+        ):
+            inputs[label] = layer_source(self, parameters, key, context, raster=True)
+        label = _tr("output station layer")
+        refuse_overwriting_inputs({label: self.parameterAsOutputLayer(parameters, self.OUTPUT, context)}, inputs)
+        return StagedOutput(self, parameters, self.OUTPUT, context, label)
+
+    def run_staged(self, parameters, context, feedback, work):
+        """Run ``work(parameters, context, feedback) -> (results, settings)`` on a staged
+        output; move it into place only on success, then record its provenance."""
+        from qgis.core import QgsProcessingException
+
+        from ..outputs import layer_source
+
+        staged = self.stage_station_output(parameters, context)
+        try:
+            results, settings = work(staged.parameters, context, feedback)
+            if feedback.isCanceled():
+                raise QgsProcessingException(_tr("Cancelled by the user."))
+            results[self.OUTPUT] = staged.finish(results[self.OUTPUT])
+        except BaseException:
+            staged.discard()
+            raise
+        record_provenance(
+            self.id() or "reliefgravity:" + self.name(),
+            results[self.OUTPUT],
+            parameters,
+            layer_source(self, parameters, self.INPUT, context),
+            settings,
+            feedback,
+        )
+        return results
+
+
+def plain_parameters(parameters: dict) -> dict:
+    """Parameters as JSON-able values (layers by source, destinations by path)."""
+    from qgis.core import QgsMapLayer, QgsProcessingFeatureSourceDefinition, QgsProcessingOutputLayerDefinition
+
+    out = {}
+    for key, value in parameters.items():
+        if isinstance(value, QgsProcessingOutputLayerDefinition):
+            value = value.sink.staticValue()
+        elif isinstance(value, QgsProcessingFeatureSourceDefinition):
+            value = value.source.staticValue()
+        elif isinstance(value, QgsMapLayer):
+            value = value.source()
+        out[key] = value
+    return out
+
+
+def record_provenance(algorithm_id, output, parameters, input_source, settings, feedback) -> None:
+    """Write the chained provenance record into a GeoPackage or GeoTIFF output."""
+    from .. import provenance
+    from ..outputs import file_of
+
+    path = file_of(output)
+    if not path or not path.lower().endswith((".gpkg", ".tif", ".tiff")):
+        feedback.pushInfo(
+            _tr("Provenance is recorded in GeoPackage and GeoTIFF outputs only; this output has none.")
+        )
+        return
+    previous = provenance.read_record(input_source) if input_source else None
+    step = provenance.make_step(algorithm_id, plain_parameters(parameters), settings)
+    try:
+        provenance.write_record(str(output), provenance.chained(previous, step))
+    except (OSError, RuntimeError) as error:
+        feedback.pushWarning(_tr("The provenance record could not be written: {}").format(error))

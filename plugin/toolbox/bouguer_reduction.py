@@ -8,6 +8,7 @@ import warnings
 import numpy as np
 from qgis.core import (
     QgsProcessing,
+    QgsProcessingException,
     QgsProcessingOutputNumber,
     QgsProcessingParameterBoolean,
     QgsProcessingParameterDefinition,
@@ -19,9 +20,26 @@ from qgis.core import (
 from qgis.PyQt.QtCore import QVariant
 
 from ...algorithms import REDUCTION_FIELDS, reduce_gravity
+from ...algorithms.plausibility import (
+    DENSITY_LIMITS,
+    GRAVITY_UNITS,
+    check_gravity,
+    gravity_out_of_range,
+    gravity_to_mgal,
+)
+from ..heights import (
+    DEM_DATUM_KEYS,
+    HEIGHT_DATUM_KEYS,
+    check_dem_values,
+    flag_mismatches,
+    geoid_description,
+    prepare_heights,
+    warn_partial_coverage,
+)
+from ..raster_io import raster_path
 from ..stations import write_stations
 from ..terrain_run import EXACT, compute_terrain, place_stations
-from .base import StationAlgorithm
+from .base import StationAlgorithm, density_sentence
 from .field_checks import check_numeric_fields
 
 NORMAL_FORMULAS = ("grs80", "wgs84", "1967")
@@ -32,6 +50,19 @@ PLAUSIBLE_DENSITY = (1000.0, 3500.0)
 #: qc_flag: the reduction's fields with the two terrain zones before their total.
 _TC_TOTAL_AT = REDUCTION_FIELDS.index("tc_total")
 RESULT_FIELDS = REDUCTION_FIELDS[:_TC_TOTAL_AT] + ("tc_inner", "tc_outer") + REDUCTION_FIELDS[_TC_TOTAL_AT:]
+
+#: Further per-station results the terrain runner may return (written when present).
+ENGINE_EXTRA_FIELDS = ("tc_trunc",)
+
+
+def gravity_unit_names() -> list:
+    """Labels of the GRAVITY_UNITS options (order of algorithms.plausibility.GRAVITY_UNITS)."""
+    from qgis.PyQt.QtCore import QCoreApplication
+
+    def tr(text):
+        return QCoreApplication.translate("BouguerReductionAlgorithm", text)
+
+    return [tr("mGal"), tr("µm/s² (0.1 mGal)"), tr("Gal (1,000 mGal)"), tr("m/s² (100,000 mGal)")]
 
 
 class BouguerReductionAlgorithm(StationAlgorithm):
@@ -45,6 +76,8 @@ class BouguerReductionAlgorithm(StationAlgorithm):
     ATMOSPHERIC = "ATMOSPHERIC"
     CURVATURE = "CURVATURE"
     TC_FIELD = "TC_FIELD"
+    GRAVITY_UNITS = "GRAVITY_UNITS"
+    ORTHOMETRIC_REDUCTION = "ORTHOMETRIC_REDUCTION"
     STATIONS_REDUCED = "STATIONS_REDUCED"
     STATIONS_FLAGGED = "STATIONS_FLAGGED"
 
@@ -68,7 +101,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             "<p>Default standard: Hinze et al. (2005): GRS80 normal gravity, second-order "
             "height correction, atmospheric correction, spherical-cap Bouguer correction to "
             "166.7 km (slab + curvature, LaFehr 1991) and terrain correction to 166.7 km. "
-            "Heights are heights above the ellipsoid. The 1967 formula, the first-order "
+            "The 1967 formula, the first-order "
             "0.3086 mGal/m gradient and a flat slab are options to reproduce legacy "
             "databases.</p>"
             "<p>faa = g_obs - normal_g + height_corr + atmos_corr; "
@@ -79,7 +112,23 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             "either, cba is left empty.</p>"
             "<p>Station height: from the height field, or sampled from the elevation raster "
             "when no field is chosen (flagged in qc_flag). A station that cannot be reduced "
-            "keeps its row with empty values and a reason in qc_flag.</p>"
+            "keeps its row with empty values and codes in qc_flag (their meaning in qc_note).</p>"
+            "<p><b>Datums</b>: HEIGHT_DATUM says what the station heights are (ellipsoidal, "
+            "orthometric above EGM96, or orthometric with the geoid height from GEOID_FIELD or "
+            "GEOID_RASTER); DEM_DATUM what the raster heights are (EGM96 as most global DEMs, "
+            "the ellipsoid, or the same as the stations). EGM96 comes from PROJ's egm96_15.gtx. "
+            "The reduction uses ellipsoidal heights (Hinze et al. 2005) unless the legacy "
+            "orthometric option is ticked; the terrain correction compares station and DEM in "
+            "the DEM's datum. Stations that disagree with the DEM beyond the local relief are "
+            "flagged height_dem_mismatch.</p>"
+            "<p><b>Units and limits</b>: GRAVITY_UNITS mGal, µm/s², Gal or m/s²; observed gravity "
+            "must fall within 975,000-984,000 mGal after units. Densities 500-5000 kg/m³ "
+            "(1000-3500 without a warning). Inner radius above 0 and below the outer radius "
+            "(default 895 m, the outer edge of Hammer zone F). A run stops with a sentence when "
+            "the values look like another unit.</p>"
+            "<p><b>Regional DEM</b>: the standard correction reaches 166.7 km; a regional "
+            "elevation raster reaching that far around every station is needed, otherwise the "
+            "stations are flagged tc_partial and cba misses the far terrain.</p>"
             "<p>{}</p>"
         ).format(self.caution())
 
@@ -94,9 +143,14 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             )
         )
         self.addParameter(
+            QgsProcessingParameterEnum(
+                self.GRAVITY_UNITS, self.tr("Units of observed gravity"), options=gravity_unit_names(), defaultValue=0
+            )
+        )
+        self.addParameter(
             QgsProcessingParameterField(
                 self.HEIGHT_FIELD,
-                self.tr("Station height field (above the ellipsoid; empty = sample the elevation raster)"),
+                self.tr("Station height field (empty = sample the elevation raster)"),
                 parentLayerParameterName=self.INPUT,
                 type=QgsProcessingParameterField.Numeric,
                 optional=True,
@@ -108,6 +162,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
                 self.DEM, self.tr("Elevation raster (DEM, metres)"), optional=True
             )
         )
+        self.add_datum_parameters()
         self.add_density_parameter()
         self.addParameter(
             QgsProcessingParameterField(
@@ -171,6 +226,13 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             )
         )
         self.add_zone_parameters(advanced=True)
+        legacy = QgsProcessingParameterBoolean(
+            self.ORTHOMETRIC_REDUCTION,
+            self.tr("Reduce with orthometric heights (legacy practice; the standard uses ellipsoidal heights)"),
+            defaultValue=False,
+        )
+        legacy.setFlags(legacy.flags() | QgsProcessingParameterDefinition.FlagAdvanced)
+        self.addParameter(legacy)
         self.addParameter(
             QgsProcessingParameterFeatureSink(
                 self.OUTPUT, self.tr("Reduced stations"), QgsProcessing.TypeVectorPoint
@@ -194,11 +256,12 @@ class BouguerReductionAlgorithm(StationAlgorithm):
                 self.HEIGHT_FIELD: self.tr("station height"),
                 self.DENSITY_FIELD: self.tr("density"),
                 self.TC_FIELD: self.tr("terrain correction"),
+                self.GEOID_FIELD: self.tr("geoid height"),
             },
         )
         if problem:
             return False, problem
-        problem = self.check_density_and_radii(parameters, context)
+        problem = self.check_density_and_radii(parameters, context) or self.check_datums(parameters, context)
         if problem:
             return False, problem
         height_field = self.parameterAsFields(parameters, self.HEIGHT_FIELD, context)
@@ -208,38 +271,61 @@ class BouguerReductionAlgorithm(StationAlgorithm):
         return True, ""
 
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 - QGIS API
+        return self.run_staged(parameters, context, feedback, self._reduce)
+
+    def _reduce(self, parameters, context, feedback):
+        from ...algorithms.constants import GRAVITATIONAL_CONSTANT
+
         source, steps, table = self.read_input_stations(parameters, context, feedback)
         gravity_field = self.first_field(parameters, self.GRAVITY_FIELD, context)
         height_field = self.first_field(parameters, self.HEIGHT_FIELD, context)
         dem = self.parameterAsRasterLayer(parameters, self.DEM, context)
         regional = self.parameterAsRasterLayer(parameters, self.REGIONAL_DEM, context)
         tc_field = self.first_field(parameters, self.TC_FIELD, context)
+        height_datum = self.parameterAsEnum(parameters, self.HEIGHT_DATUM, context)
+        dem_datum = self.parameterAsEnum(parameters, self.DEM_DATUM, context)
+        units = self.parameterAsEnum(parameters, self.GRAVITY_UNITS, context)
+
+        observed = self._observed_gravity(table, gravity_field, units)
+        density = self._densities(parameters, context, table, feedback)
         # The DEM is opened and the stations put on it once, for the heights
         # and for the terrain correction alike.
-        placed = place_stations(dem, table, context) if dem is not None and not (height_field and tc_field) else None
-
-        observed = table.field_values(gravity_field, label=self.tr("observed gravity"))
-        heights = self.station_heights(parameters, context, table, placed)
-
-        density = self._densities(parameters, context, table, feedback)
+        placed = None
+        if dem is not None and not (height_field and tc_field):
+            placed = place_stations(dem, table, context)
+            check_dem_values(placed.raster.path, self.tr("elevation raster"))
+        if regional is not None and placed is not None and not tc_field:
+            check_dem_values(raster_path(regional), self.tr("regional elevation raster"))
+        heights = prepare_heights(
+            table,
+            self.raw_station_heights(parameters, context, table),
+            height_datum,
+            dem_datum,
+            self.given_geoid(parameters, context, table),
+            placed,
+            feedback,
+            declared_units=self.parameterAsEnum(parameters, self.HEIGHT_UNITS, context),
+        )
         normal_formula = NORMAL_FORMULAS[self.parameterAsEnum(parameters, self.NORMAL_GRAVITY, context)]
         height_formula = HEIGHT_FORMULAS[self.parameterAsEnum(parameters, self.HEIGHT_CORRECTION, context)]
         atmospheric = self.parameterAsBoolean(parameters, self.ATMOSPHERIC, context)
         curvature = self.parameterAsBoolean(parameters, self.CURVATURE, context)
+        orthometric = self.parameterAsBoolean(parameters, self.ORTHOMETRIC_REDUCTION, context)
+        inner = self.parameterAsDouble(parameters, self.INNER_RADIUS, context)
+        outer = self.parameterAsDouble(parameters, self.OUTER_RADIUS, context)
 
         steps.setCurrentStep(1)
-        tc_inner = np.full(len(table), np.nan)
-        tc_outer = np.full(len(table), np.nan)
+        engine_columns = {}
         if tc_field:
-            tc_total = table.field_values(tc_field, label=self.tr("terrain correction"))
+            tc_total = table.field_values(tc_field, missing_code="no_tc")
         elif placed is not None:
             terrain = compute_terrain(
                 table,
-                heights,
+                heights.in_dem_datum,
                 placed,
                 regional,
-                inner_radius=self.parameterAsDouble(parameters, self.INNER_RADIUS, context),
-                outer_radius=self.parameterAsDouble(parameters, self.OUTER_RADIUS, context),
+                inner_radius=inner,
+                outer_radius=outer,
                 density=density,
                 innermost_tc=None,
                 water_density=None,
@@ -247,7 +333,16 @@ class BouguerReductionAlgorithm(StationAlgorithm):
                 context=context,
                 feedback=steps,
             )
-            tc_inner, tc_outer, tc_total = terrain["tc_inner"], terrain["tc_outer"], terrain["tc_total"]
+            tc_total = terrain["tc_total"]
+            engine_columns = {
+                "tc_inner": terrain["tc_inner"],
+                "tc_outer": terrain["tc_outer"],
+                "dem_diff": terrain["dem_diff"],
+                "tc_cover": terrain["coverage"],
+            }
+            engine_columns.update({k: terrain[k] for k in terrain if k in ENGINE_EXTRA_FIELDS})
+            flag_mismatches(table, terrain["dem_diff"], heights, placed, height_datum, dem_datum, feedback)
+            warn_partial_coverage(terrain["coverage"], outer, regional is not None, feedback)
         else:
             tc_total = np.full(len(table), np.nan)
             feedback.pushWarning(
@@ -255,12 +350,17 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             )
 
         steps.setCurrentStep(2)
+        reduction_heights = heights.orthometric if orthometric else heights.ellipsoidal
+        if orthometric and not np.isfinite(reduction_heights).any() and np.isfinite(heights.ellipsoidal).any():
+            raise QgsProcessingException(
+                self.tr("Orthometric reduction needs geoid heights: PROJ's EGM96 grid or a geoid field/raster.")
+            )
         with warnings.catch_warnings(record=True):
             warnings.simplefilter("always")
             reduced = reduce_gravity(
                 observed,
                 table.latitude,
-                heights,
+                reduction_heights,
                 density=density,
                 terrain_correction=tc_total,
                 normal_formula=normal_formula,
@@ -268,11 +368,14 @@ class BouguerReductionAlgorithm(StationAlgorithm):
                 atmospheric=atmospheric,
                 curvature=curvature,
             )
-        reduced["tc_inner"] = tc_inner
-        reduced["tc_outer"] = tc_outer
-        added = [(name, QVariant.Double) for name in RESULT_FIELDS] + [("qc_flag", QVariant.String)]
+        columns = {k: reduced[k] for k in RESULT_FIELDS if k not in ("tc_inner", "tc_outer")}
+        columns.update(engine_columns)
+        added = [(name, QVariant.Double) for name in (*RESULT_FIELDS, "dem_diff", "tc_cover")]
+        added += [(name, QVariant.Double) for name in engine_columns if name not in dict(added)]
+        added += [("qc_flag", QVariant.String), ("qc_note", QVariant.String)]
         sink, dest_id, fields, indices = self.station_sink(parameters, context, source, added, feedback)
-        write_stations(sink, table, fields, indices, {k: reduced[k] for k in RESULT_FIELDS}, steps)
+        write_stations(sink, table, fields, indices, columns, steps)
+        del sink
 
         faa_ok = np.isfinite(reduced["faa"])
         flagged = sum(1 for f in table.flags if f)
@@ -281,11 +384,70 @@ class BouguerReductionAlgorithm(StationAlgorithm):
                 len(table), int(faa_ok.sum()), int(np.isfinite(reduced["cba"]).sum()), flagged
             )
         )
-        return {
+        density_field = self.first_field(parameters, self.DENSITY_FIELD, context)
+        settings = {
+            "normal_gravity": normal_formula,
+            "height_correction": height_formula,
+            "atmospheric_correction": atmospheric,
+            "curvature_correction": curvature,
+            "bouguer_model": "spherical cap to 166.7 km" if curvature else "infinite slab",
+            "gravity_units": GRAVITY_UNITS[units],
+            "density_kg_m3": float(self.parameterAsDouble(parameters, self.DENSITY, context)),
+            "density_field": density_field,
+            "gravitational_constant": GRAVITATIONAL_CONSTANT,
+            "height_datum": HEIGHT_DATUM_KEYS[height_datum],
+            "dem_datum": DEM_DATUM_KEYS[dem_datum],
+            "reduction_heights": "orthometric (legacy)" if orthometric else "ellipsoidal (Hinze et al. 2005)",
+            "terrain_correction": (
+                "field " + tc_field if tc_field else ("exact engine" if placed is not None else "none")
+            ),
+            "inner_radius_m": inner,
+            "outer_radius_m": outer,
+            "dem_files": [p for p in (placed.raster.path if placed else None, raster_path(regional) if regional and placed else None) if p],
+            "geoid": geoid_description(height_datum, dem_datum),
+        }
+        results = {
             self.OUTPUT: dest_id,
             self.STATIONS_REDUCED: int(faa_ok.sum()),
             self.STATIONS_FLAGGED: flagged,
         }
+        return results, settings
+
+    def _observed_gravity(self, table, gravity_field, units):
+        """Observed gravity in mGal; stop when most values are not Earth's gravity
+        in the declared units, flag single stations that are not."""
+        raw = table.field_values(gravity_field, missing_code="no_gravity")
+        problem = check_gravity(raw, units)
+        if problem is not None:
+            names = gravity_unit_names()
+            if problem.zeros:
+                text = self.tr(
+                    "Every observed gravity value in {} is 0: the field holds no readings. Choose the "
+                    "field with observed (absolute) gravity."
+                ).format(gravity_field)
+            elif problem.likely_units is not None:
+                text = self.tr(
+                    "Observed gravity in {} reads {:.6g} mGal (median) with GRAVITY_UNITS = '{}', far from "
+                    "Earth's 975,000-984,000 mGal. The values look like {}: set GRAVITY_UNITS to '{}'."
+                ).format(
+                    gravity_field,
+                    problem.median,
+                    names[units],
+                    names[problem.likely_units],
+                    names[problem.likely_units],
+                )
+            else:
+                text = self.tr(
+                    "Observed gravity in {} reads {:.6g} mGal (median), far from Earth's 975,000-984,000 "
+                    "mGal in any unit: relative meter readings or another quantity? The reduction needs "
+                    "absolute observed gravity."
+                ).format(gravity_field, problem.median)
+            raise QgsProcessingException(text)
+        observed = gravity_to_mgal(raw, units)
+        odd = gravity_out_of_range(observed)
+        table.flag_where(odd, "gravity_implausible")
+        observed[odd] = np.nan
+        return observed
 
     def _densities(self, parameters, context, table, feedback):
         density = self.parameterAsDouble(parameters, self.DENSITY, context)
@@ -294,16 +456,25 @@ class BouguerReductionAlgorithm(StationAlgorithm):
         if names:
             scale = 1000.0 if self.parameterAsEnum(parameters, self.DENSITY_FIELD_UNITS, context) == 1 else 1.0
             per_station = table.field_values(names[0], scale)
-            missing = ~np.isfinite(per_station) | (per_station <= 0)
-            table.flag_where(missing, self.tr("density missing, default used"))
-            values = np.where(missing, density, per_station)
+            missing = ~np.isfinite(per_station)
+            table.flag_where(missing, "density_default")
+            low, high = DENSITY_LIMITS
+            bad = ~missing & ((per_station < low) | (per_station > high))
+            given = int((~missing).sum())
+            if given and bad.sum() * 2 > given:
+                problem = density_sentence(float(np.median(per_station[~missing])), "DENSITY_FIELD " + names[0])
+                raise QgsProcessingException(
+                    problem + " " + self.tr("Check DENSITY_FIELD_UNITS (kg/m³ or g/cm³).")
+                )
+            table.flag_where(bad, "density_bad")
+            values = np.where(missing, density, np.where(bad, np.nan, per_station))
         low, high = PLAUSIBLE_DENSITY
-        odd = (values < low) | (values > high)
+        odd = np.isfinite(values) & ((values < low) | (values > high))
         if np.any(odd):
             feedback.pushWarning(
                 self.tr(
                     "{} station(s) have a reduction density outside {}-{} kg/m³ (e.g. {}); check the units."
                 ).format(int(odd.sum()), low, high, float(values[odd][0]))
             )
-            table.flag_where(odd, self.tr("unusual density"))
+            table.flag_where(odd, "density_unusual")
         return values

@@ -19,8 +19,19 @@ from qgis.core import (
 )
 from qgis.PyQt.QtCore import QVariant
 
+from ..heights import (
+    DEM_DATUM_KEYS,
+    HEIGHT_DATUM_KEYS,
+    check_dem_values,
+    flag_mismatches,
+    geoid_description,
+    prepare_heights,
+    warn_partial_coverage,
+)
+from ..raster_io import raster_path
 from ..stations import write_stations
 from ..terrain_run import EXACT, RING_SECTOR, compute_terrain, place_stations
+from .bouguer_reduction import ENGINE_EXTRA_FIELDS
 from .base import StationAlgorithm, is_unset
 from .field_checks import check_numeric_fields
 
@@ -73,6 +84,14 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
             "field per zone.</p>"
             "<p>Station heights come from the height field (the height difference is always "
             "taken from the station's own height) or, when empty, from the DEM.</p>"
+            "<p><b>Datums</b>: station heights are converted to the DEM's datum before the "
+            "comparison (HEIGHT_DATUM, DEM_DATUM; EGM96 from PROJ's egm96_15.gtx). Stations "
+            "differing from the DEM beyond the local relief are flagged height_dem_mismatch, and "
+            "the log names the setting when most differ by about the geoid height.</p>"
+            "<p><b>Limits</b>: density 500-5000 kg/m³; inner radius above 0 and below the outer "
+            "radius (default 895 m, the outer edge of Hammer zone F); a regional elevation raster "
+            "reaching 166.7 km is needed for the standard correction. qc_flag holds codes, "
+            "qc_note their meaning.</p>"
             "<p>{}</p>"
         ).format(self.caution())
 
@@ -89,6 +108,7 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         )
         self.add_height_units_parameter()
         self.addParameter(QgsProcessingParameterRasterLayer(self.DEM, self.tr("Elevation raster (DEM, metres)")))
+        self.add_datum_parameters()
         self.add_zone_parameters(advanced=False)
         self.add_density_parameter()
         self.addParameter(
@@ -152,11 +172,12 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
             {
                 self.HEIGHT_FIELD: self.tr("station height"),
                 self.INNERMOST_TC_FIELD: self.tr("innermost-ring correction"),
+                self.GEOID_FIELD: self.tr("geoid height"),
             },
         )
         if problem:
             return False, problem
-        problem = self.check_density_and_radii(parameters, context)
+        problem = self.check_density_and_radii(parameters, context) or self.check_datums(parameters, context)
         if problem:
             return False, problem
         problem = self._zone_problem(parameters, context)
@@ -206,13 +227,32 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
     # --- end ring-and-sector zone choice ---
 
     def processAlgorithm(self, parameters, context, feedback):  # noqa: N802 - QGIS API
+        return self.run_staged(parameters, context, feedback, self._correct)
+
+    def _correct(self, parameters, context, feedback):
+        from ...algorithms.constants import GRAVITATIONAL_CONSTANT
+
         dem = self.parameterAsRasterLayer(parameters, self.DEM, context)
         if dem is None:
             raise QgsProcessingException(self.invalidRasterError(parameters, self.DEM))
         regional = self.parameterAsRasterLayer(parameters, self.REGIONAL_DEM, context)
         source, steps, table = self.read_input_stations(parameters, context, feedback)
         placed = place_stations(dem, table, context)
-        heights = self.station_heights(parameters, context, table, placed)
+        check_dem_values(placed.raster.path, self.tr("elevation raster"))
+        if regional is not None:
+            check_dem_values(raster_path(regional), self.tr("regional elevation raster"))
+        height_datum = self.parameterAsEnum(parameters, self.HEIGHT_DATUM, context)
+        dem_datum = self.parameterAsEnum(parameters, self.DEM_DATUM, context)
+        heights = prepare_heights(
+            table,
+            self.raw_station_heights(parameters, context, table),
+            height_datum,
+            dem_datum,
+            self.given_geoid(parameters, context, table),
+            placed,
+            feedback,
+            declared_units=self.parameterAsEnum(parameters, self.HEIGHT_UNITS, context),
+        )
         innermost_name = self.first_field(parameters, self.INNERMOST_TC_FIELD, context)
         innermost = table.field_values(innermost_name) if innermost_name else None
         water_density = (
@@ -226,15 +266,17 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         if problem:
             raise QgsProcessingException(problem)
         zones = self._zones(parameters, context)
+        inner = self.parameterAsDouble(parameters, self.INNER_RADIUS, context)
+        outer = self.parameterAsDouble(parameters, self.OUTER_RADIUS, context)
 
         steps.setCurrentStep(1)
         result = compute_terrain(
             table,
-            heights,
+            heights.in_dem_datum,
             placed,
             regional,
-            inner_radius=self.parameterAsDouble(parameters, self.INNER_RADIUS, context),
-            outer_radius=self.parameterAsDouble(parameters, self.OUTER_RADIUS, context),
+            inner_radius=inner,
+            outer_radius=outer,
             density=np.full(len(table), density),
             innermost_tc=innermost,
             water_density=water_density,
@@ -250,21 +292,38 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         if method == EXACT:
             columns["dem_diff"] = result["dem_diff"]
             columns["tc_cover"] = result["coverage"]
-            added += [("dem_diff", QVariant.Double), ("tc_cover", QVariant.Double)]
+            columns.update({k: result[k] for k in result if k in ENGINE_EXTRA_FIELDS})
+            added += [(k, QVariant.Double) for k in columns if k not in dict(added)]
+            flag_mismatches(table, result["dem_diff"], heights, placed, height_datum, dem_datum, feedback)
+            warn_partial_coverage(result["coverage"], outer, regional is not None, feedback)
         elif self.parameterAsBoolean(parameters, self.ZONE_FIELDS, context):
             for letter in HAMMER_ZONE_LETTERS:
                 if letter in result["zones"]:
                     name = "tc_" + letter.lower()
                     columns[name] = result["zones"][letter]
                     added.append((name, QVariant.Double))
-        added.append(("qc_flag", QVariant.String))
+        added += [("qc_flag", QVariant.String), ("qc_note", QVariant.String)]
 
         steps.setCurrentStep(2)
         sink, dest_id, fields, indices = self.station_sink(parameters, context, source, added, feedback)
         write_stations(sink, table, fields, indices, columns, steps)
+        del sink
         computed = int(np.isfinite(result["tc_total"]).sum())
         flagged = sum(1 for f in table.flags if f)
         feedback.pushInfo(
             self.tr("{} stations: terrain correction computed for {}, {} flagged.").format(len(table), computed, flagged)
         )
-        return {self.OUTPUT: dest_id, self.STATIONS_COMPUTED: computed, self.STATIONS_FLAGGED: flagged}
+        settings = {
+            "method": "exact engine" if method == EXACT else "ring-and-sector (Hammer 1939)",
+            "density_kg_m3": density,
+            "water_density_kg_m3": water_density,
+            "gravitational_constant": GRAVITATIONAL_CONSTANT,
+            "inner_radius_m": inner,
+            "outer_radius_m": outer,
+            "height_datum": HEIGHT_DATUM_KEYS[height_datum],
+            "dem_datum": DEM_DATUM_KEYS[dem_datum],
+            "geoid": geoid_description(height_datum, dem_datum),
+            "dem_files": [p for p in (placed.raster.path, raster_path(regional) if regional else None) if p],
+            "innermost_field": innermost_name,
+        }
+        return {self.OUTPUT: dest_id, self.STATIONS_COMPUTED: computed, self.STATIONS_FLAGGED: flagged}, settings

@@ -22,7 +22,8 @@ def _run(params, feedback=None):
     import processing
     from qgis.core import QgsProcessingContext
 
-    base = {"OUTPUT": "TEMPORARY_OUTPUT"}
+    # The synthetic DEMs hold heights above the ellipsoid, like the stations.
+    base = {"OUTPUT": "TEMPORARY_OUTPUT", "DEM_DATUM": 1}
     base.update(params)
     return processing.run("reliefgravity:bouguerreduction", base, feedback=feedback, context=QgsProcessingContext())
 
@@ -176,20 +177,21 @@ def test_layer_without_crs_is_refused(provider, make_points, station_rows):
         _run({"INPUT": str(path), "GRAVITY_FIELD": "g_obs", "HEIGHT_FIELD": "elev"})
 
 
-def test_latitude_out_of_range_is_flagged(provider, make_points, station_rows):
+def test_latitude_out_of_range_stops_the_run(provider, make_points, station_rows, tmp_path):
+    # Issue 8: a position outside the CRS's area of use is not reduced as if real.
+    from qgis.core import QgsProcessingException
+
     rows = [dict(r, x=10.0 + 0.01 * i, y=45.0) for i, r in enumerate(station_rows)]
     rows[3]["y"] = 95.0
     path = make_points(rows, epsg=4326, name="geo.gpkg")
-    result = _run({"INPUT": str(path), "GRAVITY_FIELD": "g_obs", "HEIGHT_FIELD": "elev", "TC_FIELD": "tc_given"})
-    layer = result["OUTPUT"]
-    assert layer.featureCount() == 12
-    assert np.isnan(_values(layer, "normal_g")[3])
-    assert "latitude" in _values(layer, "qc_flag")[3]
-    assert np.isfinite(_values(layer, "faa")[4])
+    out = tmp_path / "out.gpkg"
+    with pytest.raises(QgsProcessingException, match="area of use"):
+        _run({"INPUT": str(path), "GRAVITY_FIELD": "g_obs", "HEIGHT_FIELD": "elev", "TC_FIELD": "tc_given", "OUTPUT": str(out)})
+    assert not out.exists()
 
 
 def test_implausible_density_warns(provider, stations_gpkg, collecting_feedback):
-    _run({"INPUT": str(stations_gpkg), "GRAVITY_FIELD": "g_obs", "HEIGHT_FIELD": "elev", "DENSITY": 5200.0, "TC_FIELD": "tc_given"}, collecting_feedback)
+    _run({"INPUT": str(stations_gpkg), "GRAVITY_FIELD": "g_obs", "HEIGHT_FIELD": "elev", "DENSITY": 3800.0, "TC_FIELD": "tc_given"}, collecting_feedback)
     assert any("outside" in w and "kg/m" in w for w in collecting_feedback.warnings)
 
 
@@ -223,7 +225,7 @@ def test_heights_sampled_from_dem_are_flagged(provider, stations_gpkg, hill_dem)
     result = _run({"INPUT": str(stations_gpkg), "GRAVITY_FIELD": "g_obs", "DEM": str(dem_path), "TC_FIELD": "tc_given"})
     layer = result["OUTPUT"]
     flags = _values(layer, "qc_flag")
-    assert all("height from DEM" in f for f in flags)
+    assert all("height_from_dem" in f.split(";") for f in flags)
     slab = np.array(_values(layer, "slab_corr"))
     sampled = slab / (2 * np.pi * 6.6743e-11 * 2670.0 * 1e5)
     assert np.all((sampled > 199.0) & (sampled < 801.0))

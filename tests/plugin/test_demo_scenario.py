@@ -44,6 +44,9 @@ def reduced(provider, tmp_path_factory):
             "HEIGHT_FIELD": "elev_m",
             "DEM": _one("*_dem.tif"),
             "REGIONAL_DEM": _one("*_regional.tif"),
+            # The invented world's sea level is the ellipsoid (demo/README.md).
+            "HEIGHT_DATUM": 0,
+            "DEM_DATUM": 1,
             "OUTPUT": str(out),
         },
     )

@@ -82,6 +82,8 @@ def model_run(provider, survey):
             "gravity_field": "g_obs",
             "height_field": "height",
             "dem": str(survey / "dem.tif"),
+            # Invented DEM on the same datum as the invented station heights.
+            "dem_datum": 2,
             "density": 2670.0,
             "reduce:reduced_stations": str(out / "reduced.gpkg"),
             "grid:anomaly": str(out / "cba.tif"),
@@ -131,6 +133,7 @@ def test_model_through_qgis_process(model_run, survey, tmp_path, qgis_process_en
             "gravity_field=g_obs",
             "height_field=height",
             f"dem={survey / 'dem.tif'}",
+            "dem_datum=2",
             "density=2670",
             f"reduce:reduced_stations={out / 'reduced.gpkg'}",
             f"grid:anomaly={out / 'cba.tif'}",
@@ -160,6 +163,8 @@ def test_model_outputs_are_styled_when_loaded(provider, survey, tmp_path, qgis_n
             "gravity_field": "g_obs",
             "height_field": "height",
             "dem": str(survey / "dem.tif"),
+            # Invented DEM on the same datum as the invented station heights.
+            "dem_datum": 2,
             "reduce:reduced_stations": str(tmp_path / "reduced.gpkg"),
             "grid:anomaly": str(tmp_path / "cba.tif"),
             "grid:contours": str(tmp_path / "contours.gpkg"),
