@@ -222,7 +222,7 @@ class DensityEstimateAlgorithm(StationAlgorithm):
         if dem is None:
             raise QgsProcessingException(self.invalidRasterError(parameters, self.DEM))
         placed = place_stations(dem, table, context)
-        observed = table.field_values(self.first_field(parameters, self.GRAVITY_FIELD, context), label=self.tr("observed gravity"))
+        observed = table.field_values(self.first_field(parameters, self.GRAVITY_FIELD, context), missing_code="no_gravity")
         heights = self.station_heights(parameters, context, table, placed)
         curvature = self.parameterAsBoolean(parameters, self.CURVATURE, context)
         steps.setCurrentStep(1)
