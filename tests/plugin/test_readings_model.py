@@ -21,7 +21,7 @@ def test_readings_model_runs_the_chain(provider, tmp_path):
 
     model = QgsProcessingModelAlgorithm()
     assert model.fromFile(str(MODEL))
-    assert sorted(model.childAlgorithms()) == ["grid", "observed", "reduce"]
+    assert sorted(model.childAlgorithms()) == ["grid", "observed", "reduce", "report"]
     assert model.childAlgorithm("observed").algorithmId() == "reliefgravity:observedgravity"
     assert model.validate()[0]
     result = processing.run(
@@ -35,7 +35,7 @@ def test_readings_model_runs_the_chain(provider, tmp_path):
             "dem": str(DATA / "corvahl_dem.tif"), "regional_dem": str(DATA / "corvahl_regional.tif"), "density": 2670.0,
             "observed:observed_stations": str(tmp_path / "observed.gpkg"), "observed:readings": str(tmp_path / "readings.gpkg"),
             "reduce:reduced_stations": str(tmp_path / "reduced.gpkg"), "grid:anomaly": str(tmp_path / "cba.tif"),
-            "grid:contours": str(tmp_path / "contours.gpkg"),
+            "grid:contours": str(tmp_path / "contours.gpkg"), "report:survey_report": str(tmp_path / "report.html"),
         },
     )
     assert Path(result["grid:anomaly"]) == tmp_path / "cba.tif"
