@@ -36,9 +36,15 @@ class ShippedModel(QgsProcessingModelAlgorithm):
     def __init__(self, path):
         super().__init__()
         self._path = Path(path)
-        if not self.fromFile(str(self._path)):
+        if not self.reload():
             raise ValueError(f"{self._path.name} is not a readable Processing model file")
+
+    def reload(self) -> bool:
+        """Read the file again; children attach to the algorithms registered now, and the outputs follow."""
+        if not self.fromFile(str(self._path)):
+            return False
         self.setSourceFilePath(str(self._path))
+        return True
 
     def name(self):
         return self._path.stem
@@ -106,4 +112,30 @@ def add_shipped_models(provider, folder: Path | None = None) -> list[str]:
         provider.addAlgorithm(model)
     for warning in warnings:
         QgsMessageLog.logMessage(warning, LOG_TAG, Qgis.Warning)
+    if models and registry.providerById(provider.id()) is None:
+        _reload_once_registered(provider.id(), models)
     return warnings
+
+
+def _reload_once_registered(provider_id: str, models: list[ShippedModel]) -> None:
+    """Re-read ``models`` when the provider joins the registry.
+
+    While the registry loads a provider, the provider's own algorithms are not
+    yet found by id, so a model read then has no child algorithms attached and
+    therefore no outputs (``qgis_process.bin help`` and the toolbox would list
+    none). The instances that run are read afresh (``createInstance``); this
+    fixes the listed ones.
+    """
+    registry = QgsApplication.processingRegistry()
+
+    def reload(added_id):
+        if added_id != provider_id:
+            return
+        registry.providerAdded.disconnect(reload)
+        for model in models:
+            try:
+                model.reload()
+            except RuntimeError:  # the provider was refreshed meanwhile: its models are gone
+                return
+
+    registry.providerAdded.connect(reload)

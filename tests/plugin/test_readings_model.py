@@ -1,5 +1,5 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
-"""The shipped readings -> observed gravity -> reduce -> grid model, through processing.run (demo data, invented)."""
+"""The shipped readings -> observed gravity -> reduce -> grid -> report model, through processing.run (demo data, invented)."""
 
 from __future__ import annotations
 
@@ -45,3 +45,6 @@ def test_readings_model_runs_the_chain(provider, tmp_path):
     assert len(rows) == 351 and np.all(np.isfinite(cba))
     assert np.abs(g - truth).max() < 0.05  # invented readings: recovered within the reading noise and drift
     assert gdal.Open(str(tmp_path / "cba.tif")).RasterXSize > 10
+    report = (tmp_path / "report.html").read_text(encoding="utf-8")
+    assert Path(result["report:survey_report"]) == tmp_path / "report.html"
+    assert "<h2>Anomaly map</h2>" in report and "351 stations" in report
