@@ -33,11 +33,16 @@ def _algorithm_classes():
 
 
 class ReliefGravityProvider(QgsProcessingProvider):
-    """Groups the Relief Gravity algorithms in the toolbox."""
+    """Groups the Relief Gravity algorithms and shipped models in the toolbox."""
 
     def loadAlgorithms(self):  # noqa: N802 - QGIS API
         for algorithm_class in _algorithm_classes():
             self.addAlgorithm(algorithm_class())
+        # The shipped Modeler models (plugin/models/*.model3) as reliefgravity:<file stem>;
+        # one whose child algorithms are missing is skipped with a logged warning.
+        from .shipped_models import add_shipped_models
+
+        add_shipped_models(self)
 
     def id(self):
         return "reliefgravity"

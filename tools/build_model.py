@@ -1,18 +1,26 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
-"""Build the shipped Graphical Modeler model and the .qml styles with QGIS's own API.
+"""Build the shipped Graphical Modeler models and the .qml styles with QGIS's own API.
 
-    QT_QPA_PLATFORM=offscreen .venv/bin/python tools/build_model.py            # model only
-    QT_QPA_PLATFORM=offscreen .venv/bin/python tools/build_model.py --styles   # model and styles
+    QT_QPA_PLATFORM=offscreen .venv/bin/python tools/build_model.py            # models only
+    QT_QPA_PLATFORM=offscreen .venv/bin/python tools/build_model.py --styles   # models and styles
 
-The models: ``plugin/models/readings_reduce_grid.model3`` starts from meter
-readings (``reliefgravity:observedgravity`` first, then as below);
-``plugin/models/reduce_grid_contour.model3`` chains
-``reliefgravity:bouguerreduction`` -> ``reliefgravity:anomalygrid`` (with
-contours); ``plugin/models/reduce_grid_separate.model3`` adds
-``reliefgravity:regionalresidual`` on the grid (sampled back onto the
-reduced stations). It is built in code rather than drawn in the Modeler so that it
-always matches the algorithms' current parameter names; run this script again
-after changing them. The styles are written by ``plugin/styling.py`` from an
+The models (each listed by the provider as ``reliefgravity:<file stem>``, see
+``plugin/shipped_models.py``):
+
+- ``plugin/models/reduce_grid_contour.model3``: stations with observed gravity
+  -> ``reliefgravity:bouguerreduction`` -> ``reliefgravity:anomalygrid`` (with
+  contours) -> ``reliefgravity:surveyreport``;
+- ``plugin/models/readings_reduce_grid.model3``: the same chain preceded by
+  ``reliefgravity:observedgravity`` (from meter readings);
+- ``plugin/models/reduce_grid_separate.model3``: reduction and grid, then
+  ``reliefgravity:regionalresidual`` on the grid (sampled back onto the
+  reduced stations).
+
+The shared steps are built by ``_add_reduce``, ``_add_grid`` and
+``_add_report``. The models are built in code rather than drawn in the Modeler
+so that they always match the algorithms' current parameter names; run this
+script again after changing them. A model file whose content would not change
+is left alone (rewriting it would only reorder its XML attributes). The styles are written by ``plugin/styling.py`` from an
 invented anomaly (two Gaussian bodies on a regional gradient), so the raster
 style's colour stops are those of that invented raster (see styling.py).
 """
@@ -36,7 +44,7 @@ STATIONS, GRAVITY_FIELD, HEIGHT_FIELD, DEM, DENSITY = "stations", "gravity_field
 REGIONAL_DEM = "regional_dem"
 HEIGHT_DATUM, DEM_DATUM = "height_datum", "dem_datum"
 #: Model outputs; qgis_process names them "<child id>:<output name>".
-REDUCED, ANOMALY, CONTOURS = "reduced_stations", "anomaly", "contours"
+REDUCED, ANOMALY, CONTOURS, REPORT = "reduced_stations", "anomaly", "contours", "survey_report"
 
 
 def _register_checkout() -> None:
@@ -95,53 +103,150 @@ def _output(child, child_output, name, description, x, y):
     child.setModelOutputs(outputs)
 
 
-def build_model():
-    """The reduce -> grid -> contour model (QgsProcessingModelAlgorithm)."""
+def _add_inputs(model, definitions, x, y0, dy):
+    """Add model parameters (in this order, one below the other)."""
+    from qgis.core import QgsProcessingModelParameter
+    from qgis.PyQt.QtCore import QPointF
+
+    for k, definition in enumerate(definitions):
+        component = QgsProcessingModelParameter(definition.name())
+        component.setPosition(QPointF(x, y0 + dy * k))
+        model.addModelParameter(definition, component)
+
+
+def _add_reduce(model, input_source, gravity_source, y, output_xy):
+    """``reduce``: bouguerreduction of ``input_source`` with the model's height, DEM and density inputs."""
+    from qgis.core import QgsProcessingModelChildParameterSource as Source
+
+    reduce = _child(
+        "reliefgravity:bouguerreduction", "reduce", "Bouguer reduction",
+        {
+            "INPUT": input_source,
+            "GRAVITY_FIELD": gravity_source,
+            "HEIGHT_FIELD": Source.fromModelParameter(HEIGHT_FIELD),
+            "DEM": Source.fromModelParameter(DEM),
+            "DENSITY": Source.fromModelParameter(DENSITY),
+            "REGIONAL_DEM": Source.fromModelParameter(REGIONAL_DEM),
+            "HEIGHT_DATUM": Source.fromModelParameter(HEIGHT_DATUM),
+            "DEM_DATUM": Source.fromModelParameter(DEM_DATUM),
+        },
+        420.0, y,
+    )
+    _output(reduce, "OUTPUT", REDUCED, "Reduced stations", *output_xy)
+    model.addChildAlgorithm(reduce)
+
+
+def _add_grid(model, y):
+    """``grid``: anomalygrid of the reduced stations' cba, with contours."""
+    from qgis.core import QgsProcessingModelChildParameterSource as Source
+
+    grid = _child(
+        "reliefgravity:anomalygrid", "grid", "Anomaly grid and contours",
+        {"INPUT": Source.fromChildOutput("reduce", "OUTPUT"), "FIELD": Source.fromStaticValue("cba")},
+        420.0, y,
+    )
+    _output(grid, "OUTPUT", ANOMALY, "Complete Bouguer anomaly raster", 680.0, y - 20.0)
+    _output(grid, "CONTOURS", CONTOURS, "Anomaly contours", 680.0, y + 60.0)
+    model.addChildAlgorithm(grid)
+
+
+def _add_report(model, y):
+    """``report``: surveyreport of the reduced stations with the grid and its contours."""
+    from qgis.core import QgsProcessingModelChildParameterSource as Source
+
+    report = _child(
+        "reliefgravity:surveyreport", "report", "Survey report",
+        {
+            "INPUT": Source.fromChildOutput("reduce", "OUTPUT"),
+            "HEIGHT_FIELD": Source.fromModelParameter(HEIGHT_FIELD),
+            "GRID": Source.fromChildOutput("grid", "OUTPUT"),
+            "CONTOURS": Source.fromChildOutput("grid", "CONTOURS"),
+        },
+        420.0, y,
+    )
+    _output(report, "OUTPUT", REPORT, "Survey report (HTML)", 680.0, y)
+    model.addChildAlgorithm(report)
+
+
+def _datum_inputs():
+    """The two height-datum inputs every model passes to the reduction."""
+    from qgis.core import QgsProcessingParameterEnum
+
+    return [
+        QgsProcessingParameterEnum(
+            HEIGHT_DATUM, "Station heights are",
+            options=["Ellipsoidal heights (e.g. from GNSS)", "Orthometric heights above the EGM96 geoid"],
+            defaultValue=0,
+        ),
+        QgsProcessingParameterEnum(
+            DEM_DATUM, "Elevation raster heights are above",
+            options=["EGM96 geoid (most global DEMs)", "Ellipsoid", "Same as the station heights"],
+            defaultValue=0,
+        ),
+    ]
+
+
+#: Help of the inputs shared by every model.
+SHARED_HELP = {
+    REGIONAL_DEM: (
+        "Coarser elevation raster reaching 166.7 km around the stations (outer zone). Needed for the "
+        "standard correction; without it the far terrain is missing and the stations are flagged tc_partial."
+    ),
+    HEIGHT_DATUM: "What the station heights are: ellipsoidal (GNSS, default) or orthometric above EGM96.",
+    DEM_DATUM: (
+        "What the DEM heights are above: the EGM96 geoid (most global DEMs, default), the ellipsoid, "
+        "or the same as the stations."
+    ),
+}
+
+
+def _help(description, **inputs):
+    return {"ALG_DESC": description + " " + REGIONAL_SENTENCE + " " + INTERPRETATION_ONLY, **SHARED_HELP, **inputs}
+
+
+#: The standard correction's need for a regional DEM, in every model's description.
+REGIONAL_SENTENCE = (
+    "The standard terrain correction reaches 166.7 km: give a regional elevation raster that reaches "
+    "166.7 km around every station, and set the two datums to what your heights and DEM are (most global "
+    "DEMs: EGM96 geoid; GNSS heights: ellipsoidal)."
+)
+#: Closing sentence of every model's description.
+INTERPRETATION_ONLY = (
+    "Results support interpretation only; check reductions against the survey's own ties and specifications."
+)
+#: What the report step adds, in the descriptions of the models that end with it.
+REPORT_SENTENCE = (
+    "Last, one self-contained HTML survey report (parameters, flags, map, plots, terrain correction, "
+    "cautions) of the reduced stations, the grid and the contours."
+)
+
+
+def _stations_model(name, description):
+    """Station layer with observed gravity -> reduce -> grid with contours (the base of two models)."""
     from qgis.core import (
         QgsProcessing,
         QgsProcessingModelAlgorithm,
         QgsProcessingModelChildParameterSource as Source,
-        QgsProcessingModelParameter,
-        QgsProcessingParameterEnum,
         QgsProcessingParameterField,
         QgsProcessingParameterFeatureSource,
         QgsProcessingParameterNumber,
         QgsProcessingParameterRasterLayer,
     )
-    from qgis.PyQt.QtCore import QPointF
 
-    model = QgsProcessingModelAlgorithm(
-        "Reduce, grid and contour gravity stations", "Relief Gravity", "reliefgravity"
-    )
+    model = QgsProcessingModelAlgorithm(name, "Relief Gravity", "reliefgravity")
     model.setHelpContent(
-        {
-            "ALG_DESC": (
-                "Bouguer reduction of a station layer with terrain corrections from a DEM, "
-                "then a minimum-curvature grid of the complete Bouguer anomaly (cba, mGal) "
-                "with contours. The standard terrain correction reaches 166.7 km: give a "
-                "regional elevation raster that reaches 166.7 km around every station, "
-                "otherwise the stations are flagged tc_partial and cba misses the far "
-                "terrain. Set the two datums to what your heights and DEM are (most "
-                "global DEMs: EGM96 geoid; GNSS heights: ellipsoidal). Results support "
-                "interpretation only; check reductions against the survey's own ties and "
-                "specifications; decisions on drilling, groundwater or engineering are for "
-                "licensed practice and local codes."
-            ),
-            STATIONS: "Gravity stations (points, projected CRS in metres).",
-            GRAVITY_FIELD: "Observed gravity (mGal).",
-            HEIGHT_FIELD: "Station height above the ellipsoid (m); empty = sample the DEM.",
-            DEM: "Elevation raster (m) for the terrain correction.",
-            DENSITY: "Reduction density (kg/m³), default 2670.",
-            REGIONAL_DEM: (
-                "Coarser elevation raster reaching 166.7 km around the stations (outer zone). "
-                "Needed for the standard correction; without it the far terrain is missing and "
-                "the stations are flagged."
-            ),
-            HEIGHT_DATUM: "What the station heights are: ellipsoidal (GNSS, default) or orthometric above EGM96.",
-            DEM_DATUM: "What the DEM heights are above: the EGM96 geoid (most global DEMs, default), the ellipsoid, or the same as the stations.",
-        }
+        _help(
+            description,
+            **{
+                STATIONS: "Gravity stations (points, projected CRS in metres).",
+                GRAVITY_FIELD: "Observed gravity (mGal).",
+                HEIGHT_FIELD: "Station height above the ellipsoid (m); empty = sample the DEM.",
+                DEM: "Elevation raster (m) for the terrain correction.",
+                DENSITY: "Reduction density (kg/m³), default 2670.",
+            },
+        )
     )
-    inputs = [
+    _add_inputs(model, [
         QgsProcessingParameterFeatureSource(STATIONS, "Gravity stations", [QgsProcessing.TypeVectorPoint]),
         QgsProcessingParameterField(
             GRAVITY_FIELD, "Observed gravity field (mGal)", parentLayerParameterName=STATIONS,
@@ -157,52 +262,24 @@ def build_model():
             defaultValue=2670.0, optional=True,
         ),
         QgsProcessingParameterRasterLayer(
-            REGIONAL_DEM, "Regional elevation raster reaching 166.7 km (needed for the standard correction)", optional=True
+            REGIONAL_DEM, "Regional elevation raster for the outer zone", optional=True
         ),
-        QgsProcessingParameterEnum(
-            HEIGHT_DATUM, "Station heights are",
-            options=["Ellipsoidal heights (e.g. from GNSS)", "Orthometric heights above the EGM96 geoid"],
-            defaultValue=0,
-        ),
-        QgsProcessingParameterEnum(
-            DEM_DATUM, "Elevation raster heights are above",
-            options=["EGM96 geoid (most global DEMs)", "Ellipsoid", "Same as the station heights"],
-            defaultValue=0,
-        ),
-    ]
-    for k, definition in enumerate(inputs):
-        component = QgsProcessingModelParameter(definition.name())
-        component.setPosition(QPointF(120.0, 60.0 + 70.0 * k))
-        model.addModelParameter(definition, component)
+        *_datum_inputs(),
+    ], 120.0, 60.0, 70.0)
+    _add_reduce(model, Source.fromModelParameter(STATIONS), Source.fromModelParameter(GRAVITY_FIELD),
+                200.0, (640.0, 120.0))
+    _add_grid(model, 380.0)
+    return model
 
-    reduce = _child(
-        "reliefgravity:bouguerreduction", "reduce", "Bouguer reduction",
-        {
-            "INPUT": Source.fromModelParameter(STATIONS),
-            "GRAVITY_FIELD": Source.fromModelParameter(GRAVITY_FIELD),
-            "HEIGHT_FIELD": Source.fromModelParameter(HEIGHT_FIELD),
-            "DEM": Source.fromModelParameter(DEM),
-            "DENSITY": Source.fromModelParameter(DENSITY),
-            "REGIONAL_DEM": Source.fromModelParameter(REGIONAL_DEM),
-            "HEIGHT_DATUM": Source.fromModelParameter(HEIGHT_DATUM),
-            "DEM_DATUM": Source.fromModelParameter(DEM_DATUM),
-        },
-        420.0, 200.0,
-    )
-    _output(reduce, "OUTPUT", REDUCED, "Reduced stations", 640.0, 120.0)
-    model.addChildAlgorithm(reduce)
 
-    grid = _child(
-        "reliefgravity:anomalygrid", "grid", "Anomaly grid and contours",
-        {
-            "INPUT": Source.fromChildOutput("reduce", "OUTPUT"),
-            "FIELD": Source.fromStaticValue("cba"),
-        },
-        420.0, 380.0,
+def build_model():
+    """Stations with observed gravity -> reduce -> grid -> contours -> survey report."""
+    model = _stations_model(
+        "Reduce, grid, contour and report gravity stations",
+        "Bouguer reduction of a station layer with terrain corrections from a DEM, then a minimum-curvature "
+        "grid of the complete Bouguer anomaly (cba, mGal) with contours. " + REPORT_SENTENCE,
     )
-    _output(grid, "OUTPUT", ANOMALY, "Complete Bouguer anomaly raster", 680.0, 360.0)
-    _output(grid, "CONTOURS", CONTOURS, "Anomaly contours", 680.0, 440.0)
-    model.addChildAlgorithm(grid)
+    _add_report(model, 560.0)
     model.updateDestinationParameters()
     return model
 
@@ -213,29 +290,24 @@ REGIONAL, RESIDUAL = "regional", "residual"
 
 
 def build_separation_model():
-    """The reduce -> grid -> regional-residual model: the first model plus a third child."""
+    """Stations with observed gravity -> reduce -> grid -> regional-residual."""
     from qgis.core import (
         QgsProcessingModelChildParameterSource as Source,
-        QgsProcessingModelParameter,
         QgsProcessingParameterEnum,
         QgsProcessingParameterNumber,
     )
-    from qgis.PyQt.QtCore import QPointF
 
-    model = build_model()
-    model.setName("Reduce, grid and separate regional and residual")
-    help_content = dict(model.helpContent())
-    help_content["ALG_DESC"] = (
+    model = _stations_model(
+        "Reduce, grid and separate regional and residual",
         "Bouguer reduction of a station layer with terrain corrections from a DEM, a minimum-curvature "
         "grid of the complete Bouguer anomaly (cba, mGal) with contours, then its regional (trend "
-        "surface or upward continuation) and residual rasters, sampled back onto the reduced stations. "
-        "Results support interpretation only; check reductions against the survey's own ties and "
-        "specifications."
+        "surface or upward continuation) and residual rasters, sampled back onto the reduced stations.",
     )
+    help_content = dict(model.helpContent())
     help_content[SEPARATION_METHOD] = "Regional from a planar trend surface (default) or upward continuation."
     help_content[CONTINUATION_HEIGHT] = "Continuation height (m) for the upward-continuation regional."
     model.setHelpContent(help_content)
-    extra = [
+    _add_inputs(model, [
         QgsProcessingParameterEnum(
             SEPARATION_METHOD, "Regional from", options=["Polynomial trend surface", "Upward continuation (FFT)"],
             defaultValue=0,
@@ -244,11 +316,7 @@ def build_separation_model():
             CONTINUATION_HEIGHT, "Continuation height (m)", type=QgsProcessingParameterNumber.Double,
             defaultValue=2000.0, minValue=0.0,
         ),
-    ]
-    for k, definition in enumerate(extra):
-        component = QgsProcessingModelParameter(definition.name())
-        component.setPosition(QPointF(120.0, 480.0 + 70.0 * k))
-        model.addModelParameter(definition, component)
+    ], 120.0, 620.0, 70.0)
     separate = _child(
         "reliefgravity:regionalresidual", "separate", "Regional and residual anomaly",
         {
@@ -267,37 +335,34 @@ def build_separation_model():
     return model
 
 
+#: Inputs of the readings model wired to observedgravity's parameter of the same name in upper case.
+READINGS_INPUTS = ("readings", "station_field", "time_field", "utc_offset", "reading_field", "reading_units",
+                   "calibration", "instrument_height_field", "loop_field", "stations_id_field", "known_gravity_field")
+
+
 def build_readings_model():
-    """The readings -> observed gravity -> reduce -> grid -> contour model."""
+    """Meter readings -> observed gravity -> reduce -> grid -> contours -> survey report."""
     from qgis.core import (
         QgsProcessing,
         QgsProcessingModelAlgorithm,
         QgsProcessingModelChildParameterSource as Source,
-        QgsProcessingModelParameter,
         QgsProcessingParameterEnum,
         QgsProcessingParameterFeatureSource,
         QgsProcessingParameterField,
         QgsProcessingParameterNumber,
         QgsProcessingParameterRasterLayer,
     )
-    from qgis.PyQt.QtCore import QPointF
 
     model = QgsProcessingModelAlgorithm(
-        "Readings to observed gravity, reduce, grid and contour", "Relief Gravity", "reliefgravity"
+        "Readings to observed gravity, reduce, grid, contour and report", "Relief Gravity", "reliefgravity"
     )
-    model.setHelpContent(
-        {
-            "ALG_DESC": (
-                "Gravimeter readings to observed gravity (Longman tide, calibration, instrument height, "
-                "least-squares drift and base ties), then the Bouguer reduction with terrain corrections "
-                "from a DEM and a minimum-curvature grid of the complete Bouguer anomaly with contours. "
-                "Results support interpretation only; check them against the survey's own ties and "
-                "specifications."
-            ),
-        }
-    )
+    model.setHelpContent(_help(
+        "Gravimeter readings to observed gravity (Longman tide, calibration, instrument height, "
+        "least-squares drift and base ties), then the Bouguer reduction with terrain corrections "
+        "from a DEM and a minimum-curvature grid of the complete Bouguer anomaly with contours. " + REPORT_SENTENCE
+    ))
     field = QgsProcessingParameterField
-    inputs = [
+    _add_inputs(model, [
         QgsProcessingParameterFeatureSource("readings", "Meter readings (table)", [QgsProcessing.TypeVector]),
         field("station_field", "Station id field of the readings", parentLayerParameterName="readings"),
         field("time_field", "Time field (ISO 8601 text or date-time)", parentLayerParameterName="readings"),
@@ -318,44 +383,35 @@ def build_readings_model():
         QgsProcessingParameterRasterLayer(REGIONAL_DEM, "Regional elevation raster for the outer zone", optional=True),
         QgsProcessingParameterNumber(DENSITY, "Reduction density (kg/m³)", type=QgsProcessingParameterNumber.Double,
                                      defaultValue=2670.0, optional=True),
-    ]
-    for k, definition in enumerate(inputs):
-        component = QgsProcessingModelParameter(definition.name())
-        component.setPosition(QPointF(120.0, 40.0 + 55.0 * k))
-        model.addModelParameter(definition, component)
+        *_datum_inputs(),
+    ], 120.0, 40.0, 55.0)
 
-    wired = {key.upper(): Source.fromModelParameter(key) for key in (
-        "readings", "station_field", "time_field", "utc_offset", "reading_field", "reading_units", "calibration",
-        "instrument_height_field", "loop_field", "stations_id_field", "known_gravity_field")}
+    wired = {key.upper(): Source.fromModelParameter(key) for key in READINGS_INPUTS}
     wired.update({"STATIONS": Source.fromModelParameter(STATIONS), "HEIGHT_FIELD": Source.fromModelParameter(HEIGHT_FIELD)})
     observed = _child("reliefgravity:observedgravity", "observed", "Observed gravity from readings", wired, 420.0, 120.0)
     _output(observed, "OUTPUT", "observed_stations", "Stations with observed gravity", 680.0, 80.0)
     _output(observed, "READINGS_OUTPUT", "readings", "Reduced readings", 680.0, 140.0)
     model.addChildAlgorithm(observed)
-    reduce = _child(
-        "reliefgravity:bouguerreduction", "reduce", "Bouguer reduction",
-        {
-            "INPUT": Source.fromChildOutput("observed", "OUTPUT"),
-            "GRAVITY_FIELD": Source.fromStaticValue("g_obs"),
-            "HEIGHT_FIELD": Source.fromModelParameter(HEIGHT_FIELD),
-            "DEM": Source.fromModelParameter(DEM),
-            "DENSITY": Source.fromModelParameter(DENSITY),
-            "REGIONAL_DEM": Source.fromModelParameter(REGIONAL_DEM),
-        },
-        420.0, 320.0,
-    )
-    _output(reduce, "OUTPUT", REDUCED, "Reduced stations", 680.0, 300.0)
-    model.addChildAlgorithm(reduce)
-    grid = _child(
-        "reliefgravity:anomalygrid", "grid", "Anomaly grid and contours",
-        {"INPUT": Source.fromChildOutput("reduce", "OUTPUT"), "FIELD": Source.fromStaticValue("cba")},
-        420.0, 500.0,
-    )
-    _output(grid, "OUTPUT", ANOMALY, "Complete Bouguer anomaly raster", 680.0, 480.0)
-    _output(grid, "CONTOURS", CONTOURS, "Anomaly contours", 680.0, 560.0)
-    model.addChildAlgorithm(grid)
+    _add_reduce(model, Source.fromChildOutput("observed", "OUTPUT"), Source.fromStaticValue("g_obs"),
+                320.0, (680.0, 300.0))
+    _add_grid(model, 500.0)
+    _add_report(model, 680.0)
     model.updateDestinationParameters()
     return model
+
+
+def _same_model(model, path: Path) -> bool:
+    """Whether ``path`` already holds a model with the same content as ``model`` (both read from files)."""
+    from qgis.core import QgsProcessingModelAlgorithm
+
+    if not path.exists():
+        return False
+    with tempfile.TemporaryDirectory() as folder:
+        fresh_path = str(Path(folder) / path.name)
+        fresh, existing = QgsProcessingModelAlgorithm(), QgsProcessingModelAlgorithm()
+        if not (model.toFile(fresh_path) and fresh.fromFile(fresh_path) and existing.fromFile(str(path))):
+            return False
+        return fresh.toVariant() == existing.toVariant()
 
 
 def build_styles(folder: Path) -> tuple[Path, Path]:
@@ -425,6 +481,10 @@ def main(argv=None) -> int:
             if not ok:
                 print("model does not validate:", *problems, sep="\n  ", file=sys.stderr)
                 return 1
+            if _same_model(model, target):
+                # Rewriting would only reorder XML attributes (Qt hash order): keep the file.
+                print(f"unchanged {target}")
+                continue
             target.parent.mkdir(parents=True, exist_ok=True)
             if not model.toFile(str(target)):
                 print(f"could not write {target}", file=sys.stderr)

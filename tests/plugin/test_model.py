@@ -58,14 +58,19 @@ def load_model():
 
 def test_model_file_structure(provider):
     model = load_model()
-    assert sorted(model.childAlgorithms()) == ["grid", "reduce"]
+    assert sorted(model.childAlgorithms()) == ["grid", "reduce", "report"]
     assert model.childAlgorithm("reduce").algorithmId() == "reliefgravity:bouguerreduction"
     assert model.childAlgorithm("grid").algorithmId() == "reliefgravity:anomalygrid"
+    assert model.childAlgorithm("report").algorithmId() == "reliefgravity:surveyreport"
     names = {d.name() for d in model.parameterDefinitions()}
     assert {"stations", "gravity_field", "height_field", "dem", "density"} <= names
-    assert {"reduce:reduced_stations", "grid:anomaly", "grid:contours"} <= names
+    assert {"reduce:reduced_stations", "grid:anomaly", "grid:contours", "report:survey_report"} <= names
     source = model.childAlgorithm("grid").parameterSources()["INPUT"][0]
     assert (source.outputChildId(), source.outputName()) == ("reduce", "OUTPUT")
+    report_sources = model.childAlgorithm("report").parameterSources()
+    wired = {name: (report_sources[name][0].outputChildId(), report_sources[name][0].outputName())
+             for name in ("INPUT", "GRID", "CONTOURS")}
+    assert wired == {"INPUT": ("reduce", "OUTPUT"), "GRID": ("grid", "OUTPUT"), "CONTOURS": ("grid", "CONTOURS")}
     assert model.validate()[0]
 
 
@@ -88,6 +93,7 @@ def model_run(provider, survey):
             "reduce:reduced_stations": str(out / "reduced.gpkg"),
             "grid:anomaly": str(out / "cba.tif"),
             "grid:contours": str(out / "contours.gpkg"),
+            "report:survey_report": str(out / "report.html"),
         },
     )
     return out, result
@@ -105,6 +111,9 @@ def test_model_through_processing_run(model_run):
     contours = contours_ds.GetLayer(0)
     assert contours.GetFeatureCount() > 0
     assert contours.GetLayerDefn().GetFieldIndex("value") >= 0
+    report = (out / "report.html").read_text(encoding="utf-8")
+    assert Path(result["report:survey_report"]) == out / "report.html"
+    assert "<h2>Anomaly map</h2>" in report and "60 stations" in report
     # The chained grid equals anomalygrid run by hand on the model's reduced stations.
     direct = processing.run(
         "reliefgravity:anomalygrid",
@@ -138,6 +147,7 @@ def test_model_through_qgis_process(model_run, survey, tmp_path, qgis_process_en
             f"reduce:reduced_stations={out / 'reduced.gpkg'}",
             f"grid:anomaly={out / 'cba.tif'}",
             f"grid:contours={out / 'contours.gpkg'}",
+            f"report:survey_report={out / 'report.html'}",
         ],
         env=env, capture_output=True, text=True, timeout=300,
     )
@@ -168,6 +178,7 @@ def test_model_outputs_are_styled_when_loaded(provider, survey, tmp_path, qgis_n
             "reduce:reduced_stations": str(tmp_path / "reduced.gpkg"),
             "grid:anomaly": str(tmp_path / "cba.tif"),
             "grid:contours": str(tmp_path / "contours.gpkg"),
+            "report:survey_report": str(tmp_path / "report.html"),
         },
     )
     layers = QgsProject.instance().mapLayers().values()
@@ -197,7 +208,7 @@ def test_separation_model_chains_the_grid_into_regionalresidual(provider, survey
         model,
         {
             "stations": str(survey / "stations.gpkg"), "gravity_field": "g_obs", "height_field": "height",
-            "dem": str(survey / "dem.tif"), "density": 2670.0, "separation_method": 1, "continuation_height": 1000.0,
+            "dem": str(survey / "dem.tif"), "density": 2670.0, "dem_datum": 2, "separation_method": 1, "continuation_height": 1000.0,
             "reduce:reduced_stations": str(out / "reduced.gpkg"), "grid:anomaly": str(out / "cba.tif"),
             "grid:contours": str(out / "contours.gpkg"), "separate:regional": str(out / "regional.tif"),
             "separate:residual": str(out / "residual.tif"), "separate:stations_separated": str(out / "separated.gpkg"),
