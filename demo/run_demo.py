@@ -158,7 +158,8 @@ def main(argv: list[str]) -> int:
     # Density from the data (Parasnis, planar regional) and the residual anomaly.
     density = processing.run("reliefgravity:densityestimate", {
         "INPUT": str(files["stations"]), "GRAVITY_FIELD": "obs_grav", "HEIGHT_FIELD": "elev_m", "DEM": str(files["dem"]),
-        "REGIONAL_DEM": str(files["regional"]), "PLOT": str(output / "density_fit.png")}, feedback=feedback)
+        "REGIONAL_DEM": str(files["regional"]), "DEM_DATUM": 1, "PLOT": str(output / "density_fit.png")},
+        feedback=feedback)
     residual_path = output / "cba_residual.tif"
     processing.run("reliefgravity:regionalresidual", {"INPUT": str(grid_path), "METHOD": 0, "ORDER": 1, "ROBUST": 2,
                    "REGIONAL": str(output / "cba_regional.tif"), "RESIDUAL": str(residual_path)}, feedback=feedback)

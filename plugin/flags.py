@@ -47,6 +47,23 @@ def _notes() -> dict:
         "no_dem_at_station": _tr("The elevation raster has no data at the station: no terrain correction."),
         "tc_partial": _tr("The elevation rasters do not cover the whole correction area (see tc_cover)."),
         "tc_no_data_zones": _tr("Some ring-and-sector compartments had no elevation data and count as flat."),
+        "tc_regional_fill": _tr("Ring-and-sector: the regional raster gave heights where the fine raster has no data inside its extent."),
+        "tc_no_slope": _tr("Ring-and-sector: no elevation data at the station, so the zones finer than a DEM cell count as flat."),
+        "outside_grid": _tr("The station lies outside the anomaly raster or next to blank cells: no regional or residual value."),
+        "unknown_station": _tr("The reading names a station that is not in the station layer: left out."),
+        "no_reading": _tr("The reading is empty or not a number: left out."),
+        "duplicate_reading": _tr("Same station and time as an earlier row: this copy is left out."),
+        "time_backwards": _tr("The time is earlier than a previous row of the same loop: check it."),
+        "no_instrument_height": _tr("No instrument height given for this reading: 0 m used."),
+        "no_tide_position": _tr("The station has no usable position for the tide: its readings are left out."),
+        "reading_outlier": _tr("The reading's residual exceeds 3 standard errors."),
+        "reading_left_out": _tr("The reading was left out of the final adjustment (outlier second pass)."),
+        "loop_single_base": _tr("The loop occupies its base once only: no closure, drift not from the base."),
+        "loop_no_drift": _tr("The loop's drift could not be determined from its readings: none applied."),
+        "network_untied": _tr("Not connected through any loop to a station of known gravity."),
+        "not_read": _tr("No usable reading of this station: no observed gravity."),
+        "single_reading": _tr("One reading only: no check on this station's value."),
+        "known_station": _tr("A station of known gravity (a tie of the network)."),
     }
 
 

@@ -29,7 +29,7 @@ DENSITY_KEYS = ("density", "density_kg_m3", "reduction_density", "DENSITY")
 NORMAL_KEYS = ("normal_formula", "normal_gravity", "NORMAL_GRAVITY")
 HEIGHT_KEYS = ("height_formula", "height_correction", "HEIGHT_CORRECTION")
 STANDARD_KEYS = ("standard",)
-INTERVAL_KEYS = ("contour_interval", "interval_used", "CONTOUR_INTERVAL")
+INTERVAL_KEYS = ("contour_interval_mgal", "contour_interval", "interval_used", "CONTOUR_INTERVAL")
 
 #: Enum order of the reduction's NORMAL_GRAVITY and HEIGHT_CORRECTION
 #: parameters (public API of ``reliefgravity:bouguerreduction``).

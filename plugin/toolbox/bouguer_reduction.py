@@ -55,14 +55,53 @@ RESULT_FIELDS = REDUCTION_FIELDS[:_TC_TOTAL_AT] + ("tc_inner", "tc_outer") + RED
 ENGINE_EXTRA_FIELDS = ("tc_trunc",)
 
 
-def gravity_unit_names() -> list:
-    """Labels of the GRAVITY_UNITS options (order of algorithms.plausibility.GRAVITY_UNITS)."""
+def _tr(text: str) -> str:
     from qgis.PyQt.QtCore import QCoreApplication
 
-    def tr(text):
-        return QCoreApplication.translate("BouguerReductionAlgorithm", text)
+    return QCoreApplication.translate("BouguerReductionAlgorithm", text)
 
-    return [tr("mGal"), tr("µm/s² (0.1 mGal)"), tr("Gal (1,000 mGal)"), tr("m/s² (100,000 mGal)")]
+
+def gravity_unit_names() -> list:
+    """Labels of the GRAVITY_UNITS options (order of algorithms.plausibility.GRAVITY_UNITS)."""
+    return [_tr("mGal"), _tr("µm/s² (0.1 mGal)"), _tr("Gal (1,000 mGal)"), _tr("m/s² (100,000 mGal)")]
+
+
+def observed_gravity_mgal(table, gravity_field, units):
+    """Observed gravity in mGal; stop when most values are not Earth's gravity
+    in the declared units, flag single stations that are not (shared by the
+    algorithms that reduce observed gravity)."""
+    raw = table.field_values(gravity_field, missing_code="no_gravity")
+    problem = check_gravity(raw, units)
+    if problem is not None:
+        names = gravity_unit_names()
+        if problem.zeros:
+            text = _tr(
+                "Every observed gravity value in {} is 0: the field holds no readings. Choose the "
+                "field with observed (absolute) gravity."
+            ).format(gravity_field)
+        elif problem.likely_units is not None:
+            text = _tr(
+                "Observed gravity in {} reads {:.6g} mGal (median) with GRAVITY_UNITS = '{}', far from "
+                "Earth's 975,000-984,000 mGal. The values look like {}: set GRAVITY_UNITS to '{}'."
+            ).format(
+                gravity_field,
+                problem.median,
+                names[units],
+                names[problem.likely_units],
+                names[problem.likely_units],
+            )
+        else:
+            text = _tr(
+                "Observed gravity in {} reads {:.6g} mGal (median), far from Earth's 975,000-984,000 "
+                "mGal in any unit: relative meter readings or another quantity? The reduction needs "
+                "absolute observed gravity."
+            ).format(gravity_field, problem.median)
+        raise QgsProcessingException(text)
+    observed = gravity_to_mgal(raw, units)
+    odd = gravity_out_of_range(observed)
+    table.flag_where(odd, "gravity_implausible")
+    observed[odd] = np.nan
+    return observed
 
 
 class BouguerReductionAlgorithm(StationAlgorithm):
@@ -414,40 +453,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
         return results, settings
 
     def _observed_gravity(self, table, gravity_field, units):
-        """Observed gravity in mGal; stop when most values are not Earth's gravity
-        in the declared units, flag single stations that are not."""
-        raw = table.field_values(gravity_field, missing_code="no_gravity")
-        problem = check_gravity(raw, units)
-        if problem is not None:
-            names = gravity_unit_names()
-            if problem.zeros:
-                text = self.tr(
-                    "Every observed gravity value in {} is 0: the field holds no readings. Choose the "
-                    "field with observed (absolute) gravity."
-                ).format(gravity_field)
-            elif problem.likely_units is not None:
-                text = self.tr(
-                    "Observed gravity in {} reads {:.6g} mGal (median) with GRAVITY_UNITS = '{}', far from "
-                    "Earth's 975,000-984,000 mGal. The values look like {}: set GRAVITY_UNITS to '{}'."
-                ).format(
-                    gravity_field,
-                    problem.median,
-                    names[units],
-                    names[problem.likely_units],
-                    names[problem.likely_units],
-                )
-            else:
-                text = self.tr(
-                    "Observed gravity in {} reads {:.6g} mGal (median), far from Earth's 975,000-984,000 "
-                    "mGal in any unit: relative meter readings or another quantity? The reduction needs "
-                    "absolute observed gravity."
-                ).format(gravity_field, problem.median)
-            raise QgsProcessingException(text)
-        observed = gravity_to_mgal(raw, units)
-        odd = gravity_out_of_range(observed)
-        table.flag_where(odd, "gravity_implausible")
-        observed[odd] = np.nan
-        return observed
+        return observed_gravity_mgal(table, gravity_field, units)
 
     def _densities(self, parameters, context, table, feedback):
         density = self.parameterAsDouble(parameters, self.DENSITY, context)

@@ -42,7 +42,9 @@ from ...algorithms.density import (
 )
 from ..terrain_run import EXACT, compute_terrain, place_stations
 from .base import StationAlgorithm, is_unset
-from .bouguer_reduction import HEIGHT_FORMULAS, NORMAL_FORMULAS
+from ..heights import check_dem_values, prepare_heights
+from ..raster_io import raster_path
+from .bouguer_reduction import HEIGHT_FORMULAS, NORMAL_FORMULAS, gravity_unit_names, observed_gravity_mgal
 from .field_checks import check_numeric_fields
 
 PARASNIS, NETTLETON = 0, 1
@@ -70,6 +72,7 @@ class DensityEstimateAlgorithm(StationAlgorithm):
     """Reduction density from the stations (Parasnis 1952 or Nettleton 1939)."""
 
     GRAVITY_FIELD = "GRAVITY_FIELD"
+    GRAVITY_UNITS = "GRAVITY_UNITS"
     NORMAL_GRAVITY = "NORMAL_GRAVITY"
     HEIGHT_CORRECTION = "HEIGHT_CORRECTION"
     ATMOSPHERIC = "ATMOSPHERIC"
@@ -127,6 +130,11 @@ class DensityEstimateAlgorithm(StationAlgorithm):
             )
         )
         self.addParameter(
+            QgsProcessingParameterEnum(
+                self.GRAVITY_UNITS, self.tr("Units of observed gravity"), options=gravity_unit_names(), defaultValue=0
+            )
+        )
+        self.addParameter(
             QgsProcessingParameterField(
                 self.HEIGHT_FIELD,
                 self.tr("Station height field (above the ellipsoid; empty = sample the elevation raster)"),
@@ -134,6 +142,7 @@ class DensityEstimateAlgorithm(StationAlgorithm):
             )
         )
         self.add_height_units_parameter()
+        self.add_datum_parameters()
         self.addParameter(QgsProcessingParameterRasterLayer(self.DEM, self.tr("Elevation raster (DEM, metres)")))
         self.addParameter(
             QgsProcessingParameterEnum(
@@ -222,12 +231,32 @@ class DensityEstimateAlgorithm(StationAlgorithm):
         if dem is None:
             raise QgsProcessingException(self.invalidRasterError(parameters, self.DEM))
         placed = place_stations(dem, table, context)
-        observed = table.field_values(self.first_field(parameters, self.GRAVITY_FIELD, context), missing_code="no_gravity")
-        heights = self.station_heights(parameters, context, table, placed)
+        check_dem_values(placed.raster.path, self.tr("elevation raster"))
+        regional = self.parameterAsRasterLayer(parameters, self.REGIONAL_DEM, context)
+        if regional is not None:
+            check_dem_values(raster_path(regional), self.tr("regional elevation raster"))
+        observed = observed_gravity_mgal(
+            table,
+            self.first_field(parameters, self.GRAVITY_FIELD, context),
+            self.parameterAsEnum(parameters, self.GRAVITY_UNITS, context),
+        )
+        prepared = prepare_heights(
+            table,
+            self.raw_station_heights(parameters, context, table),
+            self.parameterAsEnum(parameters, self.HEIGHT_DATUM, context),
+            self.parameterAsEnum(parameters, self.DEM_DATUM, context),
+            self.given_geoid(parameters, context, table),
+            placed,
+            feedback,
+            declared_units=self.parameterAsEnum(parameters, self.HEIGHT_UNITS, context),
+        )
+        # The reduction's standard takes ellipsoidal heights (Hinze et al.
+        # 2005); the terrain engine compares station and DEM in the DEM's datum.
+        heights = prepared.ellipsoidal
         curvature = self.parameterAsBoolean(parameters, self.CURVATURE, context)
         steps.setCurrentStep(1)
         tc_unit = terrain_per_unit_density(
-            table, heights, placed, self.parameterAsRasterLayer(parameters, self.REGIONAL_DEM, context),
+            table, prepared.in_dem_datum, placed, regional,
             self.parameterAsDouble(parameters, self.INNER_RADIUS, context),
             self.parameterAsDouble(parameters, self.OUTER_RADIUS, context), context, steps,
         )

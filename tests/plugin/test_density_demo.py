@@ -41,7 +41,7 @@ def test_demo_without_bodies_gives_back_the_build_density(provider, tmp_path):
     result = processing.run(
         "reliefgravity:densityestimate",
         {"INPUT": str(copy), "GRAVITY_FIELD": "obs_grav", "HEIGHT_FIELD": "elev_m", "DEM": str(DATA / "corvahl_dem.tif"),
-         "REGIONAL_DEM": str(DATA / "corvahl_regional.tif"), "METHOD": 0, "REGIONAL_TREND": 1, "PLOT": None},
+         "REGIONAL_DEM": str(DATA / "corvahl_regional.tif"), "DEM_DATUM": 1, "METHOD": 0, "REGIONAL_TREND": 1, "PLOT": None},
     )
     assert result["DENSITY"] == pytest.approx(BUILT_WITH, abs=3.0), result
     assert result["DENSITY_HIGH"] - result["DENSITY_LOW"] < 5.0

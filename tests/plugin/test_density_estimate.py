@@ -75,7 +75,7 @@ def survey(tmp_path_factory, dem_writer, points_writer):
 def run(survey, name, feedback=None, **extra):
     import processing
 
-    parameters = {"INPUT": survey[name], "GRAVITY_FIELD": "g_obs", "HEIGHT_FIELD": "h", "DEM": survey["dem"], **RADII}
+    parameters = {"INPUT": survey[name], "GRAVITY_FIELD": "g_obs", "HEIGHT_FIELD": "h", "DEM": survey["dem"], "DEM_DATUM": 2, **RADII}
     parameters.update(extra)
     return processing.run("reliefgravity:densityestimate", parameters, feedback=feedback)
 
@@ -161,3 +161,27 @@ def test_cancel_raises(provider, survey):
     feedback.cancel()
     with pytest.raises(QgsProcessingException):
         run(survey, "plain", feedback=feedback, PLOT=None)
+
+
+def test_gravity_in_another_unit_is_refused_with_the_setting_that_fixes_it(survey, tmp_path):
+    """Observed gravity given in m/s^2 but declared mGal: the same sentence as the reduction's."""
+    from osgeo import ogr
+    from qgis.core import QgsProcessingException
+
+    copy = tmp_path / "si.gpkg"
+    ogr.GetDriverByName("GPKG").CopyDataSource(ogr.Open(survey["plain"]), str(copy))
+    ds = ogr.Open(str(copy), 1)
+    layer = ds.GetLayer(0)
+    for feature in layer:
+        feature.SetField("g_obs", feature.GetField("g_obs") * 1e-5)
+        layer.SetFeature(feature)
+    ds = None
+    with pytest.raises(QgsProcessingException, match="GRAVITY_UNITS"):
+        run({**survey, "si": str(copy)}, "si")
+
+
+def test_orthometric_heights_with_a_geoid_dem_give_the_same_density(survey):
+    """Heights above EGM96 with an EGM96 DEM equal ellipsoidal heights with an ellipsoidal DEM (datums agree)."""
+    same = run(survey, "plain", DEM_DATUM=2)
+    both_geoid = run(survey, "plain", HEIGHT_DATUM=1, DEM_DATUM=0)
+    assert both_geoid["DENSITY"] == pytest.approx(same["DENSITY"], rel=0.02)

@@ -14,7 +14,8 @@ RING_SECTOR = 1
 def _run(params, feedback=None):
     import processing
 
-    base = {"OUTPUT": "TEMPORARY_OUTPUT", "METHOD": RING_SECTOR, "HEIGHT_FIELD": "elev"}
+    # Synthetic rasters share the stations' height datum.
+    base = {"OUTPUT": "TEMPORARY_OUTPUT", "METHOD": RING_SECTOR, "HEIGHT_FIELD": "elev", "DEM_DATUM": 2}
     base.update(params)
     return processing.run("reliefgravity:terraincorrection", base, feedback=feedback)
 
