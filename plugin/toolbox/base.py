@@ -3,6 +3,8 @@
 
 from __future__ import annotations
 
+import traceback
+
 from pathlib import Path
 
 from qgis.core import QgsProcessingAlgorithm
@@ -328,8 +330,12 @@ class StationAlgorithm(ReliefGravityAlgorithm):
             if feedback.isCanceled():
                 raise QgsProcessingException(_tr("Cancelled by the user."))
             results[self.OUTPUT] = staged.finish(results[self.OUTPUT])
-        except BaseException:
+        except BaseException as error:
             staged.discard()
+            # The traceback keeps the work's frames, and with them QGIS objects
+            # (feature sources, feedbacks) that would then outlive the QGIS
+            # application and crash the interpreter at exit: let them go now.
+            traceback.clear_frames(error.__traceback__)
             raise
         record_provenance(
             self.id() or "reliefgravity:" + self.name(),

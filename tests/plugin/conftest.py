@@ -194,3 +194,25 @@ def dem_writer():
 def points_writer():
     """The GeoPackage point writer above, for tests that build their own layers."""
     return write_points
+
+
+@pytest.fixture(scope="session", autouse=True)
+def _release_qgis_objects_before_exit(qgis_app):
+    """Destroy layers that Python still owns while QGIS still runs.
+
+    A test that checks a raised QgsProcessingException keeps the exception's
+    frames alive (QGIS's Processing wrapper holds on to the last one), and
+    with them the layers the test opened. Destroyed only at interpreter exit,
+    after pytest-qgis has shut QGIS down, such a QgsVectorLayer crashes the
+    interpreter (exit status 139 after every test passed).
+    """
+    yield
+    import gc
+
+    from qgis.core import QgsMapLayer
+    from qgis.PyQt import sip
+
+    gc.collect()
+    for obj in gc.get_objects():
+        if isinstance(obj, QgsMapLayer) and not sip.isdeleted(obj) and sip.ispyowned(obj):
+            sip.delete(obj)
