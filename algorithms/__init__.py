@@ -27,10 +27,10 @@ from ._reduction import (
 from .constants import GRS80, WGS84, Ellipsoid
 
 __all__ = [
-    "Ellipsoid",
     "GRS80",
     "REDUCTION_FIELDS",
     "WGS84",
+    "Ellipsoid",
     "atmospheric_correction",
     "bouguer_slab_correction",
     "check_density",

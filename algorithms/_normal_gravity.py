@@ -87,9 +87,8 @@ def check_latitude(latitude_deg: npt.ArrayLike) -> np.ndarray:
         shown = ", ".join(repr(float(v)) for v in values[:5])
         more = " ..." if values.size > 5 else ""
         noun = "value" if values.size == 1 else "values"
-        raise ValueError(
-            f"latitude must lie within [-90, 90] degrees; got {shown}{more} ({values.size} {noun} out of range)"
-        )
+        msg = f"latitude must lie within [-90, 90] degrees; got {shown}{more} ({values.size} {noun} out of range)"
+        raise ValueError(msg)
     return lat
 
 
@@ -105,7 +104,8 @@ def get_ellipsoid(ellipsoid: EllipsoidLike) -> Ellipsoid:
         return ellipsoid
     key = str(ellipsoid).strip().lower()
     if key not in ELLIPSOIDS:
-        raise ValueError(f"unknown ellipsoid {ellipsoid!r}; expected one of {sorted(ELLIPSOIDS)}")
+        msg = f"unknown ellipsoid {ellipsoid!r}; expected one of {sorted(ELLIPSOIDS)}"
+        raise ValueError(msg)
     return ELLIPSOIDS[key]
 
 

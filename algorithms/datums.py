@@ -110,7 +110,8 @@ def datum_offsets(height_datum: int, dem_datum: int, egm96=None, given=None) -> 
     """
     def need(values, what):
         if values is None:
-            raise ValueError(f"{what} geoid heights are needed for this datum choice")
+            msg = f"{what} geoid heights are needed for this datum choice"
+            raise ValueError(msg)
         return np.asarray(values, dtype=float)
 
     if height_datum == STATION_ELLIPSOIDAL:
@@ -120,7 +121,8 @@ def datum_offsets(height_datum: int, dem_datum: int, egm96=None, given=None) -> 
     elif height_datum == STATION_GEOID_GIVEN:
         station = need(given, "the user's")
     else:
-        raise ValueError(f"unknown station height datum {height_datum!r}")
+        msg = f"unknown station height datum {height_datum!r}"
+        raise ValueError(msg)
     if dem_datum == DEM_EGM96:
         dem = need(egm96, "EGM96")
     elif dem_datum == DEM_ELLIPSOID:
@@ -128,7 +130,8 @@ def datum_offsets(height_datum: int, dem_datum: int, egm96=None, given=None) -> 
     elif dem_datum == DEM_SAME_AS_STATIONS:
         dem = station
     else:
-        raise ValueError(f"unknown DEM datum {dem_datum!r}")
+        msg = f"unknown DEM datum {dem_datum!r}"
+        raise ValueError(msg)
     shapes = [a.shape for a in (station, dem) if a is not None]
     shape = shapes[0] if shapes else (1,)
     zeros = np.zeros(shape)

@@ -167,8 +167,11 @@ def height_scale_problem(station, dem, min_stations: int = 3):
 
 @dataclass(frozen=True)
 class DemProblem:
-    """Why DEM values cannot be metres. ``kind`` is ``"void"``, ``"too_high"``
-    or ``"too_low"``; ``value`` the offending value."""
+    """Why DEM values cannot be metres.
+
+    ``kind`` is ``"void"``, ``"too_high"`` or ``"too_low"``; ``value`` the
+    offending value.
+    """
 
     kind: str
     value: float
@@ -204,9 +207,11 @@ def dem_value_problem(minimum: float, maximum: float, has_nodata: bool):
 
 @dataclass(frozen=True)
 class DensityProblem:
-    """A density outside ``DENSITY_LIMITS``; ``factor`` is 1000 when the value
-    times 1000 (g/cm^3 given as kg/m^3) or divided by 1000 (kg/m^3 declared
-    g/cm^3, or g/m^3) falls inside, else None."""
+    """A density outside ``DENSITY_LIMITS``.
+
+    ``factor`` is 1000 when the value times 1000 (g/cm^3 given as kg/m^3) or
+    divided by 1000 (kg/m^3 declared g/cm^3, or g/m^3) falls inside, else None.
+    """
 
     value: float
     factor: float | None

@@ -64,6 +64,7 @@ class Scenario:
 
     @property
     def centre(self) -> tuple[float, float]:
+        """Centre (easting, northing; m) of the fine DEM."""
         half = 0.5 * FINE_N * FINE_CELL
         return FINE_WEST + half, FINE_NORTH - half
 
@@ -87,6 +88,7 @@ class Scenario:
         return x, y, self.fine_surface(x, y)
 
     def describe(self) -> str:
+        """One-paragraph description of the scenario (sizes, height range, slopes) for the printout."""
         f = self.fine
         g = np.gradient(f, self.fine_cell)
         slope = np.degrees(np.arctan(np.hypot(g[0], g[1])))

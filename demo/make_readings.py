@@ -58,6 +58,7 @@ sv = _register_checkout()
 
 
 def read_stations(path):
+    """Stations of the demo GeoPackage as dicts (attributes plus ``x``, ``y``) and the layer's CRS."""
     ds = ogr.Open(str(path))
     layer = ds.GetLayer(0)
     rows = []
@@ -70,6 +71,7 @@ def read_stations(path):
 
 
 def geographic(rows, srs):
+    """Latitude and longitude (degrees, EPSG:4326) of the station rows given in ``srs``."""
     srs.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)
     wgs = osr.SpatialReference()
     wgs.ImportFromEPSG(4326)
@@ -112,6 +114,7 @@ def plan_days(xy, base, east, rng):
 
 
 def simulate(rows, lat, lon, rng):
+    """Invent the field readings of the survey: (readings, base index, east index, calibration table)."""
     xy = np.array([[r["x"], r["y"]] for r in rows])
     truth = np.array([r["obs_grav"] for r in rows])
     elev = np.array([r["elev_m"] for r in rows])
@@ -149,9 +152,14 @@ def simulate(rows, lat, lon, rng):
                 loop += "b"  # the crew drives back to the base and opens a new loop
                 clock += 0.4
                 start = clock
-                readings.append(reading_row(opening, clock, loop, truth, elev, lat, lon, table, meter_zero, rate, start, walk, rng, rows, tare_first=True))
+                readings.append(reading_row(
+                    opening, clock, loop, truth, elev, lat, lon, table, meter_zero, rate, start, walk, rng, rows,
+                    tare_first=True,
+                ))
                 clock += 0.3
-            readings.append(reading_row(s, clock, loop, truth, elev, lat, lon, table, meter_zero, rate, start, walk, rng, rows))
+            readings.append(reading_row(
+                s, clock, loop, truth, elev, lat, lon, table, meter_zero, rate, start, walk, rng, rows
+            ))
     return readings, base, east, table
 
 
@@ -159,7 +167,10 @@ def reading_row(s, clock, loop, truth, elev, lat, lon, table, zero, rate, start,
     """One reading: counter units of (gravity - tide - sensor height + drift + noise)."""
     height = round(float(rng.uniform(0.15, 0.35)), 3)
     tide = float(sv.longman_tide(lat[s], lon[s], elev[s], clock))
-    mgal = truth[s] - zero - tide - sv.FREE_AIR_GRADIENT * height + rate * (clock - start) + walk + rng.normal(0, READING_NOISE)
+    mgal = (
+        truth[s] - zero - tide - sv.FREE_AIR_GRADIENT * height
+        + rate * (clock - start) + walk + rng.normal(0, READING_NOISE)
+    )
     local = sv.utc_hours_to_iso(clock + UTC_OFFSET)[:19].replace("T", " ")
     return {
         "station": rows[s]["station_id"],
@@ -172,6 +183,7 @@ def reading_row(s, clock, loop, truth, elev, lat, lon, table, zero, rate, start,
 
 
 def write_csv(path, header, rows):
+    """Write dict rows as UTF-8 CSV with ``header`` as the column order."""
     with open(path, "w", newline="", encoding="utf-8") as handle:
         writer = csv.DictWriter(handle, fieldnames=header, lineterminator="\n")
         writer.writeheader()
@@ -179,6 +191,7 @@ def write_csv(path, header, rows):
 
 
 def write_field_stations(path, rows, srs, base):
+    """Write the station GeoPackage the readings refer to, with the base's known gravity."""
     path.unlink(missing_ok=True)
     gdal.SetConfigOption("OGR_CURRENT_DATE", "2026-01-01T00:00:00.000Z")
     ds = ogr.GetDriverByName("GPKG").CreateDataSource(str(path))
@@ -207,6 +220,7 @@ def write_field_stations(path, rows, srs, base):
 
 
 def main(argv=None):
+    """Command line: write the invented readings, calibration table and stations."""
     parser = argparse.ArgumentParser(description="Generate invented raw readings for the Corvahl demo survey.")
     parser.add_argument("--out", type=Path, default=DATA)
     parser.add_argument("--seed", type=int, default=20260608)
@@ -217,8 +231,11 @@ def main(argv=None):
     readings, base, east, table = simulate(rows, lat, lon, rng)
     args.out.mkdir(parents=True, exist_ok=True)
     write_csv(args.out / "corvahl_readings.csv", ["station", "time", "counter", "inst_h", "loop", "note"], readings)
-    write_csv(args.out / "corvahl_calibration.csv", ["counter", "mgal", "factor"],
-              [{"counter": f"{c:.0f}", "mgal": f"{m:.3f}", "factor": f"{f:.5f}"} for c, m, f in zip(table.counter, table.mgal, table.factor)])
+    calibration = [
+        {"counter": f"{c:.0f}", "mgal": f"{m:.3f}", "factor": f"{f:.5f}"}
+        for c, m, f in zip(table.counter, table.mgal, table.factor, strict=True)
+    ]
+    write_csv(args.out / "corvahl_calibration.csv", ["counter", "mgal", "factor"], calibration)
     write_field_stations(args.out / "corvahl_field_stations.gpkg", rows, srs, base)
     print(f"{len(readings)} readings of {len(rows)} stations in {len({r['loop'] for r in readings})} loops; "
           f"base {rows[base]['station_id']}, second base {rows[east]['station_id']}; written to {args.out}")

@@ -80,7 +80,8 @@ def colour_bar_svg(stops, low: float, high: float, units: str, title: str = "") 
         Shown before the units ("Anomaly (mGal)").
     """
     if not high > low:
-        raise ValueError(f"colour bar needs low < high, got {low!r}, {high!r}")
+        msg = f"colour bar needs low < high, got {low!r}, {high!r}"
+        raise ValueError(msg)
     width, height = colour_bar_size()
     top = TITLE_HEIGHT + TRIANGLE
     bottom = top + BAR_HEIGHT

@@ -9,6 +9,7 @@ GDAL, never downloaded. The interpolation is bilinear on its 15' nodes
 
 from __future__ import annotations
 
+import contextlib
 import os
 from functools import lru_cache
 from pathlib import Path
@@ -30,10 +31,8 @@ def _tr(text: str) -> str:
 def proj_search_paths() -> list[str]:
     """Folders PROJ looks in for grids (GDAL's view first, then the environment)."""
     folders = []
-    try:
+    with contextlib.suppress(AttributeError, RuntimeError):
         folders += list(osr.GetPROJSearchPaths() or [])
-    except (AttributeError, RuntimeError):
-        pass
     for name in ("PROJ_DATA", "PROJ_LIB"):
         value = os.environ.get(name)
         if value:

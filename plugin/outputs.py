@@ -28,7 +28,8 @@ def file_of(source: str | None) -> str | None:
     if not source:
         return None
     text = str(source).split("|")[0].strip()
-    if not text or text.startswith(("memory:", "postgres:", "ogr:", "spatialite:", "TEMPORARY_OUTPUT")) or "://" in text:
+    temporary = ("memory:", "postgres:", "ogr:", "spatialite:", "TEMPORARY_OUTPUT")
+    if not text or text.startswith(temporary) or "://" in text:
         return None
     return text
 

@@ -59,6 +59,7 @@ def time_text(value) -> str | None:
 
 
 def check_cancel(feedback) -> None:
+    """Raise ``QgsProcessingException`` when the user has cancelled the run."""
     if feedback is not None and feedback.isCanceled():
         raise QgsProcessingException(_tr("Cancelled by the user."))
 
@@ -110,9 +111,9 @@ def read_readings(source, fields: dict, utc_offset: float, feedback) -> Readings
         rows = ", ".join(f"{row} ('{text if text is not None else ''}')" for row, text in bad[:5])
         more = _tr(" and {} more").format(len(bad) - 5) if len(bad) > 5 else ""
         raise QgsProcessingException(
-            _tr("The time of row(s) {}{} of the readings cannot be read. Accepted forms: {}, or a date-time field.").format(
-                rows, more, ACCEPTED_FORMS
-            )
+            _tr(
+                "The time of row(s) {}{} of the readings cannot be read. Accepted forms: {}, or a date-time field."
+            ).format(rows, more, ACCEPTED_FORMS)
         )
     return Readings(
         features=features,

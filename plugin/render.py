@@ -1,6 +1,8 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
-"""A PNG of the anomaly map, rendered headless: smooth raster, index contours, stations,
-colour bar with round ticks, coordinate ticks and CRS, north arrow, scale bar, caption.
+"""A PNG of the anomaly map, rendered headless.
+
+Smooth raster, index contours, stations, colour bar with round ticks,
+coordinate ticks and CRS, north arrow, scale bar, caption.
 
 Built as a QGIS print layout (:mod:`.map_layout`) in a private project, so the
 user's project is never touched and the same code works in the desktop, in
@@ -26,7 +28,7 @@ from qgis.core import (
 from qgis.PyQt.QtCore import QCoreApplication, QSize
 
 from . import colour_bar as bar
-from .map_layout import CAPTION_VARIABLE, MARGIN, SIDE_WIDTH, GAP, ANNOTATION_SPACE, build_layout
+from .map_layout import ANNOTATION_SPACE, CAPTION_VARIABLE, GAP, MARGIN, SIDE_WIDTH, build_layout
 from .provenance import read_record
 from .run_facts import RunFacts, interval_from_levels, run_facts, standard_text
 from .styling import INDEX_EVERY, UNITS, set_smooth_resampling, style_anomaly_raster, style_contours

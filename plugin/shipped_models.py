@@ -13,8 +13,9 @@ algorithm that is not installed is skipped with a warning in the message log
 from __future__ import annotations
 
 import re
+from collections.abc import Iterable
 from pathlib import Path
-from typing import Callable, Iterable
+from typing import Callable
 
 from qgis.core import Qgis, QgsApplication, QgsMessageLog, QgsProcessingModelAlgorithm
 from qgis.PyQt.QtCore import QCoreApplication
@@ -37,7 +38,8 @@ class ShippedModel(QgsProcessingModelAlgorithm):
         super().__init__()
         self._path = Path(path)
         if not self.reload():
-            raise ValueError(f"{self._path.name} is not a readable Processing model file")
+            msg = f"{self._path.name} is not a readable Processing model file"
+            raise ValueError(msg)
 
     def reload(self) -> bool:
         """Read the file again; children attach to the algorithms registered now, and the outputs follow."""
@@ -84,7 +86,9 @@ def load_models(
         try:
             model = ShippedModel(path)
         except ValueError:
-            warnings.append(_tr("Model {} skipped: the file could not be read as a Processing model.").format(path.name))
+            warnings.append(
+                _tr("Model {} skipped: the file could not be read as a Processing model.").format(path.name)
+            )
             continue
         missing = sorted({child.algorithmId() for child in model.childAlgorithms().values()
                           if not available(child.algorithmId())})

@@ -25,6 +25,7 @@ def tracked_files() -> list[Path]:
 
 
 def plugin_files() -> list[Path]:
+    """Tracked files that belong in the plugin zip, plus the compiled translations."""
     files = []
     for path in tracked_files():
         relative = path.relative_to(ROOT)
@@ -39,6 +40,7 @@ def plugin_files() -> list[Path]:
 
 
 def build(destination: Path) -> Path:
+    """Write ``relief_gravity-<version>.zip`` into ``destination`` and return its path."""
     destination.mkdir(parents=True, exist_ok=True)
     version = "0"
     for line in (ROOT / "metadata.txt").read_text().splitlines():

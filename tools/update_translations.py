@@ -74,6 +74,7 @@ def extract(path: Path) -> list[tuple[str, str, int]]:
 
 
 def all_strings() -> dict:
+    """Translatable strings of the scanned folders: (context, text) -> [(file, line), ...]."""
     strings: dict[tuple[str, str], list] = {}
     for folder in SCANNED:
         for path in sorted((ROOT / folder).rglob("*.py")):
@@ -83,6 +84,7 @@ def all_strings() -> dict:
 
 
 def read_ts(path: Path) -> dict:
+    """Finished translations of an existing ``.ts`` file: (context, text) -> translation."""
     if not path.exists():
         return {}
     known = {}
@@ -96,6 +98,7 @@ def read_ts(path: Path) -> dict:
 
 
 def write_ts(path: Path, language: str, strings: dict, known: dict) -> str:
+    """The ``.ts`` XML text for ``language``, keeping the ``known`` translations."""
     root = ET.Element("TS", version="2.1", language=language)
     by_context: dict[str, list] = {}
     for (context, text), places in sorted(strings.items()):
@@ -127,6 +130,7 @@ def caution_string(strings: dict) -> None:
 
 
 def main(argv: list[str]) -> int:
+    """Regenerate (or with ``--check`` only compare) the ``.ts`` files and compile them."""
     check = "--check" in argv
     strings = all_strings()
     caution_string(strings)

@@ -9,9 +9,9 @@ from ._unit import unit_bouguer_term
 __all__ = [
     "BOOTSTRAP_RESAMPLES",
     "CAUTIONS",
+    "REGIONAL_TERMS",
     "NettletonFit",
     "ParasnisFit",
-    "REGIONAL_TERMS",
     "correlation_curve",
     "density_cautions",
     "nettleton_density",

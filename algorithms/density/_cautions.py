@@ -3,8 +3,6 @@
 
 from __future__ import annotations
 
-from typing import List
-
 import numpy as np
 
 #: Below this standard deviation of the heights left after the regional
@@ -39,7 +37,7 @@ CAUTIONS = {
 
 def density_cautions(
     relief_std_m: float, half_width: float, relief_shared: float, split_low: float, split_high: float, split_gap: float
-) -> List[tuple]:
+) -> list[tuple]:
     """Caution codes with their English sentences for one estimate.
 
     Parameters
@@ -69,7 +67,8 @@ def density_cautions(
     if not half_width <= MAX_HALF_WIDTH:
         out.append(("density_wide_interval", CAUTIONS["density_wide_interval"].format(limit=MAX_HALF_WIDTH)))
     if relief_shared > MAX_RELIEF_SHARED:
-        out.append(("density_relief_follows_regional", CAUTIONS["density_relief_follows_regional"].format(shared=relief_shared)))
+        text = CAUTIONS["density_relief_follows_regional"].format(shared=relief_shared)
+        out.append(("density_relief_follows_regional", text))
     if np.isfinite(split_gap) and split_gap > MAX_SPLIT_GAP:
         out.append(
             (

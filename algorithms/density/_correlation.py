@@ -22,7 +22,6 @@ ch. 13, percentile interval): stations are resampled with replacement
 from __future__ import annotations
 
 from dataclasses import dataclass
-from typing import Optional, Tuple
 
 import numpy as np
 import numpy.typing as npt
@@ -100,7 +99,7 @@ def correlation_curve(
     x: npt.ArrayLike,
     y: npt.ArrayLike,
     densities: npt.ArrayLike,
-    groups: Optional[npt.ArrayLike] = None,
+    groups: npt.ArrayLike | None = None,
     regional: str = "planar",
 ) -> np.ndarray:
     """Correlation of the Bouguer anomaly with the heights for each trial density.
@@ -144,7 +143,7 @@ def nettleton_density(
     height: npt.ArrayLike,
     x: npt.ArrayLike,
     y: npt.ArrayLike,
-    groups: Optional[npt.ArrayLike] = None,
+    groups: npt.ArrayLike | None = None,
     regional: str = "planar",
     confidence: float = 0.95,
     resamples: int = BOOTSTRAP_RESAMPLES,
@@ -206,19 +205,22 @@ def nettleton_density(
     (True, 2600.0)
     """
     if not 0 < confidence < 1:
-        raise ValueError(f"confidence must be between 0 and 1, got {confidence}")
+        msg = f"confidence must be between 0 and 1, got {confidence}"
+        raise ValueError(msg)
     n_terms = regional_design([0.0], [0.0], regional).shape[1]
     res, xs, ys, grp = _prepare(faa, unit_term, height, x, y, groups, regional, n_terms + 2)
     if len(res) < n_terms + 2:
-        raise ValueError(
-            f"{len(res)} usable stations are too few for the {regional} regional term: at least {n_terms + 2} are needed"
-            + (" in each profile" if groups is not None else "")
+        msg = (
+            f"{len(res)} usable stations are too few for the {regional} regional term: "
+            f"at least {n_terms + 2} are needed" + (" in each profile" if groups is not None else "")
         )
+        raise ValueError(msg)
     tilde = _group_residuals(res, xs, ys, grp, regional)
     centred = res - res.mean(axis=0)
     scale = float(np.sqrt(np.sum(centred[:, 1] ** 2) * np.sum(centred[:, 2] ** 2)))
     if scale == 0 or not abs(float(tilde[:, 1] @ tilde[:, 2])) > 1e-12 * scale:
-        raise ValueError("no relief is left after the regional term: the correlation does not depend on the density")
+        msg = "no relief is left after the regional term: the correlation does not depend on the density"
+        raise ValueError(msg)
     rho = _ratio(tilde)
     rng = np.random.default_rng(seed)
     members = [np.flatnonzero(grp == g) for g in np.unique(grp)]
@@ -231,7 +233,8 @@ def nettleton_density(
             estimates.append(value)
     estimates = np.asarray(estimates)
     if estimates.size < 10:
-        raise ValueError("the bootstrap gave too few estimates: the relief is too small to estimate a density")
+        msg = "the bootstrap gave too few estimates: the relief is too small to estimate a density"
+        raise ValueError(msg)
     alpha = (1 - confidence) / 2
     low, high = np.quantile(estimates, [alpha, 1 - alpha])
     return NettletonFit(
@@ -242,7 +245,7 @@ def nettleton_density(
 
 def split_consistency(
     faa: npt.ArrayLike, unit_term: npt.ArrayLike, x: npt.ArrayLike, y: npt.ArrayLike, regional: str = "planar"
-) -> Tuple[float, float, float]:
+) -> tuple[float, float, float]:
     """Parasnis densities of the lower and upper half of the stations (by unit term), and their gap in sigmas.
 
     When geology follows the topography (light fill under valleys, dense

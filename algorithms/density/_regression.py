@@ -50,7 +50,8 @@ def regional_design(x: npt.ArrayLike, y: npt.ArrayLike, regional: str = "planar"
            [ 1.,  1.,  0.]])
     """
     if regional not in REGIONAL_TERMS:
-        raise ValueError(f"regional term must be one of {REGIONAL_TERMS}, got {regional!r}")
+        msg = f"regional term must be one of {REGIONAL_TERMS}, got {regional!r}"
+        raise ValueError(msg)
     x = np.asarray(x, dtype=float)
     y = np.asarray(y, dtype=float)
     columns = [np.ones(x.shape)]
@@ -178,7 +179,8 @@ def parasnis_density(
     (True, 2500.0)
     """
     if not 0 < confidence < 1:
-        raise ValueError(f"confidence must be between 0 and 1, got {confidence}")
+        msg = f"confidence must be between 0 and 1, got {confidence}"
+        raise ValueError(msg)
     faa = np.asarray(faa, dtype=float)
     b = np.asarray(unit_term, dtype=float)
     x = np.asarray(x, dtype=float)
@@ -187,11 +189,13 @@ def parasnis_density(
     design = regional_design(x[ok], y[ok], regional)
     n, p = int(ok.sum()), design.shape[1] + 1
     if n < p + 2:
-        raise ValueError(f"{n} usable stations are too few for the {regional} regional term: at least {p + 2} are needed")
+        msg = f"{n} usable stations are too few for the {regional} regional term: at least {p + 2} are needed"
+        raise ValueError(msg)
     b_left = remove_regional(b[ok], design)
     total = float(np.sum((b[ok] - b[ok].mean()) ** 2))
     if total == 0 or not np.sum(b_left**2) > 1e-12 * total:
-        raise ValueError("the Bouguer term is fully explained by the regional term: no relief to estimate a density from")
+        msg = "the Bouguer term is fully explained by the regional term: no relief to estimate a density from"
+        raise ValueError(msg)
     full = np.column_stack([b[ok], design])
     coefficients, *_ = np.linalg.lstsq(full, faa[ok], rcond=None)
     residual = faa[ok] - full @ coefficients

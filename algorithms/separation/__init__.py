@@ -2,12 +2,12 @@
 """Regional-residual separation of gridded anomalies: trend surfaces and upward continuation."""
 
 from ._continuation import ContinuationSettings, continuation_filter, upward_continuation
-from ._separate import Separation, separate_grid, separate_by_continuation, separate_by_trend
+from ._separate import Separation, separate_by_continuation, separate_by_trend, separate_grid
 from ._trend import ROBUST_WEIGHTS, TrendSurface, fit_trend_surface, robust_weights
 
 __all__ = [
-    "ContinuationSettings",
     "ROBUST_WEIGHTS",
+    "ContinuationSettings",
     "Separation",
     "TrendSurface",
     "continuation_filter",

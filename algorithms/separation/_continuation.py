@@ -155,16 +155,21 @@ def upward_continuation(
     """
     g = np.array(grid, dtype=float)
     if g.ndim != 2 or min(g.shape) < 2:
-        raise ValueError(f"the grid must be 2-D with at least 2 x 2 cells, got shape {g.shape}")
+        msg = f"the grid must be 2-D with at least 2 x 2 cells, got shape {g.shape}"
+        raise ValueError(msg)
     if not (cell_x > 0 and cell_y > 0):
-        raise ValueError(f"cell sizes must be positive (m), got {cell_x}, {cell_y}")
+        msg = f"cell sizes must be positive (m), got {cell_x}, {cell_y}"
+        raise ValueError(msg)
     if not np.isfinite(height) or height < 0:
-        raise ValueError(f"the continuation height must be >= 0 m (upward), got {height}")
+        msg = f"the continuation height must be >= 0 m (upward), got {height}"
+        raise ValueError(msg)
     if not (0 <= settings.pad_fraction <= 4):
-        raise ValueError(f"pad_fraction must be within 0-4, got {settings.pad_fraction}")
+        msg = f"pad_fraction must be within 0-4, got {settings.pad_fraction}"
+        raise ValueError(msg)
     blank = ~np.isfinite(g)
     if blank.all():
-        raise ValueError("the grid has no value to continue")
+        msg = "the grid has no value to continue"
+        raise ValueError(msg)
     if height == 0:
         return g
     filled = _fill_nearest(g)

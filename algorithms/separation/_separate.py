@@ -8,13 +8,15 @@ the input back (to rounding) wherever the input has a value.
 from __future__ import annotations
 
 from dataclasses import dataclass, field
-from typing import Optional
 
 import numpy as np
 import numpy.typing as npt
 
 from ._continuation import ContinuationSettings, upward_continuation
 from ._trend import TrendSurface, fit_trend_surface
+
+# Frozen, so one shared default instance is safe.
+_DEFAULT_CONTINUATION = ContinuationSettings()
 
 
 @dataclass(frozen=True)
@@ -36,7 +38,7 @@ class Separation:
     regional: np.ndarray
     residual: np.ndarray
     method: str
-    trend: Optional[TrendSurface] = None
+    trend: TrendSurface | None = None
     settings: dict = field(default_factory=dict)
 
 
@@ -54,7 +56,7 @@ def separate_by_trend(
     cell_x: float,
     cell_y: float,
     order: int = 1,
-    robust: Optional[str] = None,
+    robust: str | None = None,
 ) -> Separation:
     """Regional = polynomial trend surface fitted to the grid's valid cells.
 
@@ -103,7 +105,7 @@ def separate_by_continuation(
     cell_x: float,
     cell_y: float,
     height: float,
-    settings: ContinuationSettings = ContinuationSettings(),
+    settings: ContinuationSettings = _DEFAULT_CONTINUATION,
 ) -> Separation:
     """Regional = the anomaly continued upward by ``height`` m (FFT, Blakely 1995).
 
@@ -152,4 +154,5 @@ def separate_grid(grid, west, north, cell_x, cell_y, method: str, **options) -> 
         return separate_by_trend(grid, west, north, cell_x, cell_y, **options)
     if method == "continuation":
         return separate_by_continuation(grid, cell_x, cell_y, **options)
-    raise ValueError(f"method must be 'trend' or 'continuation', got {method!r}")
+    msg = f"method must be 'trend' or 'continuation', got {method!r}"
+    raise ValueError(msg)

@@ -17,7 +17,6 @@ one looks for) do not pull the regional surface.
 from __future__ import annotations
 
 from dataclasses import dataclass
-from typing import Optional, Tuple
 
 import numpy as np
 import numpy.typing as npt
@@ -31,14 +30,15 @@ MAD_TO_SIGMA = 0.6744897501960817
 ROBUST_WEIGHTS = ("huber", "tukey")
 
 
-def _exponents(order: int) -> Tuple[Tuple[int, int], ...]:
+def _exponents(order: int) -> tuple[tuple[int, int], ...]:
     """(i, j) exponents of u^i v^j for total degree <= order, degree by degree."""
     return tuple((d - j, j) for d in range(order + 1) for j in range(d + 1))
 
 
 def _check_order(order: int) -> int:
     if int(order) != order or not 1 <= int(order) <= 3:
-        raise ValueError(f"trend surface order must be 1, 2 or 3, got {order!r}")
+        msg = f"trend surface order must be 1, 2 or 3, got {order!r}"
+        raise ValueError(msg)
     return int(order)
 
 
@@ -65,8 +65,8 @@ class TrendSurface:
     """
 
     order: int
-    coefficients: Tuple[float, ...]
-    exponents: Tuple[Tuple[int, int], ...]
+    coefficients: tuple[float, ...]
+    exponents: tuple[tuple[int, int], ...]
     x0: float
     y0: float
     scale: float
@@ -110,7 +110,7 @@ class _Frame:
     x0: float
     y0: float
     scale: float
-    exponents: Tuple[Tuple[int, int], ...]
+    exponents: tuple[tuple[int, int], ...]
 
 
 def robust_weights(residuals: npt.ArrayLike, kind: str = "tukey") -> np.ndarray:
@@ -147,7 +147,8 @@ def robust_weights(residuals: npt.ArrayLike, kind: str = "tukey") -> np.ndarray:
     """
     r = np.asarray(residuals, dtype=float)
     if kind not in ROBUST_WEIGHTS:
-        raise ValueError(f"robust weights must be one of {ROBUST_WEIGHTS}, got {kind!r}")
+        msg = f"robust weights must be one of {ROBUST_WEIGHTS}, got {kind!r}"
+        raise ValueError(msg)
     mad = float(np.median(np.abs(r - np.median(r))))
     sigma = mad / MAD_TO_SIGMA
     if not sigma > 0:
@@ -163,9 +164,9 @@ def fit_trend_surface(
     y: npt.ArrayLike,
     values: npt.ArrayLike,
     order: int = 1,
-    robust: Optional[str] = None,
+    robust: str | None = None,
     *,
-    origin: Optional[Tuple[float, float]] = None,
+    origin: tuple[float, float] | None = None,
     max_iterations: int = 50,
     tolerance: float = 1e-8,
 ) -> TrendSurface:
@@ -215,27 +216,30 @@ def fit_trend_surface(
     """
     order = _check_order(order)
     if robust is not None and robust not in ROBUST_WEIGHTS:
-        raise ValueError(f"robust must be None, 'huber' or 'tukey', got {robust!r}")
+        msg = f"robust must be None, 'huber' or 'tukey', got {robust!r}"
+        raise ValueError(msg)
     x = np.asarray(x, dtype=float).ravel()
     y = np.asarray(y, dtype=float).ravel()
     d = np.asarray(values, dtype=float).ravel()
     if not x.shape == y.shape == d.shape:
-        raise ValueError(f"x, y and values must have one shape, got {x.shape}, {y.shape}, {d.shape}")
+        msg = f"x, y and values must have one shape, got {x.shape}, {y.shape}, {d.shape}"
+        raise ValueError(msg)
     ok = np.isfinite(x) & np.isfinite(y) & np.isfinite(d)
     exponents = _exponents(order)
     if ok.sum() < len(exponents):
-        raise ValueError(
-            f"a trend surface of order {order} needs at least {len(exponents)} points with data, got {int(ok.sum())}"
-        )
+        msg = f"a trend surface of order {order} needs at least {len(exponents)} points with data, got {int(ok.sum())}"
+        raise ValueError(msg)
     xs, ys, ds = x[ok], y[ok], d[ok]
     x0, y0 = (float(np.mean(xs)), float(np.mean(ys))) if origin is None else (float(origin[0]), float(origin[1]))
     scale = float(max(np.ptp(xs), np.ptp(ys)) / 2.0) or 1.0
     frame = _Frame(x0, y0, scale, exponents)
     design = _design(xs, ys, frame)
     if np.linalg.matrix_rank(design) < len(exponents):
-        raise ValueError(
-            f"the points do not determine a trend surface of order {order} (they lie on a line or too few distinct places)"
+        msg = (
+            f"the points do not determine a trend surface of order {order} "
+            "(they lie on a line or too few distinct places)"
         )
+        raise ValueError(msg)
     weights = np.ones(len(ds))
     coefficients = np.linalg.lstsq(design, ds, rcond=None)[0]
     iterations = 0
@@ -256,4 +260,6 @@ def fit_trend_surface(
         weights = robust_weights(ds - design @ coefficients, robust)
     full_weights = np.full(x.shape, np.nan)
     full_weights[ok] = weights
-    return TrendSurface(order, tuple(float(c) for c in coefficients), exponents, x0, y0, scale, iterations, full_weights)
+    return TrendSurface(
+        order, tuple(float(c) for c in coefficients), exponents, x0, y0, scale, iterations, full_weights
+    )

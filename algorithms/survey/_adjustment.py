@@ -49,7 +49,7 @@ def _design(station, loop, dt, use, known, station_col, offset_col, drift_col, r
     knowns = [s for s in station_col if np.isfinite(known[s])]
     n_cols = len(station_col) + len(offset_col) + len(drift_col)
     A = np.zeros((len(rows) + len(knowns), n_cols))
-    l = np.zeros(len(rows) + len(knowns))
+    obs = np.zeros(len(rows) + len(knowns))
     p = np.ones(len(rows) + len(knowns))
     for i, k in enumerate(rows):
         A[i, station_col[int(station[k])]] = 1.0
@@ -59,7 +59,7 @@ def _design(station, loop, dt, use, known, station_col, offset_col, drift_col, r
     for j, s in enumerate(knowns):
         A[len(rows) + j, station_col[s]] = 1.0
         p[len(rows) + j] = (reading_sigma / known_sigma) ** 2
-    return rows, knowns, A, l, p
+    return rows, knowns, A, obs, p
 
 
 def _null_space(N, tolerance=1e-9):
@@ -75,7 +75,7 @@ def _solve(value, station, loop, dt, use, known, drift_loops, n_loops, reading_s
     use = use.copy()
     while True:
         cols = _columns(station, loop, use, n_loops, drift_loops)
-        station_col, offset_col, drift_col = cols
+        station_col, _offset_col, drift_col = cols
         rows, knowns, A, _, p = _design(station, loop, dt, use, known, *cols, reading_sigma, known_sigma)
         N = A.T @ (A * p[:, None])
         null = _null_space(N)
@@ -89,12 +89,12 @@ def _solve(value, station, loop, dt, use, known, drift_loops, n_loops, reading_s
         # No drift involved: stations whose gravity the loops cannot separate.
         lost = [s for s, c in station_col.items() if involved[c]]
         use &= ~np.isin(station, lost)
-    l = np.concatenate([value[rows], known[knowns]]) if knowns else value[rows].copy()
+    obs = np.concatenate([value[rows], known[knowns]]) if knowns else value[rows].copy()
     Q = np.linalg.inv(N)
     Q = 0.5 * (Q + Q.T)
-    x = Q @ (A.T @ (p * l))
-    v = l - A @ x  # observed minus computed
-    redundancy = len(l) - A.shape[1]
+    x = Q @ (A.T @ (p * obs))
+    v = obs - A @ x  # observed minus computed
+    redundancy = len(obs) - A.shape[1]
     sigma0 = float(np.sqrt(np.sum(p * v * v) / redundancy)) if redundancy > 0 else reading_sigma
     qvv = 1.0 / p - np.einsum("ij,jk,ik->i", A, Q, A)
     return dict(
@@ -168,15 +168,18 @@ def adjust_network(
     station, loop, hours, value = _as_arrays(station, loop, hours, value)
     known = np.asarray(known, dtype=float)
     if reading_sigma <= 0 or known_sigma <= 0:
-        raise ValueError("the a-priori standard errors must be positive")
+        msg = "the a-priori standard errors must be positive"
+        raise ValueError(msg)
     n_stations, n_loops = len(known), (int(loop.max()) + 1 if len(loop) else 0)
     if np.any(station >= n_stations):
-        raise ValueError("a station index is beyond the known-gravity array")
+        msg = "a station index is beyond the known-gravity array"
+        raise ValueError(msg)
     use = (np.ones(len(station), bool) if use is None else np.asarray(use, bool).copy())
     use &= (station >= 0) & np.isfinite(value) & np.isfinite(hours)
     station_tied, loop_tied = tied_stations(station, loop, known, use)
     if not np.any(loop_tied):
-        raise ValueError("no reading reaches a station of known gravity: the network is not tied")
+        msg = "no reading reaches a station of known gravity: the network is not tied"
+        raise ValueError(msg)
     use &= np.where(station >= 0, station_tied[np.clip(station, 0, None)], False)
     t_ref = loop_reference_times(loop, hours, use, n_loops)
     dt = hours - np.where(np.isfinite(t_ref[loop]), t_ref[loop], 0.0)

@@ -48,7 +48,7 @@ class CalibrationTable:
     factor: tuple
 
     @classmethod
-    def from_rows(cls, counter, mgal, factor, tolerance: float = 0.05) -> "CalibrationTable":
+    def from_rows(cls, counter, mgal, factor, tolerance: float = 0.05) -> CalibrationTable:
         """Check and build a table (rows in any order).
 
         Raises ``ValueError`` for fewer than two rows, non-finite values,
@@ -58,20 +58,26 @@ class CalibrationTable:
         """
         c, g, f = (np.asarray(v, dtype=float).ravel() for v in (counter, mgal, factor))
         if not (len(c) == len(g) == len(f)):
-            raise ValueError("the calibration table's columns counter, mgal and factor differ in length")
+            msg = "the calibration table's columns counter, mgal and factor differ in length"
+            raise ValueError(msg)
         if len(c) < 2:
-            raise ValueError(f"a calibration table needs at least two rows, got {len(c)}")
+            msg = f"a calibration table needs at least two rows, got {len(c)}"
+            raise ValueError(msg)
         if not (np.all(np.isfinite(c)) and np.all(np.isfinite(g)) and np.all(np.isfinite(f))):
-            raise ValueError("the calibration table has empty or non-numeric values")
+            msg = "the calibration table has empty or non-numeric values"
+            raise ValueError(msg)
         order = np.argsort(c, kind="stable")
         c, g, f = c[order], g[order], f[order]
         if np.any(np.diff(c) <= 0):
             repeated = c[1:][np.diff(c) <= 0][0]
-            raise ValueError(f"the calibration table repeats the counter value {repeated}")
+            msg = f"the calibration table repeats the counter value {repeated}"
+            raise ValueError(msg)
         if np.any(f <= 0):
-            raise ValueError(f"calibration factors must be positive mGal per counter unit, got {f[f <= 0][0]}")
+            msg = f"calibration factors must be positive mGal per counter unit, got {f[f <= 0][0]}"
+            raise ValueError(msg)
         if np.any(np.diff(g) <= 0):
-            raise ValueError("the calibration table's mGal values must increase with the counter values")
+            msg = "the calibration table's mGal values must increase with the counter values"
+            raise ValueError(msg)
         predicted = g[:-1] + f[:-1] * np.diff(c)
         jump = np.abs(predicted - g[1:])
         if np.any(jump > tolerance):
@@ -89,7 +95,7 @@ class CalibrationTable:
         return self.counter[0], self.counter[-1]
 
     def to_mgal(self, counter_reading):
-        """mGal for counter readings (NaN stays NaN).
+        """MGal for counter readings (NaN stays NaN).
 
         Raises
         ------
@@ -100,9 +106,11 @@ class CalibrationTable:
         low, high = self.counter_range
         outside = np.isfinite(values) & ((values < low) | (values > high))
         if np.any(outside):
-            raise ValueError(
-                f"counter reading {values[outside].ravel()[0]} is outside the calibration table's range {low} to {high}"
+            msg = (
+                f"counter reading {values[outside].ravel()[0]} is outside the calibration table's range "
+                f"{low} to {high}"
             )
+            raise ValueError(msg)
         c = np.asarray(self.counter)
         row = np.clip(np.searchsorted(c, values, side="right") - 1, 0, len(c) - 2)
         row = np.where(np.isfinite(values), row, 0)
@@ -117,9 +125,8 @@ class CalibrationTable:
         top = g[-2] + f[-2] * (c[-1] - c[-2])
         outside = np.isfinite(values) & ((values < g[0]) | (values > top))
         if np.any(outside):
-            raise ValueError(
-                f"{values[outside].ravel()[0]} mGal is outside the calibration table's range {g[0]} to {top}"
-            )
+            msg = f"{values[outside].ravel()[0]} mGal is outside the calibration table's range {g[0]} to {top}"
+            raise ValueError(msg)
         # Interval bounds in mGal as the rows' own lines reach them.
         starts = g[:-1]
         row = np.clip(np.searchsorted(starts, values, side="right") - 1, 0, len(c) - 2)
@@ -140,7 +147,8 @@ def counter_to_mgal(reading, table: CalibrationTable | None = None, scale_factor
     2001.0
     """
     if not np.isfinite(scale_factor) or scale_factor <= 0:
-        raise ValueError(f"the scale factor must be positive, got {scale_factor}")
+        msg = f"the scale factor must be positive, got {scale_factor}"
+        raise ValueError(msg)
     values = np.asarray(reading, dtype=float)
     if table is not None:
         values = table.to_mgal(values)

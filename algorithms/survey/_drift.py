@@ -61,7 +61,8 @@ def linear_drift(
     use &= (station >= 0) & np.isfinite(value) & np.isfinite(hours)
     station_tied, loop_tied = tied_stations(station, loop, known, use)
     if not np.any(loop_tied):
-        raise ValueError("no reading reaches a station of known gravity: the network is not tied")
+        msg = "no reading reaches a station of known gravity: the network is not tied"
+        raise ValueError(msg)
 
     drift_corr = np.full(len(station), np.nan)
     rate = np.full(n_loops, np.nan)
@@ -124,9 +125,13 @@ def linear_drift(
         spread = np.zeros(n_stations)
         np.add.at(spread, station[used], residual[used] ** 2)
         sigma[multi] = np.sqrt(spread[multi] / (n_used[multi] - 1) / n_used[multi])
-    outlier = used & np.isfinite(residual) & (np.abs(residual) > outlier_limit * sigma0) if dof > 0 else np.zeros(len(station), bool)
+    if dof > 0:
+        outlier = used & np.isfinite(residual) & (np.abs(residual) > outlier_limit * sigma0)
+    else:
+        outlier = np.zeros(len(station), bool)
     return NetworkResult(
-        gravity=gravity, sigma=sigma, n_used=n_used, offset=offset, drift_rate=np.where(np.isfinite(offset), rate, np.nan),
+        gravity=gravity, sigma=sigma, n_used=n_used, offset=offset,
+        drift_rate=np.where(np.isfinite(offset), rate, np.nan),
         drift_sigma=np.full(n_loops, np.nan), drift_estimated=estimated & np.isfinite(offset), drift_corr=drift_corr,
         g_read=g_read, residual=residual, used=used, outlier=outlier, station_tied=station_tied & (counts > 0),
         loop_tied=np.isfinite(offset), sigma0=sigma0, redundancy=dof,

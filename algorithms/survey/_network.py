@@ -92,13 +92,16 @@ def _as_arrays(station, loop, hours, value=None):
     loop = np.asarray(loop, dtype=int)
     hours = np.asarray(hours, dtype=float)
     if not (station.shape == loop.shape == hours.shape):
-        raise ValueError("station, loop and hours must have one value per reading")
+        msg = "station, loop and hours must have one value per reading"
+        raise ValueError(msg)
     if value is not None:
         value = np.asarray(value, dtype=float)
         if value.shape != station.shape:
-            raise ValueError("value must have one value per reading")
+            msg = "value must have one value per reading"
+            raise ValueError(msg)
     if np.any(loop < 0):
-        raise ValueError("loop indices must be 0 or more")
+        msg = "loop indices must be 0 or more"
+        raise ValueError(msg)
     return station, loop, hours, value
 
 

@@ -53,7 +53,9 @@ class TideParts:
     total: np.ndarray
 
 
-def longman_tide_parts(latitude, longitude, height, utc_hours, gravimetric_factor=DEFAULT_GRAVIMETRIC_FACTOR) -> TideParts:
+def longman_tide_parts(
+    latitude, longitude, height, utc_hours, gravimetric_factor=DEFAULT_GRAVIMETRIC_FACTOR
+) -> TideParts:
     """Lunar and solar tidal corrections after Longman (1959).
 
     Equations (Longman 1959, angles in radians, T in Julian centuries from
@@ -93,13 +95,16 @@ def longman_tide_parts(latitude, longitude, height, utc_hours, gravimetric_facto
     (0.0324, -0.02887, 0.00353)
     """
     lat, lon, alt, hours = np.broadcast_arrays(
-        np.asarray(latitude, float), np.asarray(longitude, float), np.asarray(height, float), np.asarray(utc_hours, float)
+        np.asarray(latitude, float), np.asarray(longitude, float),
+        np.asarray(height, float), np.asarray(utc_hours, float),
     )
     if not np.isfinite(gravimetric_factor) or gravimetric_factor <= 0:
-        raise ValueError(f"the gravimetric factor must be positive (about 1.16), got {gravimetric_factor}")
+        msg = f"the gravimetric factor must be positive (about 1.16), got {gravimetric_factor}"
+        raise ValueError(msg)
     bad = np.isfinite(lat) & (np.abs(lat) > 90.0)
     if np.any(bad):
-        raise ValueError(f"latitude must be within -90..90 degrees, got {lat[bad][0]}")
+        msg = f"latitude must be within -90..90 degrees, got {lat[bad][0]}"
+        raise ValueError(msg)
     T = julian_centuries_1900(hours)
     t0 = np.mod(hours, 24.0)  # UT hour of the day (the epoch is a midnight)
     T2, T3 = T * T, T * T * T
@@ -112,8 +117,8 @@ def longman_tide_parts(latitude, longitude, height, utc_hours, gravimetric_facto
     e1 = 0.01675104 - 4.180e-5 * T - 1.26e-7 * T2
 
     cos_I = np.cos(_OMEGA) * np.cos(_I) - np.sin(_OMEGA) * np.sin(_I) * np.cos(N)
-    I = np.arccos(cos_I)
-    sin_I = np.sin(I)
+    incl = np.arccos(cos_I)  # Longman's I, the Moon's orbit to the equator
+    sin_I = np.sin(incl)
     nu = np.arcsin(np.sin(_I) * np.sin(N) / sin_I)
     # Hour angle of the mean Sun, westward from the station (Longman's
     # longitude is west positive).
@@ -137,7 +142,7 @@ def longman_tide_parts(latitude, longitude, height, utc_hours, gravimetric_facto
     phi = np.radians(lat)
     sin_phi, cos_phi = np.sin(phi), np.cos(phi)
     cos_theta = sin_phi * sin_I * np.sin(l_moon) + cos_phi * (
-        np.cos(I / 2.0) ** 2 * np.cos(l_moon - chi) + np.sin(I / 2.0) ** 2 * np.cos(l_moon + chi)
+        np.cos(incl / 2.0) ** 2 * np.cos(l_moon - chi) + np.sin(incl / 2.0) ** 2 * np.cos(l_moon + chi)
     )
     cos_phi_sun = sin_phi * np.sin(_OMEGA) * np.sin(l_sun) + cos_phi * (
         np.cos(_OMEGA / 2.0) ** 2 * np.cos(l_sun - chi1) + np.sin(_OMEGA / 2.0) ** 2 * np.cos(l_sun + chi1)

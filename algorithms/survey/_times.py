@@ -83,10 +83,12 @@ def parse_time(text, utc_offset_hours: float = 0.0) -> ReadingTime:
     (28.0, '2000-01-02')
     """
     if not math.isfinite(utc_offset_hours) or abs(utc_offset_hours) > 14:
-        raise ValueError(f"the UTC offset must be between -14 and +14 hours, got {utc_offset_hours}")
+        msg = f"the UTC offset must be between -14 and +14 hours, got {utc_offset_hours}"
+        raise ValueError(msg)
     match = _ISO.match(str(text)) if text is not None else None
     if match is None:
-        raise ValueError(f"time {text!r} is not in the form {ACCEPTED_FORMS}")
+        msg = f"time {text!r} is not in the form {ACCEPTED_FORMS}"
+        raise ValueError(msg)
     year, month, day, hour, minute = (int(match.group(i)) for i in range(1, 6))
     second = int(match.group(6) or 0)
     fraction = float("0." + match.group(7)) if match.group(7) else 0.0
@@ -100,11 +102,13 @@ def parse_time(text, utc_offset_hours: float = 0.0) -> ReadingTime:
         offset = int(digits[:2]) + (int(digits[2:4]) / 60.0 if len(digits) > 2 else 0.0)
         offset = -offset if zone[0] == "-" else offset
         if offset > 14 or offset < -14:
-            raise ValueError(f"time {text!r} has an offset outside -14..+14 hours")
+            msg = f"time {text!r} has an offset outside -14..+14 hours"
+            raise ValueError(msg)
     try:
         local = _dt.datetime(year, month, day, hour, minute, second)
     except ValueError as error:
-        raise ValueError(f"time {text!r} is not a valid date and time ({error})") from None
+        msg = f"time {text!r} is not a valid date and time ({error})"
+        raise ValueError(msg) from None
     naive_utc = local - _dt.timedelta(hours=offset)
     hours = (naive_utc.replace(tzinfo=_dt.timezone.utc) - EPOCH).total_seconds() / 3600.0 + fraction / 3600.0
     return ReadingTime(utc_hours=hours, local_date=local.date().isoformat(), had_offset=zone is not None)

@@ -10,7 +10,7 @@ array.
 from __future__ import annotations
 
 from dataclasses import dataclass, field
-from typing import Callable, Optional
+from typing import Callable
 
 import numpy as np
 import numpy.typing as npt
@@ -62,11 +62,15 @@ class ElevationGrid:
 
     def __post_init__(self) -> None:
         if not (self.cell_x > 0 and self.cell_y > 0):
-            raise ValueError(f"cell sizes must be > 0, got {self.cell_x!r}, {self.cell_y!r}")
+            msg = f"cell sizes must be > 0, got {self.cell_x!r}, {self.cell_y!r}"
+            raise ValueError(msg)
         if self.n_rows < 1 or self.n_cols < 1:
-            raise ValueError(f"raster size must be at least 1 x 1, got {self.n_rows} x {self.n_cols}")
-        if self.geographic and (self.y_origin > 90.0 + 1e-9 or self.y_origin - self.n_rows * self.cell_y < -90.0 - 1e-9):
-            raise ValueError("geographic raster extends beyond the poles")
+            msg = f"raster size must be at least 1 x 1, got {self.n_rows} x {self.n_cols}"
+            raise ValueError(msg)
+        south = self.y_origin - self.n_rows * self.cell_y
+        if self.geographic and (self.y_origin > 90.0 + 1e-9 or south < -90.0 - 1e-9):
+            msg = "geographic raster extends beyond the poles"
+            raise ValueError(msg)
 
     @classmethod
     def from_array(
@@ -77,8 +81,8 @@ class ElevationGrid:
         cell_x: float,
         cell_y: float,
         geographic: bool = False,
-        nodata: Optional[float] = None,
-    ) -> "ElevationGrid":
+        nodata: float | None = None,
+    ) -> ElevationGrid:
         """Grid over an in-memory array (row 0 is the northern row).
 
         Parameters
@@ -102,14 +106,18 @@ class ElevationGrid:
         """
         data = np.array(array, dtype=float)
         if data.ndim != 2:
-            raise ValueError(f"elevation array must be 2-D, got shape {data.shape}")
+            msg = f"elevation array must be 2-D, got shape {data.shape}"
+            raise ValueError(msg)
         if nodata is not None:
             data[data == nodata] = np.nan
 
         def reader(row0: int, col0: int, n_rows: int, n_cols: int) -> np.ndarray:
             return data[row0 : row0 + n_rows, col0 : col0 + n_cols]
 
-        return cls(float(x_origin), float(y_origin), float(cell_x), float(cell_y), data.shape[0], data.shape[1], reader, bool(geographic))
+        return cls(
+            float(x_origin), float(y_origin), float(cell_x), float(cell_y),
+            data.shape[0], data.shape[1], reader, bool(geographic),
+        )
 
     def read_window(self, row0: int, col0: int, n_rows: int, n_cols: int) -> np.ndarray:
         """Heights of a window in metres (float64), NaN for NoData and outside.
@@ -138,7 +146,8 @@ class ElevationGrid:
         if r1 > r0 and c1 > c0:
             block = np.asarray(self.reader(r0, c0, r1 - r0, c1 - c0), dtype=float)
             if block.shape != (r1 - r0, c1 - c0):
-                raise ValueError(f"window reader returned shape {block.shape}, expected {(r1 - r0, c1 - c0)}")
+                msg = f"window reader returned shape {block.shape}, expected {(r1 - r0, c1 - c0)}"
+                raise ValueError(msg)
             out[r0 - row0 : r1 - row0, c0 - col0 : c1 - col0] = block
         return out
 

@@ -11,9 +11,10 @@ finer than a DEM cell, inner/outer split) are written out in
 from __future__ import annotations
 
 import math
+from collections.abc import Mapping
 from dataclasses import dataclass
 from types import MappingProxyType
-from typing import Callable, List, Mapping, Optional, Tuple
+from typing import Callable
 
 import numpy as np
 import numpy.typing as npt
@@ -71,7 +72,7 @@ class HammerResult:
     tc_total: np.ndarray
     zones: Mapping[str, np.ndarray]
     coverage: np.ndarray
-    codes: Tuple[Tuple[str, ...], ...]
+    codes: tuple[tuple[str, ...], ...]
     zone_letters: str
     plane_zones: str
     reach: float
@@ -83,12 +84,12 @@ class HammerResult:
         return self.tc_total
 
     @property
-    def flags(self) -> List[str]:
+    def flags(self) -> list[str]:
         """Codes per station joined by ``;`` ("" when clean), as ``qc_flag`` holds them."""
         return [";".join(c) for c in self.codes]
 
 
-def _compartment_samples(zone: HammerZone, cell: float) -> Tuple[np.ndarray, np.ndarray]:
+def _compartment_samples(zone: HammerZone, cell: float) -> tuple[np.ndarray, np.ndarray]:
     """Sample points (east, north in m) per compartment, equal-area spaced.
 
     Returns arrays of shape (compartments, samples).
@@ -121,7 +122,7 @@ def _to_grid_coords(geographic: bool, x0: float, y0: float, east: np.ndarray, no
     return np.degrees(lam), np.degrees(phi)
 
 
-def _cell_sides(grid: ElevationGrid, latitude: float) -> Tuple[float, float]:
+def _cell_sides(grid: ElevationGrid, latitude: float) -> tuple[float, float]:
     """Metric cell sides (east-west, north-south) at a latitude, m."""
     if not grid.geographic:
         return grid.cell_x, grid.cell_y
@@ -129,7 +130,7 @@ def _cell_sides(grid: ElevationGrid, latitude: float) -> Tuple[float, float]:
     return grid.cell_x * metre_per_degree * math.cos(math.radians(latitude)), grid.cell_y * metre_per_degree
 
 
-def station_gradient(grid: ElevationGrid, x: float, y: float) -> Tuple[float, float]:
+def station_gradient(grid: ElevationGrid, x: float, y: float) -> tuple[float, float]:
     """Gradient (east, north; m/m) of the DEM's bilinear surface at a point.
 
     Parameters
@@ -175,7 +176,7 @@ def station_gradient(grid: ElevationGrid, x: float, y: float) -> Tuple[float, fl
     return float(ge), float(gn)
 
 
-def _split(zone: HammerZone, inner_radius: float) -> List[Tuple[float, float, bool]]:
+def _split(zone: HammerZone, inner_radius: float) -> list[tuple[float, float, bool]]:
     """(r1, r2, counts_to_inner) pieces of a zone cut at ``inner_radius``."""
     if zone.outer <= inner_radius:
         return [(zone.inner, zone.outer, True)]
@@ -217,7 +218,7 @@ class _Reader:
         return r0, c0, self.grid.read_window(r0, c0, r1 - r0, c1 - c0)
 
 
-def _heights(reader: _Reader, regional: Optional[ElevationGrid], x0: float, y0: float, gx: np.ndarray, gy: np.ndarray):
+def _heights(reader: _Reader, regional: ElevationGrid | None, x0: float, y0: float, gx: np.ndarray, gy: np.ndarray):
     """Sample heights: fine DEM first, regional where the fine one has none.
 
     Returns (heights, True when the regional filled a void inside the fine
@@ -244,10 +245,10 @@ def hammer_terrain_correction(
     density: float = 2670.0,
     zones: str = "BCDEFGHIJKLM",
     *,
-    regional: Optional[ElevationGrid] = None,
+    regional: ElevationGrid | None = None,
     inner_radius: float = 2000.0,
-    progress: Optional[Callable[[float], None]] = None,
-    is_cancelled: Optional[Callable[[], bool]] = None,
+    progress: Callable[[float], None] | None = None,
+    is_cancelled: Callable[[], bool] | None = None,
 ) -> HammerResult:
     """Hammer (1939) ring-and-sector terrain correction from DEMs.
 
@@ -320,14 +321,18 @@ def hammer_terrain_correction(
     ys = np.atleast_1d(np.asarray(y, dtype=float))
     hs = np.atleast_1d(np.asarray(station_height, dtype=float))
     if not (xs.size == ys.size == hs.size):
-        raise ValueError(f"x, y and station_height must have the same length, got {xs.size}, {ys.size}, {hs.size}")
+        msg = f"x, y and station_height must have the same length, got {xs.size}, {ys.size}, {hs.size}"
+        raise ValueError(msg)
     chosen = parse_zones(zones)
     if not density > 0:
-        raise ValueError(f"density must be > 0 kg/m^3, got {density}")
+        msg = f"density must be > 0 kg/m^3, got {density}"
+        raise ValueError(msg)
     if not inner_radius >= 0:
-        raise ValueError(f"inner_radius must be >= 0 m, got {inner_radius}")
+        msg = f"inner_radius must be >= 0 m, got {inner_radius}"
+        raise ValueError(msg)
     if regional is not None and regional.geographic != grid.geographic:
-        raise ValueError("fine and regional grids must share one CRS (both geographic or both projected)")
+        msg = "fine and regional grids must share one CRS (both geographic or both projected)"
+        raise ValueError(msg)
     n = xs.size
     # Resolution is judged on the fine DEM's larger metric side (at the
     # survey's mean latitude for degree grids).
@@ -344,12 +349,13 @@ def hammer_terrain_correction(
     tc_inner = np.full(n, np.nan)
     tc_outer = np.full(n, np.nan)
     coverage = np.full(n, np.nan)
-    codes: List[List[str]] = [[] for _ in range(n)]
+    codes: list[list[str]] = [[] for _ in range(n)]
     inside = on & inside_extent(grid, np.where(on, xs, 0.0), np.where(on, ys, 0.0))
     reader = _Reader(grid, xs[inside], ys[inside], max((z.outer for z in sampled), default=0.0))
     for i in range(n):
         if is_cancelled is not None and is_cancelled():
-            raise TerrainCancelled("terrain correction cancelled")
+            msg = "terrain correction cancelled"
+            raise TerrainCancelled(msg)
         if not inside[i]:
             codes[i].append("outside_dem")
             continue

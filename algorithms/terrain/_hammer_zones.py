@@ -20,7 +20,7 @@ from __future__ import annotations
 
 import math
 import re
-from typing import NamedTuple, Tuple
+from typing import NamedTuple
 
 import numpy as np
 import numpy.typing as npt
@@ -41,7 +41,7 @@ class HammerZone(NamedTuple):
 #: Zones B-M: radii in feet converted with the international foot (0.3048 m),
 #: and compartments per ring. FROM MEMORY, not checked against Hammer (1939);
 #: the outer radius of M agrees with Sandberg (1959)'s "about 13.6 miles".
-HAMMER_ZONES: Tuple[HammerZone, ...] = tuple(
+HAMMER_ZONES: tuple[HammerZone, ...] = tuple(
     HammerZone(letter, r1 * FOOT, r2 * FOOT, n)
     for letter, r1, r2, n in (
         ("B", 6.56, 54.6, 4),
@@ -63,7 +63,7 @@ HAMMER_ZONES: Tuple[HammerZone, ...] = tuple(
 ZONE_LETTERS = "".join(z.letter for z in HAMMER_ZONES)
 
 
-def parse_zones(text: str) -> Tuple[HammerZone, ...]:
+def parse_zones(text: str) -> tuple[HammerZone, ...]:
     """The zones of a user's choice, checked.
 
     Parameters
@@ -96,36 +96,46 @@ def parse_zones(text: str) -> Tuple[HammerZone, ...]:
     ValueError: Hammer zones must be contiguous (no gap between B and E): 'BCE' leaves out D.
     """
     if not isinstance(text, str):
-        raise ValueError(f"Hammer zones must be given as letters such as 'BCDEFGHIJKLM' or 'B-M', got {text!r}.")
+        msg = f"Hammer zones must be given as letters such as 'BCDEFGHIJKLM' or 'B-M', got {text!r}."
+        raise ValueError(msg)
     compact = re.sub(r"\s+", "", text).upper()
     if not compact:
-        raise ValueError("No Hammer zone chosen: give letters out of B-M such as 'BCDEFGHIJKLM' or 'B-M'.")
+        msg = "No Hammer zone chosen: give letters out of B-M such as 'BCDEFGHIJKLM' or 'B-M'."
+        raise ValueError(msg)
     match = re.fullmatch(r"([A-Z])[-\u2013]([A-Z])", compact)
     if match:
         first, last = match.groups()
         for letter in (first, last):
             if letter not in ZONE_LETTERS:
-                raise ValueError(f"Unknown Hammer zone {letter!r} in {text!r}: zones run from B to M (zone A is the station zone).")
+                msg = f"Unknown Hammer zone {letter!r} in {text!r}: zones run from B to M (zone A is the station zone)."
+                raise ValueError(msg)
         i, j = ZONE_LETTERS.index(first), ZONE_LETTERS.index(last)
         if j < i:
-            raise ValueError(f"Hammer zone range {text!r} runs backwards: write the inner zone first, e.g. '{last}-{first}'.")
+            msg = f"Hammer zone range {text!r} runs backwards: write the inner zone first, e.g. '{last}-{first}'."
+            raise ValueError(msg)
         return HAMMER_ZONES[i : j + 1]
     unknown = sorted({c for c in compact if c not in ZONE_LETTERS})
     if unknown:
-        raise ValueError(
-            f"Unknown Hammer zone letter(s) {', '.join(unknown)} in {text!r}: zones run from B to M (zone A is the station zone)."
+        msg = (
+            f"Unknown Hammer zone letter(s) {', '.join(unknown)} in {text!r}: "
+            "zones run from B to M (zone A is the station zone)."
         )
+        raise ValueError(msg)
     repeated = sorted({c for c in compact if compact.count(c) > 1})
     if repeated:
-        raise ValueError(f"Hammer zone(s) {', '.join(repeated)} given twice in {text!r}.")
+        msg = f"Hammer zone(s) {', '.join(repeated)} given twice in {text!r}."
+        raise ValueError(msg)
     index = [ZONE_LETTERS.index(c) for c in compact]
     if index != sorted(index):
-        raise ValueError(f"Hammer zones {text!r} are out of order: write them innermost first, e.g. {''.join(sorted(compact))!r}.")
+        msg = f"Hammer zones {text!r} are out of order: write them innermost first, e.g. {''.join(sorted(compact))!r}."
+        raise ValueError(msg)
     missing = [ZONE_LETTERS[k] for k in range(index[0], index[-1] + 1) if k not in index]
     if missing:
-        raise ValueError(
-            f"Hammer zones must be contiguous (no gap between {compact[0]} and {compact[-1]}): {text!r} leaves out {''.join(missing)}."
+        msg = (
+            f"Hammer zones must be contiguous (no gap between {compact[0]} and {compact[-1]}): "
+            f"{text!r} leaves out {''.join(missing)}."
         )
+        raise ValueError(msg)
     return HAMMER_ZONES[index[0] : index[-1] + 1]
 
 
@@ -150,7 +160,7 @@ def reach_sentence(zones) -> str:
     'ring-and-sector zones B–M reach 21.94 km; terrain beyond is not corrected.'
     >>> reach_sentence(parse_zones("D-F"))
     'ring-and-sector zones D–F cover 53.3 m to 894.9 m; terrain nearer (except a field-estimated zone A) and beyond is not corrected.'
-    """
+    """  # noqa: E501 - a doctest's expected output is one line
     first, last = zones[0], zones[-1]
     outer = f"{last.outer / 1000:.2f} km" if last.outer >= 1000 else f"{last.outer:.1f} m"
     if first.letter == "B":
@@ -230,9 +240,11 @@ def ring_sector_correction(
     0.0279
     """
     if not (0 <= r1 < r2):
-        raise ValueError(f"need 0 <= r1 < r2, got {r1}, {r2}")
+        msg = f"need 0 <= r1 < r2, got {r1}, {r2}"
+        raise ValueError(msg)
     if n_compartments < 1:
-        raise ValueError(f"n_compartments must be >= 1, got {n_compartments}")
+        msg = f"n_compartments must be >= 1, got {n_compartments}"
+        raise ValueError(msg)
     z = np.asarray(relief, dtype=float)
     z2 = z * z
     # (r2 - r1) + sqrt(r1^2+z^2) - sqrt(r2^2+z^2) written without cancellation.
@@ -289,7 +301,8 @@ def plane_ring_correction(r1: float, r2: float, gradient: npt.ArrayLike, density
     0.85541
     """
     if not (0 <= r1 < r2):
-        raise ValueError(f"need 0 <= r1 < r2, got {r1}, {r2}")
+        msg = f"need 0 <= r1 < r2, got {r1}, {r2}"
+        raise ValueError(msg)
     g = np.abs(np.asarray(gradient, dtype=float))
     cos0 = 1.0 / np.sqrt(1.0 + g * g)
     sin2 = g * g * cos0 * cos0

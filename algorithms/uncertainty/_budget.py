@@ -217,7 +217,7 @@ def terrain_height_spread(terrain_nodes: np.ndarray) -> np.ndarray:
     >>> round(float(terrain_height_spread(np.zeros((7, 1)))[0]), 3)
     0.0
     """
-    xi, wi = normal_nodes(terrain_nodes.shape[0])
+    _xi, wi = normal_nodes(terrain_nodes.shape[0])
     values = np.where(np.isfinite(terrain_nodes), terrain_nodes, 0.0)
     mean = np.tensordot(wi, values, axes=1)
     spread = np.sqrt(np.tensordot(wi, (values - mean) ** 2, axes=1))

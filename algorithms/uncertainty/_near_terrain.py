@@ -167,8 +167,11 @@ def near_terrain_spread(
         relief = zc - h[k]
         rho = density[k]
 
-        def tc_of(shift, _r=relief):
-            return _outside_square(dx0, dx1, dy0, dy1, sx / 2, sy / 2, _r + shift, rho)
+        square = (dx0, dx1, dy0, dy1, sx / 2, sy / 2)
+
+        # Defaults bind this station's cells: tc_of is called only within this iteration.
+        def tc_of(shift, _r=relief, _square=square, _rho=rho):
+            return _outside_square(*_square, _r + shift, _rho)
 
         base = tc_of(0.0)
         if dem_sigma > 0:

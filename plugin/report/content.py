@@ -214,7 +214,8 @@ def _uncertainty_section(data: SurveyData) -> str:
     if not names:
         return html.section("Uncertainty", html.paragraph(
             "This layer has no uncertainty fields (tc_sigma, cba_sigma or sigma_…): the run that made it did not "
-            "estimate a per-station error, so none is shown. Do not read the anomalies as exact."), anchor="uncertainty")
+            "estimate a per-station error, so none is shown. Do not read the anomalies as exact."),
+            anchor="uncertainty")
     main = names[0]
     parts = [html.figure(plots.station_map(data.x, data.y, data.fields[main], f"{main} (mGal)", cmap="viridis"),
                          f"Map of {main}", f"One standard deviation, mGal. {data.crs_name}"),
@@ -244,6 +245,7 @@ def _flagged_section(data: SurveyData) -> str:
 
 
 def caution_box() -> str:
+    """The report's caution paragraph as HTML (every caution, escaped)."""
     return '<div class="caution"><strong>Caution.</strong> ' + " ".join(html.text(c) for c in CAUTIONS) + "</div>"
 
 

@@ -9,7 +9,7 @@ Examples
 --------
 >>> table(["code", "n"], [["tc_partial", 3]])
 '<table><thead><tr><th>code</th><th>n</th></tr></thead><tbody><tr><td>tc_partial</td><td class="num">3</td></tr></tbody></table>'
-"""
+"""  # noqa: E501 - a doctest's expected output is one line
 
 from __future__ import annotations
 
@@ -84,7 +84,8 @@ def table(headers, rows, numeric_digits: int = 3) -> str:
 def png_data_uri(png_bytes: bytes) -> str:
     """``data:image/png;base64,...`` for PNG bytes."""
     if not png_bytes.startswith(b"\x89PNG"):
-        raise ValueError("not a PNG image")
+        msg = "not a PNG image"
+        raise ValueError(msg)
     return "data:image/png;base64," + base64.b64encode(png_bytes).decode("ascii")
 
 

@@ -20,9 +20,9 @@ def check_numeric_fields(algorithm, source, parameters, context, labels: dict) -
         for name in names:
             index = fields.lookupField(name)
             if index < 0:
-                return _tr("The station layer has no field named '{}' (chosen as the {} field). Available fields: {}.").format(
-                    name, label, ", ".join(fields.names())
-                )
+                return _tr(
+                    "The station layer has no field named '{}' (chosen as the {} field). Available fields: {}."
+                ).format(name, label, ", ".join(fields.names()))
             if not fields.at(index).isNumeric():
                 return _tr("The field '{}' chosen as the {} field is not numeric (it is {}).").format(
                     name, label, fields.at(index).typeName()

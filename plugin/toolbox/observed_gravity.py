@@ -3,6 +3,7 @@
 
 from __future__ import annotations
 
+import contextlib
 import math
 import warnings
 
@@ -91,7 +92,9 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         return self.tr("Turns gravimeter readings into observed gravity at each station, with loop checks.")
 
     def tags(self):
-        return self.tr("gravity,gravimeter,readings,earth tide,Longman,drift,loop,base station,tie,calibration").split(",")
+        return self.tr(
+            "gravity,gravimeter,readings,earth tide,Longman,drift,loop,base station,tie,calibration"
+        ).split(",")
 
     def shortHelpString(self):  # noqa: N802 - QGIS API
         return self.tr(
@@ -113,7 +116,9 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
 
     def initAlgorithm(self, config=None):  # noqa: N802 - QGIS API
         add = self.addParameter
-        add(QgsProcessingParameterFeatureSource(self.READINGS, self.tr("Meter readings (table)"), [QgsProcessing.TypeVector]))
+        add(QgsProcessingParameterFeatureSource(
+            self.READINGS, self.tr("Meter readings (table)"), [QgsProcessing.TypeVector]
+        ))
         for key, label, optional in (
             (self.STATION_FIELD, self.tr("Station id field of the readings"), False),
             (self.TIME_FIELD, self.tr("Time field (ISO 8601 text or date-time)"), False),
@@ -129,7 +134,8 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
             options=[self.tr("Counter units (through the calibration table)"), self.tr("mGal")], defaultValue=0,
         ))
         add(QgsProcessingParameterFeatureSource(
-            self.CALIBRATION, self.tr("Calibration table (fields counter, mgal, factor)"), [QgsProcessing.TypeVector], optional=True
+            self.CALIBRATION, self.tr("Calibration table (fields counter, mgal, factor)"), [QgsProcessing.TypeVector],
+            optional=True,
         ))
         add(QgsProcessingParameterNumber(
             self.SCALE_FACTOR, self.tr("Scale factor (mGal per unit, or a correction to the table)"),
@@ -143,11 +149,15 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
             self.LOOP_FIELD, self.tr("Loop field (empty: one loop per local calendar day)"),
             parentLayerParameterName=self.READINGS, optional=True,
         ))
-        add(QgsProcessingParameterFeatureSource(self.STATIONS, self.tr("Gravity stations"), [QgsProcessing.TypeVectorPoint]))
-        add(QgsProcessingParameterField(self.STATIONS_ID_FIELD, self.tr("Station id field"), parentLayerParameterName=self.STATIONS))
+        add(QgsProcessingParameterFeatureSource(
+            self.STATIONS, self.tr("Gravity stations"), [QgsProcessing.TypeVectorPoint]
+        ))
         add(QgsProcessingParameterField(
-            self.HEIGHT_FIELD, self.tr("Station height field (m, for the tide)"), parentLayerParameterName=self.STATIONS,
-            type=QgsProcessingParameterField.Numeric, optional=True,
+            self.STATIONS_ID_FIELD, self.tr("Station id field"), parentLayerParameterName=self.STATIONS
+        ))
+        add(QgsProcessingParameterField(
+            self.HEIGHT_FIELD, self.tr("Station height field (m, for the tide)"),
+            parentLayerParameterName=self.STATIONS, type=QgsProcessingParameterField.Numeric, optional=True,
         ))
         add(QgsProcessingParameterField(
             self.KNOWN_GRAVITY_FIELD, self.tr("Known gravity field (absolute, mGal; empty where unknown)"),
@@ -176,14 +186,19 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
                 parentLayerParameterName=self.STATIONS, optional=True,
             ),
             QgsProcessingParameterBoolean(
-                self.DROP_OUTLIERS, self.tr("Leave readings beyond 3 standard errors out of a second pass"), defaultValue=False
+                self.DROP_OUTLIERS, self.tr("Leave readings beyond 3 standard errors out of a second pass"),
+                defaultValue=False,
             ),
         ]
         for definition in advanced:
             definition.setFlags(definition.flags() | QgsProcessingParameterDefinition.FlagAdvanced)
             add(definition)
-        add(QgsProcessingParameterFeatureSink(self.OUTPUT, self.tr("Stations with observed gravity"), QgsProcessing.TypeVectorPoint))
-        add(QgsProcessingParameterFeatureSink(self.READINGS_OUTPUT, self.tr("Reduced readings"), QgsProcessing.TypeVector))
+        add(QgsProcessingParameterFeatureSink(
+            self.OUTPUT, self.tr("Stations with observed gravity"), QgsProcessing.TypeVectorPoint
+        ))
+        add(QgsProcessingParameterFeatureSink(
+            self.READINGS_OUTPUT, self.tr("Reduced readings"), QgsProcessing.TypeVector
+        ))
         self.addOutput(QgsProcessingOutputNumber(self.LOOPS, self.tr("Loops")))
         self.addOutput(QgsProcessingOutputNumber(self.MAX_MISCLOSURE, self.tr("Largest loop misclosure (mGal)")))
 
@@ -257,7 +272,10 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         lat = np.where(station >= 0, stations.latitude[safe], np.nan)
         lon = np.where(station >= 0, stations.longitude[safe], np.nan)
         if tide_method == "longman1959":
-            tide = longman_tide(np.nan_to_num(lat), np.nan_to_num(lon), np.where(station >= 0, height[safe], 0.0), readings.utc_hours, factor)
+            tide = longman_tide(
+                np.nan_to_num(lat), np.nan_to_num(lon), np.where(station >= 0, height[safe], 0.0),
+                readings.utc_hours, factor,
+            )
             no_position = (station >= 0) & np.isnan(lat)
             flag(no_position, "no_tide_position")
             # A reading of an unknown station or of one without a position gets no tide (no g_read).
@@ -292,7 +310,8 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         feedback.setProgress(60)
 
         station_codes = self._station_codes(stations, known, result, station, use)
-        max_misclosure = float(np.nanmax(np.abs(closures.misclosure))) if np.any(np.isfinite(closures.misclosure)) else math.nan
+        finite_closures = np.any(np.isfinite(closures.misclosure))
+        max_misclosure = float(np.nanmax(np.abs(closures.misclosure))) if finite_closures else math.nan
         reading_columns = {
             "read_mgal": read_mgal, "ih_corr": ih_corr, "tide_corr": tide, "drift_corr": result.drift_corr,
             "g_read": result.g_read, "residual": result.residual,
@@ -308,9 +327,9 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         self._record(parameters, out_id, readings_id, tide_method, drift_method, factor, table, result)
         n_flagged = sum(1 for f in flags if f)
         feedback.pushInfo(
-            self.tr("{} readings in {} loops; {} stations with observed gravity; {} readings flagged; s0 = {:.4f} mGal.").format(
-                n, len(loop_names), int(np.isfinite(result.gravity).sum()), n_flagged, result.sigma0
-            )
+            self.tr(
+                "{} readings in {} loops; {} stations with observed gravity; {} readings flagged; s0 = {:.4f} mGal."
+            ).format(n, len(loop_names), int(np.isfinite(result.gravity).sum()), n_flagged, result.sigma0)
         )
         return {
             self.OUTPUT: out_id,
@@ -331,20 +350,29 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
                 continue
             if key in index:
                 raise QgsProcessingException(
-                    self.tr("The station id '{}' appears more than once in the station layer; ids must be unique.").format(key)
+                    self.tr(
+                        "The station id '{}' appears more than once in the station layer; ids must be unique."
+                    ).format(key)
                 )
             index[key] = i
         known = np.array([number(f[known_field]) for f in stations.features])
         if not np.any(np.isfinite(known)):
             raise QgsProcessingException(
-                self.tr("No station has a known gravity in the field {}: at least one base of known gravity is needed.").format(known_field)
+                self.tr(
+                    "No station has a known gravity in the field {}: at least one base of known gravity is needed."
+                ).format(known_field)
             )
         odd = np.isfinite(known) & ((known < 970_000.0) | (known > 990_000.0))
         if np.any(odd):
             feedback.pushWarning(
-                self.tr("Known gravity {} is outside 970000-990000 mGal: it must be absolute gravity in mGal.").format(known[odd][0])
+                self.tr(
+                    "Known gravity {} is outside 970000-990000 mGal: it must be absolute gravity in mGal."
+                ).format(known[odd][0])
             )
-        height = np.array([number(f[height_field]) for f in stations.features]) if height_field else np.zeros(len(stations))
+        if height_field:
+            height = np.array([number(f[height_field]) for f in stations.features])
+        else:
+            height = np.zeros(len(stations))
         height = np.where(np.isnan(height), 0.0, height)
         gradient = np.full(len(stations), FREE_AIR_GRADIENT)
         if gradient_field:
@@ -361,9 +389,9 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
             low, high = table.counter_range
             rows = np.flatnonzero(np.isfinite(raw) & ((raw < low) | (raw > high))) + 1
             raise QgsProcessingException(
-                self.tr("Counter reading(s) outside the calibration table's range {} to {} in row(s) {} of the readings.").format(
-                    low, high, ", ".join(str(r) for r in rows[:10])
-                )
+                self.tr(
+                    "Counter reading(s) outside the calibration table's range {} to {} in row(s) {} of the readings."
+                ).format(low, high, ", ".join(str(r) for r in rows[:10]))
             ) from None
 
     def _solve(self, method, value, station, loop, hours, known, use, parameters, context):
@@ -388,7 +416,8 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
             hours = closures.end[i] - closures.start[i]
             feedback.pushInfo(
                 "  {}  {}  {}  {:.2f}  {}  {}".format(
-                    name, ids.get(int(closures.base[i]), "-"), closures.base_count[i], hours if np.isfinite(hours) else float("nan"),
+                    name, ids.get(int(closures.base[i]), "-"), closures.base_count[i],
+                    hours if np.isfinite(hours) else float("nan"),
                     f"{closures.misclosure[i]:+.4f}" if np.isfinite(closures.misclosure[i]) else "-",
                     f"{result.drift_rate[i]:+.4f}" if np.isfinite(result.drift_rate[i]) and method != "none" else "-",
                 )
@@ -411,9 +440,14 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         return codes
 
     def _write_stations(self, parameters, context, source, stations, result, codes):
-        added = [("g_obs", QVariant.Double), ("g_sigma", QVariant.Double), ("n_read", QVariant.Int), ("qc_flag", QVariant.String)]
+        added = [
+            ("g_obs", QVariant.Double), ("g_sigma", QVariant.Double),
+            ("n_read", QVariant.Int), ("qc_flag", QVariant.String),
+        ]
         fields, indices, _ = output_fields(source.fields(), added)
-        sink, dest_id = self.parameterAsSink(parameters, self.OUTPUT, context, fields, source.wkbType(), source.sourceCrs())
+        sink, dest_id = self.parameterAsSink(
+            parameters, self.OUTPUT, context, fields, source.wkbType(), source.sourceCrs()
+        )
         if sink is None:
             raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
         n_input = source.fields().count()
@@ -468,10 +502,10 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
             "sigma0_mgal": result.sigma0,
             "redundancy": result.redundancy,
         }
-        step = provenance.make_step("reliefgravity:observedgravity", {k: str(v) for k, v in parameters.items()}, settings)
+        step = provenance.make_step(
+            "reliefgravity:observedgravity", {k: str(v) for k, v in parameters.items()}, settings
+        )
         for dest in (out_id, readings_id):
             if isinstance(dest, str) and dest.split("|")[0].lower().endswith(".gpkg"):
-                try:
+                with contextlib.suppress(OSError):
                     provenance.write_record(dest, provenance.chained(None, step))
-                except OSError:
-                    pass

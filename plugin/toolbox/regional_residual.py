@@ -166,7 +166,9 @@ class RegionalResidualAlgorithm(ReliefGravityAlgorithm):
 
     def _read_input(self, layer):
         if layer.providerType() != "gdal":
-            raise QgsProcessingException(self.tr("The raster {} is not a GDAL raster; save it as a GeoTIFF first.").format(layer.name()))
+            raise QgsProcessingException(
+                self.tr("The raster {} is not a GDAL raster; save it as a GeoTIFF first.").format(layer.name())
+            )
         crs = layer.crs()
         if not crs.isValid():
             raise QgsProcessingException(self.tr("The anomaly raster has no coordinate reference system."))
@@ -213,8 +215,9 @@ class RegionalResidualAlgorithm(ReliefGravityAlgorithm):
                 order = self.parameterAsInt(parameters, self.ORDER, context)
                 robust = ROBUST_CHOICES[self.parameterAsEnum(parameters, self.ROBUST, context)]
                 result = separate_by_trend(values, west, north, cell_x, cell_y, order=order, robust=robust)
-                description = self.tr("trend surface of order {} ({})").format(order, robust or self.tr("least squares"))
-                coefficients = ", ".join("{:.6g}".format(c) for c in result.trend.per_metre().values())
+                fit_name = robust or self.tr("least squares")
+                description = self.tr("trend surface of order {} ({})").format(order, fit_name)
+                coefficients = ", ".join(f"{c:.6g}" for c in result.trend.per_metre().values())
                 feedback.pushInfo(
                     self.tr("Trend coefficients per metre about ({:.1f}, {:.1f}): {}.").format(
                         result.trend.x0, result.trend.y0, coefficients
@@ -282,11 +285,20 @@ class RegionalResidualAlgorithm(ReliefGravityAlgorithm):
         x, y = table.coordinates_in(QgsCoordinateReferenceSystem(crs), context.transformContext())
         regional = ElevationRaster(outputs[self.REGIONAL], crs.toWkt(), False).sample_bilinear(x, y)
         residual = ElevationRaster(outputs[self.RESIDUAL], crs.toWkt(), False).sample_bilinear(x, y)
-        fields, indices, reused = output_fields(source.fields(), [("regional", QVariant.Double), ("residual", QVariant.Double), ("qc_flag", QVariant.String)])
+        fields, indices, reused = output_fields(
+            source.fields(),
+            [("regional", QVariant.Double), ("residual", QVariant.Double), ("qc_flag", QVariant.String)],
+        )
         for name in reused:
             if name != "qc_flag":
-                feedback.pushWarning(self.tr("The stations already have a field {}; its values are replaced in the output copy.").format(name))
-        sink, dest_id = self.parameterAsSink(parameters, self.STATIONS_OUTPUT, context, fields, source.wkbType(), source.sourceCrs())
+                feedback.pushWarning(
+                    self.tr(
+                        "The stations already have a field {}; its values are replaced in the output copy."
+                    ).format(name)
+                )
+        sink, dest_id = self.parameterAsSink(
+            parameters, self.STATIONS_OUTPUT, context, fields, source.wkbType(), source.sourceCrs()
+        )
         if sink is None:
             raise QgsProcessingException(self.invalidSinkError(parameters, self.STATIONS_OUTPUT))
         n_input = source.fields().count()
@@ -309,9 +321,9 @@ class RegionalResidualAlgorithm(ReliefGravityAlgorithm):
         sampled = int(np.sum(np.isfinite(regional) & np.isfinite(residual)))
         if sampled < len(table):
             feedback.pushWarning(
-                self.tr("{} of {} stations lie outside the raster or next to blank cells (qc_flag outside_grid).").format(
-                    len(table) - sampled, len(table)
-                )
+                self.tr(
+                    "{} of {} stations lie outside the raster or next to blank cells (qc_flag outside_grid)."
+                ).format(len(table) - sampled, len(table))
             )
         return {self.STATIONS_OUTPUT: dest_id, self.STATIONS_SAMPLED: sampled}
 

@@ -34,7 +34,9 @@ from .base import ReliefGravityAlgorithm
 #: Station identifier fields tried in order (else the feature id).
 ID_FIELDS = ("station_id", "station", "stn", "id", "name")
 #: Fields of the reduction and terrain steps the report reads when present.
-REPORT_FIELDS = ("faa", "sba", "cba", "tc_inner", "tc_outer", "tc_total", "dem_diff", "tc_cover", "tc_sigma", "cba_sigma")
+REPORT_FIELDS = (
+    "faa", "sba", "cba", "tc_inner", "tc_outer", "tc_total", "dem_diff", "tc_cover", "tc_sigma", "cba_sigma"
+)
 
 
 class SurveyReportAlgorithm(ReliefGravityAlgorithm):
@@ -79,7 +81,9 @@ class SurveyReportAlgorithm(ReliefGravityAlgorithm):
 
     def initAlgorithm(self, config=None):  # noqa: N802 - QGIS API
         self.addParameter(
-            QgsProcessingParameterFeatureSource(self.INPUT, self.tr("Reduced stations"), [QgsProcessing.TypeVectorPoint])
+            QgsProcessingParameterFeatureSource(
+                self.INPUT, self.tr("Reduced stations"), [QgsProcessing.TypeVectorPoint]
+            )
         )
         self.addParameter(
             QgsProcessingParameterField(

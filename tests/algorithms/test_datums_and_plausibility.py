@@ -44,7 +44,7 @@ def test_bilinear_global_reproduces_a_plane_and_wraps_in_longitude():
 
 
 @pytest.mark.parametrize(
-    "height_datum, dem_datum, sign, expected",
+    ("height_datum", "dem_datum", "sign", "expected"),
     [
         # Stations ellipsoidal but declared orthometric: stations one N above the DEM.
         (datums.STATION_EGM96, datums.DEM_EGM96, +1, ("HEIGHT_DATUM", datums.STATION_ELLIPSOIDAL)),

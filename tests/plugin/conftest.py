@@ -59,7 +59,7 @@ def write_points(path: Path, xs, ys, columns=None, epsg: int | None = 32632, typ
     for name, values in columns.items():
         kind = types.get(name, ogr.OFTString if any(isinstance(v, str) for v in values) else ogr.OFTReal)
         lyr.CreateField(ogr.FieldDefn(name, kind))
-    for i, (x, y) in enumerate(zip(xs, ys)):
+    for i, (x, y) in enumerate(zip(xs, ys, strict=True)):
         feature = ogr.Feature(lyr.GetLayerDefn())
         for name, values in columns.items():
             value = values[i]
@@ -82,7 +82,7 @@ def write_station_rows(path: Path, rows: list[dict], epsg: int | None = 32632, f
     return Path(write_points(path, [r["x"] for r in rows], [r["y"] for r in rows], columns, epsg=epsg, types=fields))
 
 
-@pytest.fixture()
+@pytest.fixture
 def hill_dem(tmp_path):
     """A 12 km square, 100 m cells, Gaussian hill 600 m high on a 200 m plain."""
     cell = 100.0
@@ -94,7 +94,7 @@ def hill_dem(tmp_path):
     return write_dem(tmp_path / "hill.tif", heights, west, north, cell), (west, north, cell, heights)
 
 
-@pytest.fixture()
+@pytest.fixture
 def station_rows():
     """Twelve invented stations on and around the hill, with edge cases."""
     rng = np.random.default_rng(7)
@@ -130,12 +130,12 @@ def station_fields():
     }
 
 
-@pytest.fixture()
+@pytest.fixture
 def stations_gpkg(tmp_path, station_rows):
     return write_station_rows(tmp_path / "stations.gpkg", station_rows)
 
 
-@pytest.fixture()
+@pytest.fixture
 def make_points(tmp_path):
     """Factory: make_points(rows, epsg=..., name=...) -> path of a GeoPackage."""
 
@@ -145,7 +145,7 @@ def make_points(tmp_path):
     return factory
 
 
-@pytest.fixture()
+@pytest.fixture
 def collecting_feedback():
     """A feedback that keeps warnings and infos for assertions."""
     from qgis.core import QgsProcessingFeedback

@@ -46,7 +46,7 @@ def lonlat(x, y):
     for s in (src, dst):
         s.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)
     t = osr.CoordinateTransformation(src, dst)
-    pts = [t.TransformPoint(float(a), float(b)) for a, b in zip(x, y)]
+    pts = [t.TransformPoint(float(a), float(b)) for a, b in zip(x, y, strict=True)]
     return np.array([p[0] for p in pts]), np.array([p[1] for p in pts])
 
 

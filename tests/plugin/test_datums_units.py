@@ -29,7 +29,7 @@ def geoid_module(provider):
     return geoid
 
 
-@pytest.fixture()
+@pytest.fixture
 def survey(tmp_path, dem_writer, points_writer, geoid_module):
     """DEM holding orthometric (EGM96) heights; stations with both height kinds."""
     dem = dem_writer(tmp_path / "dem_egm96.tif", sc.dem_array(), sc.WEST, sc.NORTH, sc.CELL, epsg=sc.EPSG)
@@ -186,7 +186,7 @@ def test_geoid_settings_are_checked(survey, tmp_path, dem_writer):
     assert not (tmp_path / "g.gpkg").with_name("never").exists()
 
 
-@pytest.mark.parametrize("units, factor", [(0, 1.0), (1, 10.0), (2, 1e-3), (3, 1e-5)])
+@pytest.mark.parametrize(("units", "factor"), [(0, 1.0), (1, 10.0), (2, 1e-3), (3, 1e-5)])
 def test_gravity_units(survey, tmp_path, units, factor, points_writer):
     from qgis.core import QgsProcessingException
 
@@ -226,7 +226,7 @@ def test_zero_and_single_bad_gravity(survey, tmp_path, points_writer):
 
 
 @pytest.mark.parametrize(
-    "scale, units, match",
+    ("scale", "units", "match"),
     [
         (1 / 0.3048, 0, "feet read as metres.*HEIGHT_UNITS to feet"),
         (100.0, 0, "centimetres read as metres.*HEIGHT_UNITS to centimetres"),
@@ -266,7 +266,7 @@ def _int16_dem(path, heights, nodata_hole=True):
 
 
 @pytest.mark.parametrize(
-    "kind, match",
+    ("kind", "match"),
     [
         ("feet", "looks like heights in feet"),
         ("centimetres", "higher than any point on Earth"),
@@ -290,7 +290,7 @@ def test_dem_in_the_wrong_units_or_with_untagged_voids(survey, tmp_path, dem_wri
     assert sc.digest(dem) == before
 
 
-@pytest.mark.parametrize("density, match", [(1e6, "1,000 times too large"), (2.67, "looks like g/cm³"), (9000.0, "outside the accepted range")])
+@pytest.mark.parametrize(("density", "match"), [(1e6, "1,000 times too large"), (2.67, "looks like g/cm³"), (9000.0, "outside the accepted range")])
 def test_density_parameter_limits_in_both_algorithms(survey, tmp_path, density, match):
     from qgis.core import QgsProcessingException
 
@@ -311,7 +311,7 @@ def test_density_field_off_by_1000_stops_and_single_bad_density_is_flagged(surve
     path = points_writer(tmp_path / "rho.gpkg", x, y, {"g": g, "h": h, "rho": [2670.0] * 16}, epsg=sc.EPSG)
     params = {"INPUT": path, "GRAVITY_FIELD": "g", "HEIGHT_FIELD": "h", "DENSITY_FIELD": "rho", "TC_FIELD": None,
               "OUTPUT": str(tmp_path / "out.gpkg")}
-    with pytest.raises(QgsProcessingException, match="DENSITY_FIELD rho.*DENSITY_FIELD_UNITS"):
+    with pytest.raises(QgsProcessingException, match=r"DENSITY_FIELD rho.*DENSITY_FIELD_UNITS"):
         sc.run("bouguerreduction", dict(params, DENSITY_FIELD_UNITS=1))
     assert not (tmp_path / "out.gpkg").exists()
     rho = [2670.0] * 16

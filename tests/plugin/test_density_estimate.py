@@ -36,7 +36,7 @@ def latitudes(x, y):
     dst.ImportFromEPSG(4326)
     dst.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)
     t = osr.CoordinateTransformation(src, dst)
-    return np.array([t.TransformPoint(float(a), float(b))[1] for a, b in zip(x, y)])
+    return np.array([t.TransformPoint(float(a), float(b))[1] for a, b in zip(x, y, strict=True)])
 
 
 @pytest.fixture(scope="module")
@@ -85,7 +85,7 @@ def digest(path):
 
 
 @pytest.mark.parametrize("method", [0, 1])
-@pytest.mark.parametrize("name, trend", [("plain", 0), ("plain", 1), ("gradient", 1), ("gradient", 2)])
+@pytest.mark.parametrize(("name", "trend"), [("plain", 0), ("plain", 1), ("gradient", 1), ("gradient", 2)])
 def test_interval_covers_the_true_density(provider, survey, tmp_path, method, name, trend):
     before = digest(survey[name])
     plot = tmp_path / "fit.png"

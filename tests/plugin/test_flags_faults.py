@@ -17,7 +17,7 @@ sc = importlib.util.module_from_spec(_spec)
 _spec.loader.exec_module(sc)
 
 
-@pytest.fixture()
+@pytest.fixture
 def survey(provider, tmp_path, dem_writer, points_writer):
     """Ellipsoidal DEM and stations on it (declared DEM_DATUM=1 in the runs)."""
     dem = dem_writer(tmp_path / "dem.tif", sc.dem_array(), sc.WEST, sc.NORTH, sc.CELL, epsg=sc.EPSG)
@@ -137,7 +137,7 @@ def test_multipart_stations(survey, tmp_path):
     lyr = ds.CreateLayer("stations", srs, ogr.wkbMultiPoint)
     lyr.CreateField(ogr.FieldDefn("g_obs", ogr.OFTReal))
     lyr.CreateField(ogr.FieldDefn("h", ogr.OFTReal))
-    for i, (x, y, h) in enumerate(zip(survey["x"], survey["y"], survey["h"])):
+    for i, (x, y, h) in enumerate(zip(survey["x"], survey["y"], survey["h"], strict=True)):
         multi = ogr.Geometry(ogr.wkbMultiPoint)
         for dx in ((0.0, 5000.0) if i == 1 else (0.0, 0.0) if i == 2 else (0.0,)):
             part = ogr.Geometry(ogr.wkbPoint)
@@ -165,7 +165,7 @@ def test_coordinates_outside_the_crs_area_stop_the_run(survey, tmp_path, points_
     else:
         y[4] = 1e12
     path = points_writer(tmp_path / "bad.gpkg", x, y, {"g_obs": [980_500.0] * 16, "h": [float(v) for v in survey["h"]]}, epsg=sc.EPSG)
-    with pytest.raises(QgsProcessingException, match="look like longitude and latitude|area of use"):
+    with pytest.raises(QgsProcessingException, match=r"look like longitude and latitude|area of use"):
         sc.run("bouguerreduction", {"INPUT": path, "GRAVITY_FIELD": "g_obs", "HEIGHT_FIELD": "h", "OUTPUT": str(tmp_path / "out.gpkg")})
     assert sc.leftovers(tmp_path) == []
 
@@ -199,7 +199,7 @@ def test_non_point_layer_is_refused(survey, tmp_path):
     ds = ogr.GetDriverByName("GPKG").CreateDataSource(str(path))
     lyr = ds.CreateLayer("polys", srs, ogr.wkbPolygon)
     lyr.CreateField(ogr.FieldDefn("g_obs", ogr.OFTReal))
-    for x, y in zip(survey["x"][:4], survey["y"][:4]):
+    for x, y in zip(survey["x"][:4], survey["y"][:4], strict=True):
         f = ogr.Feature(lyr.GetLayerDefn())
         f.SetGeometry(ogr.CreateGeometryFromWkt(f"POLYGON(({x} {y},{x+10} {y},{x+10} {y+10},{x} {y}))"))
         f.SetField("g_obs", 980_500.0)
@@ -208,7 +208,7 @@ def test_non_point_layer_is_refused(survey, tmp_path):
     for algorithm, extra in (("bouguerreduction", {"GRAVITY_FIELD": "g_obs", "DEM": str(survey["dem"])}),
                              ("terraincorrection", {"DEM": str(survey["dem"])}),
                              ("anomalygrid", {"FIELD": "g_obs"})):
-        with pytest.raises(QgsProcessingException, match="stations must be points|point"):
+        with pytest.raises(QgsProcessingException, match=r"stations must be points|point"):
             sc.run(algorithm, dict({"INPUT": str(path), "OUTPUT": str(tmp_path / "out.gpkg")}, **extra))
     assert sc.leftovers(tmp_path) == []
 
@@ -221,11 +221,11 @@ def test_truncated_raster_and_unwritable_folder(survey, tmp_path):
     gdal.Translate(str(truncated), str(survey["dem"]), creationOptions=["TILED=NO"])
     data = truncated.read_bytes()
     truncated.write_bytes(data[: len(data) // 2])
-    with pytest.raises(QgsProcessingException, match="cannot be read to the end|Could not load|could not be loaded|not a valid"):
+    with pytest.raises(QgsProcessingException, match=r"cannot be read to the end|Could not load|could not be loaded|not a valid"):
         _tc({**survey, "dem": truncated}, tmp_path / "out.gpkg")
     assert sc.leftovers(tmp_path) == []
     # /proc accepts no new folders, even for root (who ignores permission bits).
-    with pytest.raises(QgsProcessingException, match="Cannot write in the folder|not writable"):
+    with pytest.raises(QgsProcessingException, match=r"Cannot write in the folder|not writable"):
         _tc(survey, "/proc/out.gpkg")
     if os.geteuid() != 0:
         locked = tmp_path / "locked"
@@ -245,13 +245,13 @@ def test_cancel_raises_and_leaves_nothing(survey, tmp_path):
     ):
         feedback = QgsProcessingFeedback()
         feedback.cancel()
-        with pytest.raises(QgsProcessingException, match="[Cc]ancel"):
+        with pytest.raises(QgsProcessingException, match=r"[Cc]ancel"):
             sc.run(algorithm, params, feedback)
         assert sc.leftovers(tmp_path) == []
 
 
 @pytest.mark.parametrize(
-    "extra, match",
+    ("extra", "match"),
     [
         ({"PIXEL_SIZE": 0.5}, "cells .*Choose a larger pixel size"),
         ({"CONTOUR_INTERVAL": 1e-5}, "levels .*Choose a larger interval"),
@@ -314,12 +314,12 @@ def test_cancel_during_the_run_raises_and_leaves_nothing(survey, tmp_path, at):
     params = {"INPUT": str(survey["stations"]), "GRAVITY_FIELD": "g_obs", "HEIGHT_FIELD": "h", "DEM": str(survey["dem"]),
               "DEM_DATUM": 1, "OUTER_RADIUS": sc.OUTER, "OUTPUT": str(tmp_path / "out.gpkg")}
     feedback = _CancelLater.make(at)
-    with pytest.raises(QgsProcessingException, match="[Cc]ancel"):
+    with pytest.raises(QgsProcessingException, match=r"[Cc]ancel"):
         sc.run("bouguerreduction", params, feedback)
     assert feedback.seen > at
     assert sc.leftovers(tmp_path) == []
     feedback = _CancelLater.make(at)
-    with pytest.raises(QgsProcessingException, match="[Cc]ancel"):
+    with pytest.raises(QgsProcessingException, match=r"[Cc]ancel"):
         sc.run("anomalygrid", {"INPUT": str(survey["stations"]), "FIELD": "g_obs", "OUTPUT": str(tmp_path / "out.tif"),
                                "CONTOURS": str(tmp_path / "out_iso.gpkg")}, feedback)
     assert sc.leftovers(tmp_path) == []

@@ -30,7 +30,7 @@ def write_csv(path, header, rows):
     return str(path)
 
 
-@pytest.fixture()
+@pytest.fixture
 def survey(tmp_path, points_writer):
     """12 stations, BASE known; two days of loops BASE-B2-...-B2-BASE, local times at UTC+2, counter units."""
     rng = np.random.default_rng(21)
@@ -44,7 +44,7 @@ def survey(tmp_path, points_writer):
         {"sid": IDS, "elev": [float(v) for v in elev], "gknown": known, "truth": [float(v) for v in truth]}, epsg=EPSG,
     )
     table = CalibrationTable.from_rows(*TABLE)
-    calibration = write_csv(tmp_path / "calibration.csv", ["counter", "mgal", "factor"], zip(*TABLE))
+    calibration = write_csv(tmp_path / "calibration.csv", ["counter", "mgal", "factor"], zip(*TABLE, strict=True))
     lat = 45.15 + (y - 5_000_000.0) / 111_000.0  # near enough for the tide (0.1 arc-minute matters nothing)
     lon = 9.0 + (x - 500_000.0) / 78_600.0
     rows, true_rows = [], []
@@ -136,7 +136,7 @@ def test_output_feeds_the_bouguer_reduction(provider, survey):
     assert reduced["STATIONS_REDUCED"] == sum(1 for r in table_of(first["OUTPUT"]) if r["n_read"])
 
 
-@pytest.mark.parametrize("drift, tolerance", [(1, 0.03), (2, 0.2)])
+@pytest.mark.parametrize(("drift", "tolerance"), [(1, 0.03), (2, 0.2)])
 def test_linear_and_no_drift(provider, survey, drift, tolerance):
     result = run(params(survey, DRIFT=drift))
     out = table_of(result["OUTPUT"])
@@ -148,7 +148,7 @@ def test_linear_and_no_drift(provider, survey, drift, tolerance):
 
 def test_readings_in_mgal_without_tide(provider, survey):
     table = CalibrationTable.from_rows(*TABLE)
-    rows = [r[:2] + [f"{float(table.to_mgal(float(r[2]))):.4f}"] + r[3:] for r in survey["rows"]]
+    rows = [[*r[:2], f"{float(table.to_mgal(float(r[2]))):.4f}", *r[3:]] for r in survey["rows"]]
     path = write_csv(survey["folder"] / "mgal.csv", survey["header"], rows)
     with_tide = run(params(survey, READINGS=path, READING_UNITS=1, CALIBRATION=None))
     g = np.array([number(r["g_obs"]) for r in table_of(with_tide["OUTPUT"])])
@@ -168,7 +168,7 @@ def edited(survey, name, change):
 def test_unknown_station_is_flagged_and_the_run_goes_on(provider, survey, collecting_feedback):
     import processing
 
-    path = edited(survey, "unknown.csv", lambda rows: rows[:4] + [["NOPE"] + rows[4][1:]] + rows[5:])
+    path = edited(survey, "unknown.csv", lambda rows: [*rows[:4], ["NOPE", *rows[4][1:]], *rows[5:]])
     result = processing.run("reliefgravity:observedgravity", params(survey, READINGS=path), feedback=collecting_feedback)
     readings = table_of(result["READINGS_OUTPUT"])
     assert "unknown_station" in readings[4]["qc_flag"].split(";")
@@ -178,13 +178,13 @@ def test_unknown_station_is_flagged_and_the_run_goes_on(provider, survey, collec
 
 @pytest.mark.parametrize("bad", ["04/05/2026 09:00", "2026-05-04T25:00", ""])
 def test_unparseable_time_names_the_row_and_the_forms(provider, survey, bad):
-    path = edited(survey, "time.csv", lambda rows: rows[:6] + [rows[6][:1] + [bad] + rows[6][2:]] + rows[7:])
+    path = edited(survey, "time.csv", lambda rows: [*rows[:6], [*rows[6][:1], bad, *rows[6][2:]], *rows[7:]])
     with pytest.raises(Exception, match=r"row\(s\) 7 .*Accepted forms: YYYY-MM-DD"):
         run(params(survey, READINGS=path))
 
 
 def test_counter_outside_the_table_is_refused(provider, survey):
-    path = edited(survey, "counter.csv", lambda rows: rows[:2] + [rows[2][:2] + ["4500.000"] + rows[2][3:]] + rows[3:])
+    path = edited(survey, "counter.csv", lambda rows: [*rows[:2], [*rows[2][:2], "4500.000", *rows[2][3:]], *rows[3:]])
     with pytest.raises(Exception, match=r"outside the calibration table's range 1000.0 to 4000.0 in row\(s\) 3"):
         run(params(survey, READINGS=path))
 
@@ -214,15 +214,15 @@ def test_single_base_reading_backwards_time_and_duplicates_are_flagged(provider,
         loop2 = [r for r in rows if r[4] == "L2"][:-1]  # loop 2 loses its closing base reading
         loop1 = [r for r in rows if r[4] == "L1"]
         loop1[3], loop1[4] = loop1[4], loop1[3]  # two rows swapped: the time goes backwards
-        return loop1 + [loop1[5]] + loop2  # and a duplicate row
+        return [*loop1, loop1[5], *loop2]  # and a duplicate row
     path = edited(survey, "checks.csv", change)
     result = run(params(survey, READINGS=path))
     readings = table_of(result["READINGS_OUTPUT"])
     codes = [set(r["qc_flag"].split(";")) for r in readings]
     assert "time_backwards" in codes[4]
     assert "duplicate_reading" in codes[11] and "duplicate_reading" not in codes[5]
-    assert all("loop_single_base" in c for c, r in zip(codes, readings) if r["loop"] == "L2")
-    assert not any("loop_single_base" in c for c, r in zip(codes, readings) if r["loop"] == "L1")
+    assert all("loop_single_base" in c for c, r in zip(codes, readings, strict=True) if r["loop"] == "L2")
+    assert not any("loop_single_base" in c for c, r in zip(codes, readings, strict=True) if r["loop"] == "L1")
     g = np.array([number(r["g_obs"]) for r in table_of(result["OUTPUT"])])
     read = np.isfinite(g)
     assert np.abs(g[read] - survey["truth"][read]).max() < 0.03
@@ -254,7 +254,7 @@ def test_default_loops_by_local_day_and_date_time_fields(provider, survey, point
 
 
 def test_bad_calibration_table_and_scale(provider, survey):
-    path = write_csv(survey["folder"] / "cal_bad.csv", ["c", "m", "f"], zip(*TABLE))
+    path = write_csv(survey["folder"] / "cal_bad.csv", ["c", "m", "f"], zip(*TABLE, strict=True))
     with pytest.raises(Exception, match="counter, mgal and factor"):
         run(params(survey, CALIBRATION=path))
     with pytest.raises(Exception, match="scale factor must be positive"):

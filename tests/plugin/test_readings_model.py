@@ -41,7 +41,7 @@ def test_readings_model_runs_the_chain(provider, tmp_path):
     assert Path(result["grid:anomaly"]) == tmp_path / "cba.tif"
     ds = ogr.Open(str(tmp_path / "reduced.gpkg"))
     rows = [(f.GetField("g_obs"), f.GetField("obs_grav"), f.GetField("cba")) for f in ds.GetLayer(0)]
-    g, truth, cba = (np.array([np.nan if v is None else v for v in col], dtype=float) for col in zip(*rows))
+    g, truth, cba = (np.array([np.nan if v is None else v for v in col], dtype=float) for col in zip(*rows, strict=True))
     assert len(rows) == 351 and np.all(np.isfinite(cba))
     assert np.abs(g - truth).max() < 0.05  # invented readings: recovered within the reading noise and drift
     assert gdal.Open(str(tmp_path / "cba.tif")).RasterXSize > 10

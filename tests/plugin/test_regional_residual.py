@@ -28,7 +28,7 @@ def anomaly():
     return g, xx, yy
 
 
-@pytest.fixture()
+@pytest.fixture
 def grid_tif(tmp_path, dem_writer):
     from relief_gravity.plugin import provenance
 
@@ -130,11 +130,11 @@ def test_outputs_are_styled_when_loaded(provider, grid_tif, tmp_path):
         {"INPUT": grid_tif, "METHOD": 0, "REGIONAL": str(tmp_path / "r.tif"), "RESIDUAL": str(tmp_path / "s.tif")},
         feedback=QgsProcessingFeedback(), context=context,
     )
-    layers = [l for l in QgsProject.instance().mapLayers().values() if l.source() in (result["REGIONAL"], result["RESIDUAL"])]
+    layers = [lyr for lyr in QgsProject.instance().mapLayers().values() if lyr.source() in (result["REGIONAL"], result["RESIDUAL"])]
     assert len(layers) == 2
-    assert all(l.renderer().type() == "singlebandpseudocolor" for l in layers)
-    assert all("mGal" in l.title() for l in layers)
-    QgsProject.instance().removeMapLayers([l.id() for l in layers])
+    assert all(lyr.renderer().type() == "singlebandpseudocolor" for lyr in layers)
+    assert all("mGal" in lyr.title() for lyr in layers)
+    QgsProject.instance().removeMapLayers([lyr.id() for lyr in layers])
 
 
 def test_through_qgis_process(provider, grid_tif, tmp_path, qgis_process_env):

@@ -34,7 +34,7 @@ def _digest(path):
     return hashlib.sha256(open(path, "rb").read()).hexdigest()
 
 
-@pytest.fixture()
+@pytest.fixture
 def small_and_regional(tmp_path, dem_writer):
     """A 4 km fine DEM (20 m cells, plain at 200 m) inside a 60 km regional
     DEM (500 m cells) holding a ridge 5-8 km east of the centre."""
@@ -43,7 +43,7 @@ def small_and_regional(tmp_path, dem_writer):
     fine_path = dem_writer(tmp_path / "fine.tif", fine, cx - 2000.0, cy + 2000.0, 20.0)
     n = 120
     centres = -30_000.0 + (np.arange(n) + 0.5) * 500.0
-    xx, yy = np.meshgrid(centres, centres[::-1])
+    xx, _yy = np.meshgrid(centres, centres[::-1])
     regional = np.where((xx > 5000.0) & (xx < 8000.0), 700.0, 200.0)
     regional_path = dem_writer(tmp_path / "regional.tif", regional, cx - 30_000.0, cy + 30_000.0, 500.0)
     return fine_path, regional_path
@@ -72,7 +72,7 @@ def test_log_says_how_far_the_zones_reach(provider, stations_gpkg, hill_dem, col
     np.testing.assert_allclose(inner[ok] + outer[ok], total[ok], rtol=1e-12)
     assert np.all(inner[ok] > 0) and np.all(outer[ok] > 0)
     # The 12 km DEM does not reach 21.9 km: partial coverage, as a code.
-    assert all("tc_partial" in f.split(";") for f, good in zip(_flags(layer), ok) if good)
+    assert all("tc_partial" in f.split(";") for f, good in zip(_flags(layer), ok, strict=True) if good)
     assert _digest(stations_gpkg) == before
 
 

@@ -64,7 +64,7 @@ def survey(seed=4, n=300, tilt=0.0, regional=0.0, body=0.0, correlated_body=0.0,
 
 
 @pytest.mark.parametrize(
-    "kwargs, regional",
+    ("kwargs", "regional"),
     [
         ({}, "none"),
         ({}, "planar"),
@@ -75,7 +75,7 @@ def survey(seed=4, n=300, tilt=0.0, regional=0.0, body=0.0, correlated_body=0.0,
     ],
 )
 def test_parasnis_interval_covers_truth(kwargs, regional):
-    faa, b, h, x, y = survey(**kwargs)
+    faa, b, _h, x, y = survey(**kwargs)
     fit = parasnis_density(faa, b, x, y, regional)
     assert fit.low < TRUE_DENSITY < fit.high, fit
     assert fit.high - fit.low < 200.0
@@ -84,14 +84,14 @@ def test_parasnis_interval_covers_truth(kwargs, regional):
 def test_parasnis_without_regional_term_is_fooled_by_a_gradient():
     # The regional gradient is correlated with the eastward-rising terrain:
     # without a regional term the estimate is biased well outside its interval.
-    faa, b, h, x, y = survey(regional=1e-3, tilt=0.02)
+    faa, b, _h, x, y = survey(regional=1e-3, tilt=0.02)
     biased = parasnis_density(faa, b, x, y, "none")
     assert not biased.low < TRUE_DENSITY < biased.high
     assert abs(biased.density - TRUE_DENSITY) > 300
 
 
 @pytest.mark.parametrize(
-    "kwargs, regional",
+    ("kwargs", "regional"),
     [({}, "none"), ({"regional": 1e-3, "tilt": 0.02}, "planar"), ({"body": -4.0}, "planar")],
 )
 def test_nettleton_interval_covers_truth(kwargs, regional):
@@ -131,7 +131,7 @@ def test_geology_following_relief_raises_the_caution():
 
 
 def test_flat_survey_cautions_and_wide_interval():
-    faa, b, h, x, y = survey()
+    _faa, _b, h, x, y = survey()
     h_flat = 400.0 + (h - h.mean()) * 0.02  # a few metres of relief
     b_flat = unit_bouguer_term(h_flat, 0.0)
     rng = np.random.default_rng(9)

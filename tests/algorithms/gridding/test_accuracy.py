@@ -50,7 +50,7 @@ def _rms(grid, truth, inside):
 
 @pytest.fixture(scope="module")
 def scipy_cubic_rms(survey):
-    x, y, v, g, xx, yy, inside = survey
+    x, y, v, _g, xx, yy, inside = survey
     cubic = griddata((x, y), v, (xx, yy), method="cubic")  # scipy 1.10 Clough-Tocher
     return _rms(cubic, anomaly(xx, yy), inside)
 

@@ -123,7 +123,7 @@ def test_blank_far_cells_keeps_each_station_cell():
     y = np.array([50.0, 999.0, 580.0])
     g = GridGeometry(0.0, 1000.0, 100.0, 10, 10)
     mask = blank_far_cells(g, x, y, 75.0)
-    for xs, ys in zip(x, y):
+    for xs, ys in zip(x, y, strict=True):
         j = min(int((xs - g.west) // g.cell_size), g.n_cols - 1)
         i = min(int((g.north - ys) // g.cell_size), g.n_rows - 1)
         assert not mask[i, j]

@@ -93,7 +93,7 @@ def test_harmonic_with_tension_free_edges_refused():
         minimum_curvature([100.0, 500.0, 800.0], [100.0, 700.0, 300.0], [1.0, 2.0, 3.0], g, tension=1.0, boundary_tension=0.0)
 
 
-@pytest.mark.parametrize("tension", (0.0, 0.25, 1.0), ids=["T=0", "T=0.25", "T=1"])
+@pytest.mark.parametrize("tension", [0.0, 0.25, 1.0], ids=["T=0", "T=0.25", "T=1"])
 def test_multigrid_matches_direct(tension):
     g = GridGeometry(0.0, 12_000.0, 100.0, 125, 120)
     rng = np.random.default_rng(5)
@@ -296,7 +296,7 @@ def test_collinear_stations():
         minimum_curvature([50.0, 450.0, 850.0], [50.0, 450.0, 850.0], [1.0, 2.0, 3.0], g)
 
 
-@pytest.mark.parametrize("tension", (-0.1, 1.5, float("nan")), ids=["negative", "above-one", "nan"])
+@pytest.mark.parametrize("tension", [-0.1, 1.5, float("nan")], ids=["negative", "above-one", "nan"])
 def test_invalid_tension(tension):
     g = GridGeometry(0.0, 1000.0, 100.0, 10, 10)
     with pytest.raises(ValueError, match=re.escape(f"Invalid tension {tension!r}: expected a number between 0 and 1")):

@@ -24,7 +24,7 @@ def grid(n):
 
 
 @pytest.mark.parametrize(
-    "rise, ratio",
+    ("rise", "ratio"),
     # (2000/2500)^2, (2000/3000)^2, (2000/4000)^2: the peak of a point mass at
     # depth z falls as 1/z^2 (closed form g_z = G M z / (r^2 + z^2)^1.5).
     [(500.0, 0.64), (1000.0, 0.4444444), (2000.0, 0.25)],
@@ -76,7 +76,7 @@ def test_filter_at_zero_and_known_wavenumber():
 
 
 @pytest.mark.parametrize(
-    "kwargs, match",
+    ("kwargs", "match"),
     [
         ({"height": -10.0}, "upward"),
         ({"height": float("nan")}, "upward"),

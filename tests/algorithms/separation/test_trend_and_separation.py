@@ -84,7 +84,7 @@ def test_robust_weights_values():
 
 
 @pytest.mark.parametrize(
-    "kwargs, match",
+    ("kwargs", "match"),
     [
         ({"order": 4}, "order"),
         ({"order": 0}, "order"),
@@ -117,7 +117,7 @@ def anomaly_grid():
     return g, west, north, cell
 
 
-@pytest.mark.parametrize("method, options", [("trend", {"order": 2, "robust": "tukey"}), ("continuation", {"height": 1500.0})])
+@pytest.mark.parametrize(("method", "options"), [("trend", {"order": 2, "robust": "tukey"}), ("continuation", {"height": 1500.0})])
 def test_regional_plus_residual_is_the_input(method, options):
     g, west, north, cell = anomaly_grid()
     out = separate_grid(g, west, north, cell, cell, method, **options)
@@ -137,7 +137,7 @@ def test_trend_separation_of_a_plane_leaves_no_residual():
 
 
 def test_continuation_residual_keeps_short_wavelengths():
-    g, west, north, cell = anomaly_grid()
+    g, _west, _north, cell = anomaly_grid()
     out = separate_by_continuation(g, cell, cell, 3000.0)
     # The noise (one cell wide) is almost all in the residual.
     assert np.nanstd(np.diff(out.regional, axis=1)) < 0.2 * np.nanstd(np.diff(out.residual, axis=1))

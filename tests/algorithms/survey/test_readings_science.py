@@ -27,7 +27,7 @@ from relief_gravity.algorithms.survey import (
 
 
 @pytest.mark.parametrize(
-    "text, offset, expected",
+    ("text", "offset", "expected"),
     [
         ("2000-01-01T00:00:00Z", 5.0, 0.0),
         ("2000-01-01T02:00:00+02:00", 0.0, 0.0),
@@ -43,7 +43,7 @@ def test_times_to_utc(text, offset, expected):
 
 @pytest.mark.parametrize("text", ["", "yesterday", "2026-13-01T10:00", "2026-02-30 10:00", "10:00", "2026/05/04 10:00", None])
 def test_bad_times_are_refused_with_the_accepted_forms(text):
-    with pytest.raises(ValueError, match="YYYY-MM-DD|valid date"):
+    with pytest.raises(ValueError, match=r"YYYY-MM-DD|valid date"):
         parse_time(text)
 
 
@@ -77,7 +77,7 @@ def test_counter_outside_the_table_is_a_clear_error(value):
 
 
 @pytest.mark.parametrize(
-    "rows, message",
+    ("rows", "message"),
     [
         (([1000], [1017.0], [1.01]), "at least two rows"),
         (([1000, 1000], [1017.0, 1018.0], [1.01, 1.01]), "repeats"),
@@ -158,10 +158,10 @@ def test_no_known_station_is_refused():
 def test_untied_part_and_undeterminable_drift():
     # Loop 1 reads only stations 3 and 4, never tied: left out. Loop 2 reads A then D once each:
     # its drift cannot be determined and is left at zero; D still gets a value.
-    station = NET_STATION + [3, 4, 3, 0, 5]
+    station = [*NET_STATION, 3, 4, 3, 0, 5]
     loop = [0] * 7 + [1, 1, 1, 2, 2]
-    hours = NET_HOURS + [20.0, 21.0, 22.0, 30.0, 31.0]
-    value = NET_VALUE + [5.0, 6.0, 5.01, 1234.0, 1240.0]
+    hours = [*NET_HOURS, 20.0, 21.0, 22.0, 30.0, 31.0]
+    value = [*NET_VALUE, 5.0, 6.0, 5.01, 1234.0, 1240.0]
     known = [979800.0] + [np.nan] * 5
     r = adjust_network(value, station, loop, hours, known)
     assert r.station_tied.tolist() == [True, True, True, False, False, True]
@@ -181,7 +181,7 @@ def synthetic_survey(seed=3, noise=0.01):
     station, loop, hours = [], [], []
     t = parse_time("2026-05-04T14:00:00Z").utc_hours
     for day in range(6):
-        visits = [0, 1] + list(rng.choice(np.arange(2, n), 8, replace=False)) + [1, 0]
+        visits = [0, 1, *list(rng.choice(np.arange(2, n), 8, replace=False)), 1, 0]
         for k, s in enumerate(visits):
             station.append(int(s))
             loop.append(day)

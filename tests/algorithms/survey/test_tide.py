@@ -83,7 +83,7 @@ def _astropy_tide(lat, lon, height, start, n_hours):
 
 
 @pytest.mark.parametrize(
-    "lat, lon, height, start",
+    ("lat", "lon", "height", "start"),
     [(40.7914, -77.8586, 370.0, "2015-04-01T00:00:00"), (45.0, 7.0, 800.0, "2019-07-01T00:00:00"), (-33.9, 151.2, 50.0, "2012-01-01T00:00:00")],
 )
 def test_against_astropy_positions_over_a_month(lat, lon, height, start):

@@ -92,7 +92,7 @@ def test_geographic_equals_metric_beyond_the_innermost_cell(grids, above_dem):
 def test_degrees_are_not_metres(grids):
     # The same geographic raster read as if its degrees were metres gives a
     # different answer: the test above would notice a missing conversion.
-    metric, geo = grids
+    _metric, geo = grids
     h = float(terrain(np.array(0.0), np.array(0.0)))
     kw = dict(inner_radius=2000.0, outer_radius=5000.0, innermost_tc=[0.0])
     rg = terrain_correction([LON0], [LAT0], [h], geo, **kw)

@@ -38,7 +38,7 @@ def test_reader_is_asked_only_inside():
 def test_invalid_cells(bad):
     args = dict(x_origin=0.0, y_origin=0.0, cell_x=1.0, cell_y=1.0, n_rows=1, n_cols=1, reader=lambda *a: np.zeros((1, 1)))
     args.update(bad)
-    with pytest.raises(ValueError):
+    with pytest.raises(ValueError, match="cell sizes must be > 0"):
         ElevationGrid(**args)
 
 

@@ -195,7 +195,7 @@ def test_no_dem_at_the_station_flags_the_plane_zones():
 
 
 @pytest.mark.parametrize(
-    "text, letters",
+    ("text", "letters"),
     [("BCDEFGHIJKLM", "BCDEFGHIJKLM"), ("B-M", "BCDEFGHIJKLM"), (" d – f ", "DEF"), ("m", "M"), ("EFG", "EFG")],
 )
 def test_zone_choice_accepts(text, letters):
@@ -203,7 +203,7 @@ def test_zone_choice_accepts(text, letters):
 
 
 @pytest.mark.parametrize(
-    "text, message",
+    ("text", "message"),
     [
         ("", "No Hammer zone chosen"),
         ("   ", "No Hammer zone chosen"),
@@ -322,7 +322,7 @@ def test_result_is_frozen_and_codes_are_in_the_vocabulary():
     r = hammer_terrain_correction([0.0], [0.0], [0.0], _grid(lambda X, Y: np.zeros(X.shape), 400.0, 10.0), zones="B-D")
     with pytest.raises(dataclasses.FrozenInstanceError):
         r.reach = 1.0
-    with pytest.raises(ValueError):
+    with pytest.raises(ValueError, match="read-only"):  # numpy's message for a non-writeable array
         r.tc_total[0] = 1.0
     with pytest.raises(TypeError):
         r.zones["B"] = np.zeros(1)
@@ -368,7 +368,7 @@ def test_demo_survey_is_clean_and_close_to_the_exact_engine():
     source = ogr.Open(str(data / "corvahl_stations.gpkg"))  # keep it alive while the layer is read
     layer = source.GetLayer()
     rows = [(f.GetGeometryRef().GetX(), f.GetGeometryRef().GetY(), f.GetField("elev_m")) for f in layer][::7]
-    x, y, h = (np.array(v) for v in zip(*rows))
+    x, y, h = (np.array(v) for v in zip(*rows, strict=True))
     R = Z["M"].outer
     hammer = hammer_terrain_correction(x, y, h, fine, regional=regional)
     exact = terrain_correction(x, y, h, fine, regional, inner_radius=2000.0, outer_radius=R, curvature=False)
