@@ -29,7 +29,7 @@ fi
 if [ ! -x "$ROOT/.venv/bin/python" ]; then
     /usr/bin/python3 -m venv --system-site-packages "$ROOT/.venv"
 fi
-if ! "$ROOT/.venv/bin/python" -c "import pytest_qgis, boule, choclo, harmonica, tidegravity" 2>/dev/null; then
+if ! "$ROOT/.venv/bin/python" -c "import pytest_qgis, boule, choclo, harmonica, tidegravity" 2>/dev/null || [ ! -x "$ROOT/.venv/bin/ruff" ]; then
     "$ROOT/.venv/bin/pip" install -q --disable-pip-version-check --no-deps -r "$ROOT/requirements-dev.txt"
 fi
 # Guard: the venv must use Debian's numpy and scipy.
