@@ -67,16 +67,16 @@ def _cell_tc(dx0, dx1, dy0, dy1, relief, density):
 
 
 def _outside_square(dx0, dx1, dy0, dy1, half_x, half_y, relief, density):
-    """TC of cells minus their part inside the station square."""
+    """TC of cells (last axis) minus their part inside the station square; ``relief`` may have leading axes."""
     full = _cell_tc(dx0, dx1, dy0, dy1, relief, density)
     ix0, ix1 = np.maximum(dx0, -half_x), np.minimum(dx1, half_x)
     iy0, iy1 = np.maximum(dy0, -half_y), np.minimum(dy1, half_y)
     has = (ix1 > ix0) & (iy1 > iy0)
     if not np.any(has):
         return full
-    part = np.zeros_like(full)
-    part[has] = _cell_tc(ix0[has], ix1[has], iy0[has], iy1[has], relief[has], density)
-    return full - part
+    part = _cell_tc(ix0[has], ix1[has], iy0[has], iy1[has], relief[..., has], density)
+    full[..., has] -= part
+    return full
 
 
 def near_terrain_spread(
@@ -167,22 +167,20 @@ def near_terrain_spread(
         relief = zc - h[k]
         rho = density[k]
 
-        square = (dx0, dx1, dy0, dy1, sx / 2, sy / 2)
-
         # Defaults bind this station's cells: tc_of is called only within this iteration.
-        def tc_of(shift, _r=relief, _square=square, _rho=rho):
-            return _outside_square(*_square, _r + shift, _rho)
+        def tc_of(shifts, _r=relief, _rho=rho, _box=(dx0, dx1, dy0, dy1, sx / 2, sy / 2)):
+            """Per-cell TC for each shift (rows), one prism call for all of them."""
+            shifts = np.atleast_1d(np.asarray(shifts, dtype=float))[:, None]
+            return _outside_square(*_box, _r[None, :] + shifts, _rho)
 
-        base = tc_of(0.0)
+        total = float(np.sum(tc_of(0.0)))
         if dem_sigma > 0:
-            per_cell = np.stack([tc_of(dem_sigma * v) for v in xi])
+            per_cell = tc_of(dem_sigma * xi)
             mean = np.tensordot(wi, per_cell, axes=1)
-            var = np.tensordot(wi, (per_cell - mean) ** 2, axes=1)
-            dem_var = float(np.sum(var))
+            dem_var = float(np.sum(np.tensordot(wi, (per_cell - mean) ** 2, axes=1)))
         else:
             dem_var = 0.0
-        total = float(np.sum(base))
-        height_nodes[:, k] = [float(np.sum(tc_of(-h_sigma[k] * v))) - total for v in xi]
+        height_nodes[:, k] = np.sum(tc_of(-h_sigma[k] * xi), axis=1) - total
         mismatch[k] = abs(float(np.sum(tc_of(h[k] - dem_height[k]))) - total)
         # Innermost square: plane through the station with the DEM's slope.
         patch = grid.read_window(int(i0[k]), int(j0[k]), 2, 2)
