@@ -1,0 +1,264 @@
+# SPDX-License-Identifier: GPL-2.0-or-later
+"""Iterative solution of the minimum-curvature system, with progress and cancel.
+
+A Galerkin multigrid V-cycle (float32) preconditions a restarted GMRES
+written here in numpy, so that every iteration can report progress and
+check for cancellation (scipy's ``gmres`` offers neither reliably across
+versions).
+"""
+
+from __future__ import annotations
+
+import math
+from typing import Callable, Optional
+
+import numpy as np
+import scipy.sparse as sp
+import scipy.sparse.linalg as spla
+
+#: Relative residual at which the iterative solver stops. Measured on
+#: 300 x 300 nodes (T = 0.25, T_b = 0) against the direct solution: 1e-8
+#: leaves errors of about 2e-6 of the data range (1e-6 leaves 1e-3), well
+#: below map accuracy.
+ITERATIVE_RTOL = 1e-8
+
+#: GMRES restart length and largest number of iterations (common practice,
+#: no source). 30 vectors of 10^6 float64 nodes are 0.24 GB.
+GMRES_RESTART = 30
+GMRES_MAX_ITERATIONS = 600
+
+Progress = Optional[Callable[[float], None]]
+Cancelled = Optional[Callable[[], bool]]
+
+
+class GriddingCancelled(RuntimeError):
+    """Raised when the caller's ``is_cancelled()`` returns True during gridding.
+
+    Examples
+    --------
+    >>> raise GriddingCancelled("gridding cancelled")
+    Traceback (most recent call last):
+    ...
+    relief_gravity.algorithms.gridding._solver.GriddingCancelled: gridding cancelled
+    """
+
+
+def check_cancel(is_cancelled: Cancelled) -> None:
+    """Raise :class:`GriddingCancelled` when ``is_cancelled()`` is True."""
+    if is_cancelled is not None and is_cancelled():
+        msg = "Gridding cancelled."
+        raise GriddingCancelled(msg)
+
+
+def _prolongation_1d(n_fine: int) -> sp.csr_matrix:
+    """Linear interpolation from every other node (plus the last) to all nodes.
+
+    Four-point cubic midpoint weights were tried as well (higher order is the
+    textbook advice for a fourth-order operator, from memory); measured on
+    500 x 500 nodes they did not lower the iteration count and doubled the
+    set-up time, so linear it is.
+    """
+    coarse = np.arange(0, n_fine, 2)
+    if coarse[-1] != n_fine - 1:
+        coarse = np.append(coarse, n_fine - 1)
+    fine = np.arange(n_fine)
+    k = np.clip(np.searchsorted(coarse, fine, side="right") - 1, 0, coarse.size - 2)
+    left, right = coarse[k], coarse[k + 1]
+    w = (fine - left) / (right - left)
+    return sp.csr_matrix(
+        (np.concatenate([1.0 - w, w]), (np.concatenate([fine, fine]), np.concatenate([k, k + 1]))),
+        shape=(n_fine, coarse.size),
+    )
+
+
+class Multigrid:
+    """Galerkin multigrid V-cycle, the preconditioner of :func:`gmres`.
+
+    Coarse operators are ``P.T @ A @ P`` with bilinear ``P`` (an algebraic
+    construction, so data rows need no special coarse treatment). The
+    smoother is multicolour Gauss-Seidel: nodes coloured by
+    ``(i mod m, j mod m)`` with ``m`` one more than the stencil's reach are
+    never coupled to a node of their own colour, so each colour is updated
+    at once with one vectorised sparse product. SuperLU on the coarsest
+    level. The cycle runs in float32: it only has to approximate the
+    inverse, and single precision halves the memory traffic.
+
+    Examples
+    --------
+    >>> a = sp.diags([-1.0, 2.5, -1.0], [-1, 0, 1], shape=(64, 64)).tocsr()
+    >>> mg = Multigrid(a, 8, 8, coarsest=10)
+    >>> b = np.ones(64)
+    >>> bool(np.linalg.norm(b - a @ mg.apply(b)) < 0.5 * np.linalg.norm(b))
+    True
+    """
+
+    def __init__(
+        self,
+        a: sp.csr_matrix,
+        n_rows: int,
+        n_cols: int,
+        coarsest: int = 4_000,
+        sweeps: int = 2,
+        is_cancelled: Cancelled = None,
+    ) -> None:
+        self.levels = []
+        self.sweeps = sweeps
+        self.n = a.shape[0]
+        shape = (n_rows, n_cols)
+        while a.shape[0] > coarsest and min(shape) > 5:
+            check_cancel(is_cancelled)
+            py = _prolongation_1d(shape[0])
+            px = _prolongation_1d(shape[1])
+            p = sp.kron(py, px, format="csr")
+            r = p.T.tocsr()
+            a32 = a.astype(np.float32)
+            self.levels.append((a32, p.astype(np.float32), r.astype(np.float32), self._colour_blocks(a32, shape)))
+            a = (r @ (a @ p)).tocsr()
+            shape = (py.shape[1], px.shape[1])
+        check_cancel(is_cancelled)
+        self.coarse = spla.splu(a.tocsc(), permc_spec="COLAMD")
+
+    @staticmethod
+    def _colour_blocks(a: sp.csr_matrix, shape: tuple[int, int]) -> list:
+        nx = shape[1]
+        rows = np.repeat(np.arange(a.shape[0]), np.diff(a.indptr))
+        cols = a.indices
+        reach = int(max(np.abs(rows // nx - cols // nx).max(), np.abs(rows % nx - cols % nx).max()))
+        m = reach + 1
+        i, j = np.divmod(np.arange(a.shape[0]), nx)
+        colour = (i % m) * m + (j % m)
+        diag = a.diagonal()
+        blocks = []
+        for c in range(m * m):
+            idx = np.flatnonzero(colour == c)
+            if idx.size:
+                blocks.append((idx, a[idx], (1.0 / diag[idx]).astype(np.float32)))
+        return blocks
+
+    def _smooth(self, blocks: list, x: np.ndarray, b: np.ndarray, reverse: bool) -> np.ndarray:
+        order = blocks[::-1] if reverse else blocks
+        for _ in range(self.sweeps):
+            for idx, rows, inv_diag in order:
+                x[idx] += inv_diag * (b[idx] - rows @ x)
+        return x
+
+    def _cycle(self, level: int, b: np.ndarray) -> np.ndarray:
+        if level == len(self.levels):
+            return self.coarse.solve(b.astype(np.float64)).astype(np.float32)
+        a, p, r, blocks = self.levels[level]
+        x = self._smooth(blocks, np.zeros_like(b), b, reverse=False)
+        x += p @ self._cycle(level + 1, r @ (b - a @ x))
+        return self._smooth(blocks, x, b, reverse=True)
+
+    def apply(self, b: np.ndarray) -> np.ndarray:
+        """One V-cycle: an approximation of ``A^{-1} b`` (float64 out)."""
+        return self._cycle(0, np.ravel(b).astype(np.float32)).astype(np.float64)
+
+
+def gmres(
+    a: sp.csr_matrix,
+    b: np.ndarray,
+    precondition: Callable[[np.ndarray], np.ndarray],
+    *,
+    rtol: float = ITERATIVE_RTOL,
+    restart: int = GMRES_RESTART,
+    max_iterations: int = GMRES_MAX_ITERATIONS,
+    progress: Progress = None,
+    is_cancelled: Cancelled = None,
+) -> tuple[np.ndarray, float]:
+    """Right-preconditioned restarted GMRES (Saad & Schultz 1986).
+
+    Solves ``a @ x = b`` for ``x = M y``, ``M`` the preconditioner, so the
+    residual it monitors is the true one, :math:`\\|b - Ax\\|`. Arnoldi
+    with classical Gram-Schmidt applied twice (one matrix product per pass,
+    as stable as modified Gram-Schmidt; Giraud et al. 2005), Givens
+    rotations for the small least-squares problem.
+
+    Parameters
+    ----------
+    a : scipy.sparse matrix, shape (N, N)
+    b : numpy.ndarray, shape (N,)
+    precondition : callable
+        ``precondition(v)`` approximates ``a^{-1} v``.
+    rtol : float
+        Stop when :math:`\\|b - Ax\\| \\le` ``rtol`` :math:`\\|b\\|`.
+    restart, max_iterations : int
+        Krylov vectors kept before a restart; total iteration budget.
+    progress : callable, optional
+        ``progress(fraction)`` with the fraction (0-1) of the residual
+        reduction done, on the logarithmic scale from 1 to ``rtol``.
+    is_cancelled : callable, optional
+        Checked before every iteration; True raises :class:`GriddingCancelled`.
+
+    Returns
+    -------
+    x : numpy.ndarray
+    relative_residual : float
+
+    References
+    ----------
+    Saad, Y., & Schultz, M. H. (1986). GMRES: a generalized minimal residual
+    algorithm for solving nonsymmetric linear systems. SIAM J. Sci. Stat.
+    Comput., 7(3), 856-869.
+
+    Giraud, L., Langou, J., & Rozloznik, M. (2005). The loss of orthogonality
+    in the Gram-Schmidt orthogonalization process. Computers & Mathematics
+    with Applications, 50(7), 1069-1075.
+
+    Examples
+    --------
+    >>> a = sp.diags([-1.0, 4.0, -1.5], [-1, 0, 1], shape=(50, 50)).tocsr()
+    >>> x, rel = gmres(a, np.ones(50), lambda v: v / 4.0, rtol=1e-10)
+    >>> bool(rel <= 1e-10 and np.allclose(a @ x, 1.0, atol=1e-8))
+    True
+    """
+    n = b.size
+    norm_b = float(np.linalg.norm(b))
+    x = np.zeros(n)
+    if norm_b == 0.0:
+        return x, 0.0
+    target = rtol * norm_b
+    log_span = -math.log(rtol)
+    done = 0.0
+    iterations = 0
+    basis = np.empty((restart + 1, n))
+    r = b.copy()
+    beta = norm_b
+    while True:
+        basis[0] = r / beta
+        h = np.zeros((restart + 1, restart))
+        cs, sn = np.zeros(restart), np.zeros(restart)
+        g = np.zeros(restart + 1)
+        g[0] = beta
+        k = 0
+        while k < restart and iterations < max_iterations:
+            check_cancel(is_cancelled)
+            w = a @ precondition(basis[k])
+            for _ in range(2):
+                coeffs = basis[: k + 1] @ w
+                w -= coeffs @ basis[: k + 1]
+                h[: k + 1, k] += coeffs
+            h[k + 1, k] = norm_w = float(np.linalg.norm(w))
+            if norm_w > 0:
+                basis[k + 1] = w / norm_w
+            for i in range(k):
+                h[i, k], h[i + 1, k] = cs[i] * h[i, k] + sn[i] * h[i + 1, k], -sn[i] * h[i, k] + cs[i] * h[i + 1, k]
+            denom = math.hypot(h[k, k], h[k + 1, k])
+            cs[k], sn[k] = h[k, k] / denom, h[k + 1, k] / denom
+            h[k, k], h[k + 1, k] = denom, 0.0
+            g[k + 1] = -sn[k] * g[k]
+            g[k] = cs[k] * g[k]
+            k += 1
+            iterations += 1
+            estimate = abs(g[k])
+            if progress is not None:
+                done = max(done, min(1.0, math.log(norm_b / max(estimate, target)) / log_span))
+                progress(done)
+            if estimate <= target or norm_w == 0.0:
+                break
+        y = np.linalg.solve(np.triu(h[:k, :k]), g[:k]) if k else np.zeros(0)
+        x += precondition(y @ basis[:k])
+        r = b - a @ x
+        beta = float(np.linalg.norm(r))
+        if beta <= target or iterations >= max_iterations:
+            return x, beta / norm_b
