@@ -27,6 +27,12 @@ ITERATIVE_RTOL = 1e-8
 GMRES_RESTART = 30
 GMRES_MAX_ITERATIONS = 600
 
+#: Width (nodes) of the edge strips solved exactly once per multigrid cycle
+#: on the finest grid. The slowest errors of the plain cycle sit along the
+#: edges, beyond the outermost data (measured on 400 x 400 nodes, 1,600
+#: stations, T = 0.25: GMRES iterations 28 without, 19 with 16-node strips).
+EDGE_STRIP_WIDTH = 16
+
 Progress = Optional[Callable[[float], None]]
 Cancelled = Optional[Callable[[], bool]]
 
@@ -71,17 +77,48 @@ def _prolongation_1d(n_fine: int) -> sp.csr_matrix:
     )
 
 
+def _colour_order(n_rows: int, n_cols: int) -> tuple[np.ndarray, np.ndarray]:
+    """Nodes sorted by colour ``(i mod 3) * 3 + (j mod 3)``, where each colour starts, and each node's place."""
+    parts = [
+        np.add.outer(np.arange(ci, n_rows, 3) * n_cols, np.arange(cj, n_cols, 3)).ravel()
+        for ci in range(3)
+        for cj in range(3)
+    ]
+    order = np.concatenate(parts)
+    starts = np.concatenate([[0], np.cumsum([part.size for part in parts])])
+    position = np.empty_like(order)
+    position[order] = np.arange(order.size)
+    return order, starts, position
+
+
+def _permuted(m: sp.csr_matrix, row_order: np.ndarray, column_position: np.ndarray) -> sp.csr_matrix:
+    """``m[row_order][:, column_order]`` in float32 (column indices left unsorted)."""
+    out = m[row_order]
+    out = sp.csr_matrix(
+        (out.data.astype(np.float32), column_position[out.indices].astype(out.indices.dtype), out.indptr),
+        shape=out.shape,
+    )
+    out.has_sorted_indices = False
+    return out
+
+
 class Multigrid:
     """Galerkin multigrid V-cycle, the preconditioner of :func:`gmres`.
 
     Coarse operators are ``P.T @ A @ P`` with bilinear ``P`` (an algebraic
     construction, so data rows need no special coarse treatment). The
-    smoother is multicolour Gauss-Seidel: nodes coloured by
-    ``(i mod m, j mod m)`` with ``m`` one more than the stencil's reach are
-    never coupled to a node of their own colour, so each colour is updated
-    at once with one vectorised sparse product. SuperLU on the coarsest
-    level. The cycle runs in float32: it only has to approximate the
-    inverse, and single precision halves the memory traffic.
+    smoother is multicolour Gauss-Seidel: every operator couples a node only
+    to nodes at most 2 rows and 2 columns away (the 13-point stencil on the
+    finest grid; a Galerkin product with bilinear ``P`` keeps that reach),
+    so nodes coloured by ``(i mod 3, j mod 3)`` are never coupled to a node
+    of their own colour and each colour is updated at once. Each level is
+    stored with its nodes sorted by colour, so a colour is a contiguous
+    slice (no gather or scatter). After the post-smoothing on the finest
+    grid, the four edge strips are solved exactly in turn (block
+    Gauss-Seidel), because the slowest errors of the plain cycle lie along
+    the edges beyond the outermost data. SuperLU on the coarsest level. The
+    cycle runs in float32: it only has to approximate the inverse, and
+    single precision halves the memory traffic.
 
     Examples
     --------
@@ -100,59 +137,83 @@ class Multigrid:
         coarsest: int = 4_000,
         sweeps: int = 2,
         is_cancelled: Cancelled = None,
+        edge_width: int = EDGE_STRIP_WIDTH,
     ) -> None:
         self.levels = []
         self.sweeps = sweeps
         self.n = a.shape[0]
         shape = (n_rows, n_cols)
+        order, starts, position = _colour_order(*shape)
+        self.order = order
+        self.strips = []
+        if edge_width > 0 and a.shape[0] > coarsest:
+            self.strips = self._edge_strips(a, position, n_rows, n_cols, edge_width)
         while a.shape[0] > coarsest and min(shape) > 5:
             check_cancel(is_cancelled)
             py = _prolongation_1d(shape[0])
             px = _prolongation_1d(shape[1])
             p = sp.kron(py, px, format="csr")
-            r = p.T.tocsr()
-            a32 = a.astype(np.float32)
-            self.levels.append((a32, p.astype(np.float32), r.astype(np.float32), self._colour_blocks(a32, shape)))
-            a = (r @ (a @ p)).tocsr()
-            shape = (py.shape[1], px.shape[1])
+            coarse_shape = (py.shape[1], px.shape[1])
+            coarse_order, coarse_starts, coarse_position = _colour_order(*coarse_shape)
+            a_sorted = _permuted(a, order, position)
+            p_sorted = _permuted(p, order, coarse_position)
+            blocks = []
+            diag = a_sorted.diagonal()
+            for c in range(9):
+                lo, hi = int(starts[c]), int(starts[c + 1])
+                if hi > lo:
+                    blocks.append((slice(lo, hi), a_sorted[lo:hi], (1.0 / diag[lo:hi]).astype(np.float32)))
+            del a_sorted  # the colour blocks hold every row: a @ x is their products joined
+            self.levels.append((p_sorted, p_sorted.T.tocsr(), blocks))
+            # (R A) P: R A has a quarter of A's rows, so the intermediate is small.
+            a = ((p.T.tocsr() @ a) @ p).tocsr()
+            shape, order, starts, position = coarse_shape, coarse_order, coarse_starts, coarse_position
         check_cancel(is_cancelled)
+        self.coarse_order = order
         self.coarse = spla.splu(a.tocsc(), permc_spec="COLAMD")
 
     @staticmethod
-    def _colour_blocks(a: sp.csr_matrix, shape: tuple[int, int]) -> list:
-        nx = shape[1]
-        rows = np.repeat(np.arange(a.shape[0]), np.diff(a.indptr))
-        cols = a.indices
-        reach = int(max(np.abs(rows // nx - cols // nx).max(), np.abs(rows % nx - cols % nx).max()))
-        m = reach + 1
-        i, j = np.divmod(np.arange(a.shape[0]), nx)
-        colour = (i % m) * m + (j % m)
-        diag = a.diagonal()
-        blocks = []
-        for c in range(m * m):
-            idx = np.flatnonzero(colour == c)
-            if idx.size:
-                blocks.append((idx, a[idx], (1.0 / diag[idx]).astype(np.float32)))
-        return blocks
+    def _edge_strips(a: sp.csr_matrix, position: np.ndarray, n_rows: int, n_cols: int, width: int) -> list:
+        """LU factors of the four edge strips of the finest grid, in colour order."""
+        i, j = np.divmod(np.arange(a.shape[0]), n_cols)
+        strips = []
+        for mask in (i < width, i >= n_rows - width, j < width, j >= n_cols - width):
+            idx = np.flatnonzero(mask)
+            rows = a[idx]
+            lu = spla.splu(rows[:, idx].tocsc(), permc_spec="COLAMD")
+            strips.append((position[idx], _permuted(rows, np.arange(idx.size), position), lu))
+        return strips
 
     def _smooth(self, blocks: list, x: np.ndarray, b: np.ndarray, reverse: bool) -> np.ndarray:
         order = blocks[::-1] if reverse else blocks
         for _ in range(self.sweeps):
-            for idx, rows, inv_diag in order:
-                x[idx] += inv_diag * (b[idx] - rows @ x)
+            for part, rows, inv_diag in order:
+                x[part] += inv_diag * (b[part] - rows @ x)
         return x
 
     def _cycle(self, level: int, b: np.ndarray) -> np.ndarray:
         if level == len(self.levels):
-            return self.coarse.solve(b.astype(np.float64)).astype(np.float32)
-        a, p, r, blocks = self.levels[level]
+            natural = np.empty(b.size)
+            natural[self.coarse_order] = b
+            return self.coarse.solve(natural)[self.coarse_order].astype(np.float32)
+        p, r, blocks = self.levels[level]
         x = self._smooth(blocks, np.zeros_like(b), b, reverse=False)
-        x += p @ self._cycle(level + 1, r @ (b - a @ x))
-        return self._smooth(blocks, x, b, reverse=True)
+        residual = b - np.concatenate([rows @ x for _, rows, _ in blocks])
+        x += p @ self._cycle(level + 1, r @ residual)
+        x = self._smooth(blocks, x, b, reverse=True)
+        if level == 0:
+            for idx, rows, lu in self.strips:
+                x[idx] += lu.solve((b[idx] - rows @ x).astype(np.float64)).astype(np.float32)
+        return x
 
     def apply(self, b: np.ndarray) -> np.ndarray:
         """One V-cycle: an approximation of ``A^{-1} b`` (float64 out)."""
-        return self._cycle(0, np.ravel(b).astype(np.float32)).astype(np.float64)
+        b = np.ravel(b)
+        if not self.levels:
+            return self.coarse.solve(b.astype(np.float64))
+        x = np.empty(self.n)
+        x[self.order] = self._cycle(0, b[self.order].astype(np.float32))
+        return x
 
 
 def gmres(
@@ -170,9 +231,10 @@ def gmres(
 
     Solves ``a @ x = b`` for ``x = M y``, ``M`` the preconditioner, so the
     residual it monitors is the true one, :math:`\\|b - Ax\\|`. Arnoldi
-    with classical Gram-Schmidt applied twice (one matrix product per pass,
-    as stable as modified Gram-Schmidt; Giraud et al. 2005), Givens
-    rotations for the small least-squares problem.
+    with classical Gram-Schmidt (one matrix product per pass), repeated
+    once when the pass cancelled much of the vector (the "twice is enough"
+    test; Parlett 1980, Giraud et al. 2005), Givens rotations for the small
+    least-squares problem.
 
     Parameters
     ----------
@@ -200,6 +262,9 @@ def gmres(
     Saad, Y., & Schultz, M. H. (1986). GMRES: a generalized minimal residual
     algorithm for solving nonsymmetric linear systems. SIAM J. Sci. Stat.
     Comput., 7(3), 856-869.
+
+    Parlett, B. N. (1980). The Symmetric Eigenvalue Problem. Prentice-Hall,
+    section 6-9.
 
     Giraud, L., Langou, J., & Rozloznik, M. (2005). The loss of orthogonality
     in the Gram-Schmidt orthogonalization process. Computers & Mathematics
@@ -234,11 +299,15 @@ def gmres(
         while k < restart and iterations < max_iterations:
             check_cancel(is_cancelled)
             w = a @ precondition(basis[k])
+            norm_w = float(np.linalg.norm(w))
             for _ in range(2):
                 coeffs = basis[: k + 1] @ w
                 w -= coeffs @ basis[: k + 1]
                 h[: k + 1, k] += coeffs
-            h[k + 1, k] = norm_w = float(np.linalg.norm(w))
+                previous, norm_w = norm_w, float(np.linalg.norm(w))
+                if norm_w > 0.7 * previous:
+                    break  # "twice is enough" test of Kahan and Parlett (Parlett 1980)
+            h[k + 1, k] = norm_w
             if norm_w > 0:
                 basis[k + 1] = w / norm_w
             for i in range(k):
