@@ -262,8 +262,7 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
         # Distances are in the layer's units (metres for most projected CRSs).
         units = QgsUnitTypes.toAbbreviatedString(crs.mapUnits())
 
-        if feedback.isCanceled():
-            return {}
+        self._stop_if_cancelled(feedback)
         steps.setCurrentStep(1)
         with warnings.catch_warnings(record=True) as caught:
             warnings.simplefilter("always")
@@ -275,7 +274,16 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
                     )
                 )
                 surface = np.asarray(
-                    gridding.minimum_curvature(x, y, v, geometry, tension=tension), dtype=float
+                    gridding.minimum_curvature(
+                        x,
+                        y,
+                        v,
+                        geometry,
+                        tension=tension,
+                        progress=lambda fraction: steps.setProgress(100.0 * fraction),
+                        is_cancelled=feedback.isCanceled,
+                    ),
+                    dtype=float,
                 )
                 if blank is None:
                     blank = BLANK_SPACINGS * gridding.station_spacing(x, y)
@@ -285,14 +293,15 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
                 if blank > 0:
                     far = gridding.blank_far_cells(geometry, x, y, blank)
                     surface[far] = np.nan
+            except gridding.GriddingCancelled as error:
+                raise QgsProcessingException(self.tr("Cancelled by the user.")) from error
             except ValueError as error:
                 raise QgsProcessingException(
                     self.tr("The stations cannot be gridded: {}").format(error)
                 ) from error
         for warning in caught:
             feedback.pushWarning(str(warning.message))
-        if feedback.isCanceled():
-            return {}
+        self._stop_if_cancelled(feedback)
 
         valid = np.isfinite(surface)
         if not valid.any():
@@ -301,20 +310,34 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
             )
         steps.setCurrentStep(2)
         output_path = self.parameterAsOutputLayer(parameters, self.OUTPUT, context)
-        _write_raster(output_path, surface, geometry, crs.toWkt(), field_name)
-        steps.setProgress(100)
-        vmin, vmax = float(np.nanmin(surface)), float(np.nanmax(surface))
-        feedback.pushInfo(
-            self.tr("{} stations gridded; {} of {} cells have a value, from {:.3f} to {:.3f} mGal.").format(
-                int(usable.sum()), int(valid.sum()), valid.size, vmin, vmax
+        written = [output_path]
+        try:
+            _write_raster(output_path, surface, geometry, crs.toWkt(), field_name)
+            steps.setProgress(100)
+            vmin, vmax = float(np.nanmin(surface)), float(np.nanmax(surface))
+            feedback.pushInfo(
+                self.tr("{} stations gridded; {} of {} cells have a value, from {:.3f} to {:.3f} mGal.").format(
+                    int(usable.sum()), int(valid.sum()), valid.size, vmin, vmax
+                )
             )
-        )
-        results = {
-            self.OUTPUT: output_path,
-            self.STATIONS_GRIDDED: int(usable.sum()),
-            self.CELL_SIZE_USED: float(geometry.cell_size),
-            self.BLANK_DISTANCE_USED: float(blank),
-        }
+            results = {
+                self.OUTPUT: output_path,
+                self.STATIONS_GRIDDED: int(usable.sum()),
+                self.CELL_SIZE_USED: float(geometry.cell_size),
+                self.BLANK_DISTANCE_USED: float(blank),
+            }
+            if want_contours:
+                steps.setCurrentStep(3)
+                written.append(self.parameterAsOutputLayer(parameters, self.CONTOURS, context))
+                results.update(
+                    self._write_contours(parameters, context, feedback, surface, geometry, crs, field_name, vmin, vmax)
+                )
+                steps.setProgress(100)
+            self._stop_if_cancelled(feedback)
+        except BaseException:
+            # Cancel or failure after the first file was opened: leave no output behind.
+            _remove_outputs(written)
+            raise
         layer_title = self.tr("Anomaly {} (mGal)").format(field_name)
         abstract = self.tr(
             "Anomaly field {} of {} stations, gridded by minimum curvature with tension {} on "
@@ -322,41 +345,75 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
             "(0 = no blanking)."
         ).format(field_name, int(usable.sum()), tension, geometry.cell_size, units, blank, units)
         attach_raster_style(context, output_path, layer_title, abstract)
-
-        if want_contours:
-            steps.setCurrentStep(3)
-            interval = self._optional_double(parameters, self.CONTOUR_INTERVAL, context)
-            if (interval is None or interval <= 0) and vmax > vmin:
-                interval = float(gridding.nice_contour_interval(vmin, vmax))
-            elif interval is None or interval <= 0:
-                # A flat surface has no contours; any interval gives none.
-                feedback.pushWarning(self.tr("The surface is flat ({} mGal): no contours.").format(vmin))
-                interval = 1.0
-            results[self.INTERVAL_USED] = interval
-            fields = QgsFields()
-            fields.append(QgsField("value", QVariant.Double))
-            sink, contour_id = self.parameterAsSink(
-                parameters, self.CONTOURS, context, fields, QgsWkbTypes.LineString, crs
+        if self.CONTOURS in results:
+            attach_contour_style(
+                context,
+                results[self.CONTOURS],
+                self.tr("Contours {} ({:g} mGal)").format(field_name, results[self.INTERVAL_USED]),
             )
-            if sink is not None:
-                count = 0
-                for level, wkb in _contour_lines(surface, geometry, interval):
-                    if feedback.isCanceled():
-                        break
-                    feature = QgsFeature(fields)
-                    geometry_out = QgsGeometry()
-                    geometry_out.fromWkb(wkb)
-                    feature.setGeometry(geometry_out)
-                    feature.setAttributes([level])
-                    sink.addFeature(feature, QgsFeatureSink.FastInsert)
-                    count += 1
-                feedback.pushInfo(self.tr("{} contour lines every {:g} mGal.").format(count, interval))
-                results[self.CONTOURS] = contour_id
-                attach_contour_style(
-                    context, contour_id, self.tr("Contours {} ({:g} mGal)").format(field_name, interval)
-                )
-            steps.setProgress(100)
         return results
+
+    def _stop_if_cancelled(self, feedback) -> None:
+        if feedback.isCanceled():
+            raise QgsProcessingException(self.tr("Cancelled by the user."))
+
+    def _write_contours(self, parameters, context, feedback, surface, geometry, crs, field_name, vmin, vmax):
+        """Write the contour lines; results ``CONTOURS`` and ``INTERVAL_USED``."""
+        from ...algorithms.gridding import nice_contour_interval
+
+        results = {}
+        interval = self._optional_double(parameters, self.CONTOUR_INTERVAL, context)
+        if (interval is None or interval <= 0) and vmax > vmin:
+            interval = float(nice_contour_interval(vmin, vmax))
+        elif interval is None or interval <= 0:
+            # A flat surface has no contours; any interval gives none.
+            feedback.pushWarning(self.tr("The surface is flat ({} mGal): no contours.").format(vmin))
+            interval = 1.0
+        results[self.INTERVAL_USED] = interval
+        fields = QgsFields()
+        fields.append(QgsField("value", QVariant.Double))
+        sink, contour_id = self.parameterAsSink(
+            parameters, self.CONTOURS, context, fields, QgsWkbTypes.LineString, crs
+        )
+        if sink is None:
+            return results
+        try:
+            count = 0
+            for level, wkb in _contour_lines(surface, geometry, interval, feedback.isCanceled):
+                self._stop_if_cancelled(feedback)
+                feature = QgsFeature(fields)
+                geometry_out = QgsGeometry()
+                geometry_out.fromWkb(wkb)
+                feature.setGeometry(geometry_out)
+                feature.setAttributes([level])
+                sink.addFeature(feature, QgsFeatureSink.FastInsert)
+                count += 1
+            self._stop_if_cancelled(feedback)
+        finally:
+            # Closes the file, so that a cancelled run can remove it.
+            del sink
+        feedback.pushInfo(self.tr("{} contour lines every {:g} mGal.").format(count, interval))
+        results[self.CONTOURS] = contour_id
+        return results
+
+
+def _remove_outputs(paths) -> None:
+    """Delete the files of outputs written by a run that did not finish.
+
+    Memory layers and other non-file destinations are left to QGIS; GDAL's
+    and SQLite's side files (``.aux.xml``, ``-wal``, ``-shm``, ``-journal``)
+    go with their file.
+    """
+    for destination in paths:
+        if not destination:
+            continue
+        path = Path(str(destination).split("|", 1)[0])
+        for candidate in (path, *(Path(str(path) + suffix) for suffix in (".aux.xml", "-wal", "-shm", "-journal"))):
+            try:
+                if candidate.is_file():
+                    candidate.unlink()
+            except OSError:
+                pass
 
 
 def _driver_for(path: str) -> str:
@@ -390,8 +447,12 @@ def _write_raster(path: str, surface: np.ndarray, geometry, crs_wkt: str, field_
     memory = None
 
 
-def _contour_lines(surface: np.ndarray, geometry, interval: float):
-    """Yield ``(level, wkb)`` for every contour line of the surface (GDAL's contour generator)."""
+def _contour_lines(surface: np.ndarray, geometry, interval: float, is_cancelled=None):
+    """Yield ``(level, wkb)`` for every contour line of the surface (GDAL's contour generator).
+
+    ``is_cancelled()`` is polled by GDAL while it traces; True stops it, and
+    nothing more is yielded (the caller checks for the cancel itself).
+    """
     rows, cols = surface.shape
     raster = gdal.GetDriverByName("MEM").Create("", cols, rows, 1, gdal.GDT_Float64)
     raster.SetGeoTransform(geometry.geotransform)
@@ -404,7 +465,15 @@ def _contour_lines(surface: np.ndarray, geometry, interval: float):
     layer.CreateField(ogr.FieldDefn("value", ogr.OFTReal))
     # Base 0: levels are whole multiples of the interval, so maps of
     # neighbouring surveys share contour values.
-    gdal.ContourGenerate(band, interval, 0.0, [], 1, NODATA, layer, 0, 1)
+    def keep_going(_complete, _message, _data):
+        return 0 if is_cancelled is not None and is_cancelled() else 1
+
+    try:
+        gdal.ContourGenerate(band, interval, 0.0, [], 1, NODATA, layer, 0, 1, callback=keep_going)
+    except RuntimeError:
+        if is_cancelled is not None and is_cancelled():
+            return
+        raise
     decimals = max(0, -math.floor(math.log10(interval)) + 3)
     for feature in layer:
         geometry_ref = feature.GetGeometryRef()
