@@ -147,16 +147,20 @@ class Multigrid:
         self.order = order
         self.strips = []
         if edge_width > 0 and a.shape[0] > coarsest:
-            self.strips = self._edge_strips(a, position, n_rows, n_cols, edge_width)
+            self.strips = self._edge_strips(a, position, n_rows, n_cols, edge_width, is_cancelled)
+        check_cancel(is_cancelled)
+        # Coarse operators in float32 too: half the memory traffic of the
+        # Galerkin products; the coarsest level is factorised in float64.
+        a = a.astype(np.float32)
         while a.shape[0] > coarsest and min(shape) > 5:
-            check_cancel(is_cancelled)
             py = _prolongation_1d(shape[0])
             px = _prolongation_1d(shape[1])
-            p = sp.kron(py, px, format="csr")
+            p = sp.kron(py, px, format="csr").astype(np.float32)
             coarse_shape = (py.shape[1], px.shape[1])
             coarse_order, coarse_starts, coarse_position = _colour_order(*coarse_shape)
             a_sorted = _permuted(a, order, position)
             p_sorted = _permuted(p, order, coarse_position)
+            check_cancel(is_cancelled)
             blocks = []
             diag = a_sorted.diagonal()
             for c in range(9):
@@ -165,19 +169,27 @@ class Multigrid:
                     blocks.append((slice(lo, hi), a_sorted[lo:hi], (1.0 / diag[lo:hi]).astype(np.float32)))
             del a_sorted  # the colour blocks hold every row: a @ x is their products joined
             self.levels.append((p_sorted, p_sorted.T.tocsr(), blocks))
+            check_cancel(is_cancelled)
             # (R A) P: R A has a quarter of A's rows, so the intermediate is small.
-            a = ((p.T.tocsr() @ a) @ p).tocsr()
+            ra = p.T.tocsr() @ a
+            check_cancel(is_cancelled)
+            a = (ra @ p).tocsr()
+            del ra
+            check_cancel(is_cancelled)
             shape, order, starts, position = coarse_shape, coarse_order, coarse_starts, coarse_position
         check_cancel(is_cancelled)
         self.coarse_order = order
-        self.coarse = spla.splu(a.tocsc(), permc_spec="COLAMD")
+        self.coarse = spla.splu(a.astype(np.float64).tocsc(), permc_spec="COLAMD")
 
     @staticmethod
-    def _edge_strips(a: sp.csr_matrix, position: np.ndarray, n_rows: int, n_cols: int, width: int) -> list:
+    def _edge_strips(
+        a: sp.csr_matrix, position: np.ndarray, n_rows: int, n_cols: int, width: int, is_cancelled: Cancelled
+    ) -> list:
         """LU factors of the four edge strips of the finest grid, in colour order."""
         i, j = np.divmod(np.arange(a.shape[0]), n_cols)
         strips = []
         for mask in (i < width, i >= n_rows - width, j < width, j >= n_cols - width):
+            check_cancel(is_cancelled)
             idx = np.flatnonzero(mask)
             rows = a[idx]
             lu = spla.splu(rows[:, idx].tocsc(), permc_spec="COLAMD")
