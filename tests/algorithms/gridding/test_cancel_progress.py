@@ -49,17 +49,32 @@ def test_progress_reported_during_the_solve(survey):
 
 def test_cancel_in_the_middle_of_the_iterations(survey):
     x, y, v = survey
-    # Count the polls of a full run, then cancel half-way through them.
+    # Count the polls of a full run, then cancel three polls before its end:
+    # the last polls are the GMRES iterations (one each).
     counter = CancelAfter(10**9)
-    minimum_curvature(x, y, v, GRID, tension=0.25, is_cancelled=counter)
-    total = counter.calls
-    assert total > 8  # assembly, multigrid set-up (per level) and every iteration
     fractions = []
-    cancel = CancelAfter(total // 2 + 2)
+    minimum_curvature(x, y, v, GRID, tension=0.25, progress=fractions.append, is_cancelled=counter)
+    total, iterations = counter.calls, len(fractions) - 1
+    assert total > iterations > 5  # set-up steps, then one poll per iteration
+    fractions = []
+    cancel = CancelAfter(total - 3)
     with pytest.raises(GriddingCancelled, match="Gridding cancelled"):
         minimum_curvature(x, y, v, GRID, tension=0.25, progress=fractions.append, is_cancelled=cancel)
-    assert cancel.calls == total // 2 + 2  # stopped at the first True
-    assert fractions and 0.0 < fractions[-1] < 1.0  # inside the iterations, not before or after
+    assert cancel.calls == total - 3  # stopped at the first True
+    # The poll that cancels opens iteration (iterations - 3); the ones before it reported.
+    assert len(fractions) == iterations - 4  # inside the iterations, not before or after
+    assert 0.0 < fractions[-1] < 1.0
+
+
+def test_cancel_flag_raised_by_the_progress_callback(survey):
+    # As a user interface does it: the cancel arrives while progress is shown.
+    x, y, v = survey
+    fractions = []
+    with pytest.raises(GriddingCancelled):
+        minimum_curvature(
+            x, y, v, GRID, tension=0.25, progress=fractions.append, is_cancelled=lambda: len(fractions) >= 2
+        )
+    assert len(fractions) == 2 and fractions[-1] < 1.0
 
 
 def test_cancel_before_the_solve_small_grid():
