@@ -60,7 +60,12 @@ def _solve(
         msg = f"Unknown solver {method!r}: expected 'auto', 'direct' or 'multigrid'."
         raise ValueError(msg)
     mg = Multigrid(a, n_rows, n_cols, is_cancelled=is_cancelled)
-    solution, residual = gmres(a, rhs, mg.apply, progress=progress, is_cancelled=is_cancelled)
+    # Solved in the multigrid's colour order (no permutation per iteration).
+    sorted_solution, residual = gmres(
+        mg.sorted_matrix, rhs[mg.order], mg.apply_sorted, progress=progress, is_cancelled=is_cancelled
+    )
+    solution = np.empty_like(sorted_solution)
+    solution[mg.order] = sorted_solution
     if residual > 100 * ITERATIVE_RTOL:
         msg = (
             f"Minimum curvature: the iterative solver stopped at relative residual "

@@ -91,11 +91,13 @@ def _colour_order(n_rows: int, n_cols: int) -> tuple[np.ndarray, np.ndarray]:
     return order, starts, position
 
 
-def _permuted(m: sp.csr_matrix, row_order: np.ndarray, column_position: np.ndarray) -> sp.csr_matrix:
-    """``m[row_order][:, column_order]`` in float32 (column indices left unsorted)."""
+def _permuted(
+    m: sp.csr_matrix, row_order: np.ndarray, column_position: np.ndarray, dtype: type = np.float32
+) -> sp.csr_matrix:
+    """``m[row_order][:, column_order]`` (column indices left unsorted)."""
     out = m[row_order]
     indices = column_position.astype(np.int32, copy=False)[out.indices]
-    out = sp.csr_matrix((out.data.astype(np.float32, copy=False), indices, out.indptr), shape=out.shape)
+    out = sp.csr_matrix((out.data.astype(dtype, copy=False), indices, out.indptr), shape=out.shape)
     out.has_sorted_indices = False
     return out
 
@@ -183,36 +185,40 @@ class Multigrid:
         if edge_width > 0 and a.shape[0] > coarsest:
             self.strips = self._edge_strips(a, position, n_rows, n_cols, edge_width, is_cancelled)
         check_cancel(is_cancelled)
-        # Coarse operators in float32 too: half the memory traffic of the
-        # Galerkin products; the coarsest level is factorised in float64.
-        a = a.astype(np.float32)
+        #: The system in colour order (float64): the caller's GMRES works on it,
+        #: so no vector is permuted inside the iterations.
+        self.sorted_matrix = _permuted(a, order, position, dtype=np.float64)
+        check_cancel(is_cancelled)
+        # Operators of the cycle in float32: half the memory traffic; the
+        # coarsest level is factorised in float64. Every level is kept in its
+        # own colour order: P's rows follow the fine order and its columns
+        # the coarse one, so R A P comes out in the coarse colour order.
+        a = self.sorted_matrix.astype(np.float32)
         while a.shape[0] > coarsest and min(shape) > 5:
             check_cancel(is_cancelled)
             coarse_shape = (_prolongation_1d(shape[0]).shape[1], _prolongation_1d(shape[1]).shape[1])
-            coarse_order, coarse_starts, coarse_position = _colour_order(*coarse_shape)
-            a_sorted = _permuted(a, order, position)
-            check_cancel(is_cancelled)
-            p = _prolongation(shape, np.arange(a.shape[0]))
-            p_sorted = _prolongation(shape, order, coarse_position)
-            check_cancel(is_cancelled)
+            coarse_order, coarse_starts, _ = _colour_order(*coarse_shape)
+            coarse_position = np.empty_like(coarse_order)
+            coarse_position[coarse_order] = np.arange(coarse_order.size)
+            p = _prolongation(shape, order, coarse_position)
+            r = p.T.tocsr()
             blocks = []
-            diag = a_sorted.diagonal()
+            diag = a.diagonal()
             for c in range(9):
                 lo, hi = int(starts[c]), int(starts[c + 1])
                 if hi > lo:
-                    blocks.append((slice(lo, hi), a_sorted[lo:hi], (1.0 / diag[lo:hi]).astype(np.float32)))
-            del a_sorted  # the colour blocks hold every row: a @ x is their products joined
-            self.levels.append((p_sorted, p_sorted.T.tocsr(), blocks))
+                    blocks.append((slice(lo, hi), a[lo:hi], (1.0 / diag[lo:hi]).astype(np.float32)))
+            self.levels.append((p, r, blocks))
             check_cancel(is_cancelled)
             # (R A) P: R A has a quarter of A's rows, so the intermediate is small.
-            ra = p.T.tocsr() @ a
+            ra = r @ a
+            del a  # the colour blocks hold every row: a @ x is their products joined
             check_cancel(is_cancelled)
             a = (ra @ p).tocsr()
             del ra
             check_cancel(is_cancelled)
-            shape, order, starts, position = coarse_shape, coarse_order, coarse_starts, coarse_position
+            shape, order, starts = coarse_shape, coarse_order, coarse_starts
         check_cancel(is_cancelled)
-        self.coarse_order = order
         self.coarse = spla.splu(a.astype(np.float64).tocsc(), permc_spec="COLAMD")
 
     @staticmethod
@@ -239,9 +245,7 @@ class Multigrid:
 
     def _cycle(self, level: int, b: np.ndarray) -> np.ndarray:
         if level == len(self.levels):
-            natural = np.empty(b.size)
-            natural[self.coarse_order] = b
-            return self.coarse.solve(natural)[self.coarse_order].astype(np.float32)
+            return self.coarse.solve(b.astype(np.float64)).astype(np.float32)
         p, r, blocks = self.levels[level]
         x = self._smooth(blocks, np.zeros_like(b), b, reverse=False)
         residual = b - np.concatenate([rows @ x for _, rows, _ in blocks])
@@ -252,13 +256,14 @@ class Multigrid:
                 x[idx] += lu.solve((b[idx] - rows @ x).astype(np.float64)).astype(np.float32)
         return x
 
+    def apply_sorted(self, b: np.ndarray) -> np.ndarray:
+        """One V-cycle on a vector in colour order: ``sorted_matrix^{-1} b`` approximately."""
+        return self._cycle(0, np.asarray(b, dtype=np.float32)).astype(np.float64)
+
     def apply(self, b: np.ndarray) -> np.ndarray:
-        """One V-cycle: an approximation of ``A^{-1} b`` (float64 out)."""
-        b = np.ravel(b)
-        if not self.levels:
-            return self.coarse.solve(b.astype(np.float64))
+        """One V-cycle: an approximation of ``A^{-1} b`` (natural order, float64 out)."""
         x = np.empty(self.n)
-        x[self.order] = self._cycle(0, b[self.order].astype(np.float32))
+        x[self.order] = self.apply_sorted(np.ravel(b)[self.order])
         return x
 
 
