@@ -55,7 +55,10 @@ def _solve(
         # One call to SuperLU; small grids only (under a second), so the
         # cancel check before it is enough.
         check_cancel(is_cancelled)
-        return spla.spsolve(a.tocsc(), rhs, permc_spec="COLAMD")
+        solution = spla.spsolve(a.tocsc(), rhs, permc_spec="COLAMD")
+        if progress is not None:
+            progress(1.0)
+        return solution
     if method != "multigrid":
         msg = f"Unknown solver {method!r}: expected 'auto', 'direct' or 'multigrid'."
         raise ValueError(msg)
@@ -253,7 +256,5 @@ def minimum_curvature(
     check_cancel(is_cancelled)
     solution = _solve(a, rhs, geometry.n_rows, geometry.n_cols, solver, progress, is_cancelled)
     solution = solution.reshape(geometry.shape)
-    if progress is not None:
-        progress(1.0)
     rows, cols = np.indices(geometry.shape)
     return solution + plane[0] + plane[1] * cols + plane[2] * rows
