@@ -13,7 +13,6 @@ from dataclasses import replace
 
 import numpy as np
 import numpy.typing as npt
-import scipy.sparse as sp
 import scipy.sparse.linalg as spla
 
 from ._geometry import GridGeometry, clean_stations, default_cell_size
@@ -40,15 +39,27 @@ def _check_tension(tension: float, name: str = "tension") -> float:
 
 
 def _solve(
-    a: sp.csr_matrix,
-    rhs: np.ndarray,
+    cells: CellData,
     n_rows: int,
     n_cols: int,
+    tension: float,
+    boundary_tension: float,
+    cell_per_length: float,
     method: str,
     progress: Progress = None,
     is_cancelled: Cancelled = None,
 ) -> np.ndarray:
-    """Solve ``a @ u = rhs`` directly or by multigrid-preconditioned GMRES."""
+    """Assemble ``a @ u = rhs`` and solve it directly or by multigrid-preconditioned GMRES.
+
+    Assembled here so that the matrix in grid order can be released once
+    the multigrid holds its colour-ordered copy (0.16 GB at 10^6 nodes).
+    """
+    if method not in ("auto", "direct", "multigrid"):
+        msg = f"Unknown solver {method!r}: expected 'auto', 'direct' or 'multigrid'."
+        raise ValueError(msg)
+    check_cancel(is_cancelled)
+    a, rhs = assemble_system(cells, n_rows, n_cols, tension, boundary_tension, cell_per_length)
+    check_cancel(is_cancelled)
     if method == "auto":
         method = "direct" if a.shape[0] <= DIRECT_SOLVE_MAX_NODES else "multigrid"
     if method == "direct":
@@ -59,10 +70,8 @@ def _solve(
         if progress is not None:
             progress(1.0)
         return solution
-    if method != "multigrid":
-        msg = f"Unknown solver {method!r}: expected 'auto', 'direct' or 'multigrid'."
-        raise ValueError(msg)
     mg = Multigrid(a, n_rows, n_cols, is_cancelled=is_cancelled)
+    del a
     # Solved in the multigrid's colour order (no permutation per iteration).
     sorted_solution, residual = gmres(
         mg.sorted_matrix, rhs[mg.order], mg.apply_sorted, progress=progress, is_cancelled=is_cancelled
@@ -71,7 +80,7 @@ def _solve(
     solution[mg.order] = sorted_solution
     if residual > 100 * ITERATIVE_RTOL:
         msg = (
-            f"Minimum curvature: the iterative solver stopped at relative residual "
+            f"Minimum curvature: the iterative solver stopped at relative preconditioned residual "
             f"{residual:.1e} (target {ITERATIVE_RTOL:.0e}); try solver='direct' on a "
             "smaller grid, or a tension below 1."
         )
@@ -244,17 +253,16 @@ def minimum_curvature(
         msg = f"Invalid length_scale {length_scale!r}: expected a finite number > 0."
         raise ValueError(msg)
     cells, plane = _detrend(cells, geometry.n_cols)
-    check_cancel(is_cancelled)
-    a, rhs = assemble_system(
+    solution = _solve(
         cells,
         geometry.n_rows,
         geometry.n_cols,
         tension,
         boundary_tension,
-        cell_per_length=geometry.cell_size / length_scale,
-    )
-    check_cancel(is_cancelled)
-    solution = _solve(a, rhs, geometry.n_rows, geometry.n_cols, solver, progress, is_cancelled)
-    solution = solution.reshape(geometry.shape)
+        geometry.cell_size / length_scale,
+        solver,
+        progress,
+        is_cancelled,
+    ).reshape(geometry.shape)
     rows, cols = np.indices(geometry.shape)
     return solution + plane[0] + plane[1] * cols + plane[2] * rows

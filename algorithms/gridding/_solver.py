@@ -204,22 +204,27 @@ class Multigrid:
         while a.shape[0] > coarsest and min(shape) > 5:
             check_cancel(is_cancelled)
             coarse_shape = (_prolongation_1d(shape[0]).shape[1], _prolongation_1d(shape[1]).shape[1])
-            coarse_order, coarse_starts, _ = _colour_order(*coarse_shape)
-            coarse_position = np.empty_like(coarse_order)
-            coarse_position[coarse_order] = np.arange(coarse_order.size)
+            coarse_order, coarse_starts, coarse_position = _colour_order(*coarse_shape)
             p = _prolongation(shape, order, coarse_position)
             r = p.T.tocsr()
+            # (R A) P: R A has a quarter of A's rows, so the intermediate is small.
+            ra = r @ a
+            check_cancel(is_cancelled)
             blocks = []
             diag = a.diagonal()
             for c in range(9):
                 lo, hi = int(starts[c]), int(starts[c + 1])
                 if hi > lo:
-                    blocks.append((slice(lo, hi), a[lo:hi], (1.0 / diag[lo:hi]).astype(np.float32)))
+                    # Rows lo:hi as views of a's arrays: no copy, and a @ x is
+                    # the blocks' products joined, so a itself is not kept.
+                    first, last = a.indptr[lo], a.indptr[hi]
+                    rows = sp.csr_matrix(
+                        (a.data[first:last], a.indices[first:last], a.indptr[lo : hi + 1] - first),
+                        shape=(hi - lo, a.shape[1]),
+                    )
+                    blocks.append((slice(lo, hi), rows, (1.0 / diag[lo:hi]).astype(np.float32)))
             self.levels.append((p, r, blocks))
-            check_cancel(is_cancelled)
-            # (R A) P: R A has a quarter of A's rows, so the intermediate is small.
-            ra = r @ a
-            del a  # the colour blocks hold every row: a @ x is their products joined
+            del a
             check_cancel(is_cancelled)
             a = (ra @ p).tocsr()
             del ra
@@ -323,7 +328,7 @@ def gmres(
     -------
     x : numpy.ndarray
     relative_residual : float
-        Of the plain residual, :math:`\\|b - Ax\\| / \\|b\\|`.
+        The stopping quantity reached, :math:`\\|M(b - Ax)\\| / \\|Mb\\|`.
 
     References
     ----------
@@ -402,4 +407,4 @@ def gmres(
         if beta <= target or iterations >= max_iterations:
             if progress is not None:
                 progress(1.0)
-            return x, float(np.linalg.norm(residual)) / norm_b
+            return x, beta / norm_mb
