@@ -181,6 +181,7 @@ class Multigrid:
         sweeps: int = 2,
         is_cancelled: Cancelled = None,
         edge_width: int = EDGE_STRIP_WIDTH,
+        colour_ordered: bool = False,
     ) -> None:
         self.levels = []
         self.sweeps = sweeps
@@ -188,13 +189,16 @@ class Multigrid:
         shape = (n_rows, n_cols)
         order, starts, position = _colour_order(*shape)
         self.order = order
-        self.strips = []
-        if edge_width > 0 and a.shape[0] > coarsest:
-            self.strips = self._edge_strips(a, position, n_rows, n_cols, edge_width, is_cancelled)
-        check_cancel(is_cancelled)
         #: The system in colour order (float64): the caller's GMRES works on it,
-        #: so no vector is permuted inside the iterations.
-        self.sorted_matrix = _permuted(a, order, position, dtype=np.float64)
+        #: so no vector is permuted inside the iterations. ``colour_ordered``
+        #: says the caller assembled it so (``assemble_system(order=...)``),
+        #: which spares a permutation of the whole matrix.
+        self.sorted_matrix = a if colour_ordered else _permuted(a, order, position, dtype=np.float64)
+        del a
+        check_cancel(is_cancelled)
+        self.strips = []
+        if edge_width > 0 and self.n > coarsest:
+            self.strips = self._edge_strips(self.sorted_matrix, position, n_rows, n_cols, edge_width, is_cancelled)
         check_cancel(is_cancelled)
         # Operators of the cycle in float32: half the memory traffic; the
         # coarsest level is factorised in float64. Every level is kept in its
@@ -207,6 +211,7 @@ class Multigrid:
             coarse_order, coarse_starts, coarse_position = _colour_order(*coarse_shape)
             p = _prolongation(shape, order, coarse_position)
             r = p.T.tocsr()
+            check_cancel(is_cancelled)
             # (R A) P: R A has a quarter of A's rows, so the intermediate is small.
             ra = r @ a
             check_cancel(is_cancelled)
@@ -240,15 +245,15 @@ class Multigrid:
     def _edge_strips(
         a: sp.csr_matrix, position: np.ndarray, n_rows: int, n_cols: int, width: int, is_cancelled: Cancelled
     ) -> list:
-        """LU factors of the four edge strips of the finest grid, in colour order."""
+        """LU factors of the four edge strips of the finest grid (``a`` in colour order)."""
         i, j = np.divmod(np.arange(a.shape[0]), n_cols)
         strips = []
         for mask in (i < width, i >= n_rows - width, j < width, j >= n_cols - width):
             check_cancel(is_cancelled)
-            idx = np.flatnonzero(mask)
-            rows = a[idx]
-            lu = spla.splu(rows[:, idx].tocsc(), permc_spec="COLAMD")
-            strips.append((position[idx], _permuted(rows, np.arange(idx.size), position), lu))
+            places = position[np.flatnonzero(mask)]
+            rows = a[places]
+            lu = spla.splu(rows[:, places].tocsc(), permc_spec="COLAMD")
+            strips.append((places, rows.astype(np.float32), lu))
         return strips
 
     def _smooth(self, blocks: list, x: np.ndarray, b: np.ndarray, reverse: bool) -> np.ndarray:

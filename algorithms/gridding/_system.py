@@ -192,6 +192,7 @@ def assemble_system(
     tension: float,
     boundary_tension: float = 0.0,
     cell_per_length: float = 1.0,
+    order: np.ndarray | None = None,
 ) -> tuple[sp.csr_matrix, np.ndarray]:
     """Sparse system ``A u = b`` of the tensioned minimum-curvature surface.
 
@@ -207,6 +208,10 @@ def assemble_system(
         Edge tension :math:`T_b` in [0, 1].
     cell_per_length : float
         Cell size divided by the length unit :math:`L` of the equation.
+    order : numpy.ndarray of int, optional
+        A permutation of the nodes (flat indices ``i * n_cols + j``): the
+        system comes back with its unknowns and equations in that order
+        (row and column ``k`` are node ``order[k]``). Default: grid order.
 
     Returns
     -------
@@ -244,11 +249,13 @@ def assemble_system(
         pde = (sp.diags((~is_data).astype(float)) @ pde).tocsr()
         a = (pde + _data_rows(cells, n_rows, n_cols)).tocsr()
         a.sort_indices()
+        if order is not None:
+            a = a[order][:, order].tocsr()
     else:
-        a = _system_from_template(cells, n_rows, n_cols, tension, boundary_tension, weight, is_data)
+        a = _system_from_template(cells, n_rows, n_cols, tension, boundary_tension, weight, is_data, order)
     rhs = np.zeros(n)
     rhs[cells.node] = cells.value
-    return a, rhs
+    return a, (rhs if order is None else rhs[order])
 
 
 def _scaled_pde_rows(
@@ -276,6 +283,7 @@ def _system_from_template(
     boundary_tension: float,
     weight: float,
     is_data: np.ndarray,
+    order: np.ndarray | None = None,
 ) -> sp.csr_matrix:
     """The matrix of a large grid, its PDE rows copied from those of a 7 x 7 grid.
 
@@ -294,8 +302,8 @@ def _system_from_template(
     small = _scaled_pde_rows(side, side, tension, boundary_tension, weight, np.ones(side * side, dtype=bool))
     small_diag = small.diagonal()
     small = small.tocoo()
-    order = np.lexsort((small.col, small.row))
-    t_row, t_col, t_val = small.row[order], small.col[order], small.data[order]
+    by_row = np.lexsort((small.col, small.row))
+    t_row, t_col, t_val = small.row[by_row], small.col[by_row], small.data[by_row]
     t_di = t_col // side - t_row // side
     t_dj = t_col % side - t_row % side
     starts = np.searchsorted(t_row, np.arange(side * side + 1))
@@ -317,9 +325,17 @@ def _system_from_template(
     diamond = [(p, q) for p in range(-2, 3) for q in range(-2, 3) if abs(p) + abs(q) <= 2]
     slot = {pq: k for k, pq in enumerate(diamond)}
     offsets = np.array([p * n_cols + q for p, q in diamond], dtype=np.int32)
-    node = np.arange(n, dtype=np.int32)
+    # Row k holds the equation of node[k]; in another order the column
+    # indices are translated to places in that order too.
+    node = np.arange(n, dtype=np.int32) if order is None else np.asarray(order, dtype=np.int32)
+    place = node
+    if order is not None:
+        place = np.empty(n, dtype=np.int32)
+        place[node] = np.arange(n, dtype=np.int32)
     indices = node[:, None] + offsets[None, :]
     np.clip(indices, 0, n - 1, out=indices)
+    if order is not None:
+        indices = place[indices]
     values = np.empty((n, len(diamond)))
     t_slot = np.array([slot[(int(p), int(q))] for p, q in zip(t_di, t_dj)], dtype=np.int64)
     # Vectorised over kinds: the 49 template rows as a 49 x 13 table.
@@ -327,24 +343,27 @@ def _system_from_template(
     table[t_row, t_slot] = t_val
     centre = _TEMPLATE_HALF * side + _TEMPLATE_HALF
     values[:] = table[centre]
-    near_edge = np.flatnonzero(kinds != centre)
-    values[near_edge] = table[kinds[near_edge]]
-    values[is_data] = 0.0
+    row_kinds = kinds[node]
+    near_edge = np.flatnonzero(row_kinds != centre)
+    values[near_edge] = table[row_kinds[near_edge]]
+    values[is_data[node]] = 0.0
     # Data rows: u_k + dc (du/dc)_k + dr (du/dr)_k with one-sided differences
     # on the outermost nodes (as in _data_rows), in the diamond's slots.
     d = cells.node
-    values[d, slot[(0, 0)]] = 1.0
+    rd = place[d]
+    values[rd, slot[(0, 0)]] = 1.0
     di, dj = d // n_cols, d % n_cols
     for offset, pos, size, axis in ((cells.col_offset, dj, n_cols, 1), (cells.row_offset, di, n_rows, 0)):
         lo = np.where(pos > 0, -1, 0)
         hi = np.where(pos < size - 1, 1, 0)
         span = (hi - lo).astype(float)
         step_slots = np.array([slot[(0, s) if axis else (s, 0)] for s in (-1, 0, 1)])
-        values[d, step_slots[hi + 1]] += offset / span
-        values[d, step_slots[lo + 1]] -= offset / span
+        values[rd, step_slots[hi + 1]] += offset / span
+        values[rd, step_slots[lo + 1]] -= offset / span
     a = sp.csr_matrix(
         (values.ravel(), indices.ravel(), np.arange(n + 1, dtype=np.int64) * len(diamond)), shape=(n, n)
     )
     a.eliminate_zeros()
-    a.has_sorted_indices = True  # diamond slots are in increasing column order
+    # Diamond slots are in increasing column order in grid order only.
+    a.has_sorted_indices = order is None
     return a
