@@ -22,10 +22,11 @@ import scipy.sparse.linalg as spla
 #: when the system is ill-conditioned (T = 0, thin grids). Measured against
 #: the direct solution on 400 x 400 nodes (300 stations, Gaussian bodies of
 #: 20 mGal range, the survey of tests/algorithms/gridding/test_accuracy.py on
-#: 50 m cells): largest difference 2.8e-7 mGal at T = 0.25 (34 iterations)
-#: and 6.8e-6 mGal at T = 0 (59 iterations); the solver this one replaced
-#: (scipy's GMRES, 60-vector restarts) left 2.7e-7 and 1.3e-3 mGal. See
-#: docs/gridding.md for the other variants measured.
+#: 50 m cells, started from the coarse-grid surface): largest difference
+#: 2.8e-7 mGal at T = 0.25 (26 iterations) and 2.3e-6 mGal at T = 0 (63);
+#: the solver this one replaced (scipy's GMRES, 60-vector restarts) left
+#: 2.7e-7 and 1.3e-3 mGal. 1e-8 leaves 4.8e-7 mGal at T = 0.25 from the
+#: coarse-grid start. See docs/gridding.md for the other variants measured.
 ITERATIVE_RTOL = 5e-9
 
 #: GMRES restart length and largest number of iterations (common practice,

@@ -118,3 +118,45 @@ def test_multigrid_reduces_the_residual_of_the_gridding_system(survey):
     assert len(mg.levels) >= 2 and len(mg.strips) == 4
     # One V-cycle from zero: measured 0.09 of the initial residual.
     assert np.linalg.norm(rhs - a @ mg.apply(rhs)) < 0.2 * np.linalg.norm(rhs)
+
+
+def test_coarse_grid_start_gives_the_same_surface(monkeypatch):
+    # Grids of NESTED_MIN_NODES nodes or more start from the surface on a 4x
+    # coarser grid; the stopping test is absolute, so the result must agree
+    # with a start from zero to well within the solver's accuracy (measured
+    # 2.8e-7 mGal against the direct solution on 400 x 400 nodes).
+    from relief_gravity.algorithms.gridding import _mincurv
+
+    rng = np.random.default_rng(42)
+    x = rng.uniform(0, 20e3, 300)
+    y = rng.uniform(0, 20e3, 300)
+    v = 12.0 * np.exp(-((x - 6e3) ** 2 + (y - 7e3) ** 2) / (2 * 2.5e3**2)) - 8.0 * np.exp(
+        -((x - 14e3) ** 2 + (y - 13e3) ** 2) / (2 * 3e3**2)
+    )
+    # 200 x 200 nodes, with the threshold lowered to them, keeps the test quick.
+    g = GridGeometry(0.0, 20e3, 100.0, 200, 200)
+    monkeypatch.setattr(_mincurv, "NESTED_MIN_NODES", g.n_rows * g.n_cols)
+    calls = []
+    real_guess = _mincurv._coarse_guess
+    monkeypatch.setattr(_mincurv, "_coarse_guess", lambda *a: calls.append(1) or real_guess(*a))
+    nested = minimum_curvature(x, y, v, g, tension=0.25)
+    assert calls == [1]
+    monkeypatch.setattr(_mincurv, "NESTED_MIN_NODES", 10**9)
+    from_zero = minimum_curvature(x, y, v, g, tension=0.25)
+    assert calls == [1]
+    npt.assert_allclose(nested, from_zero, rtol=0, atol=1e-6 * np.ptp(from_zero))
+
+
+def test_cancel_during_the_coarse_grid_start(monkeypatch):
+    from relief_gravity.algorithms.gridding import _mincurv
+
+    rng = np.random.default_rng(5)
+    x = rng.uniform(0, 20e3, 300)
+    y = rng.uniform(0, 20e3, 300)
+    g = GridGeometry(0.0, 20e3, 50.0, 400, 400)
+    assert g.n_rows * g.n_cols >= _mincurv.NESTED_MIN_NODES
+    fractions = []
+    cancel = CancelAfter(4)  # past the fine grid's first checks, inside the coarse solve
+    with pytest.raises(GriddingCancelled):
+        minimum_curvature(x, y, np.sin(x / 3e3), g, progress=fractions.append, is_cancelled=cancel)
+    assert fractions == []  # the fine solve never started
