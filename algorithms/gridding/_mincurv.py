@@ -81,6 +81,8 @@ def _solve(
     if method == "multigrid" and n_rows * n_cols >= NESTED_MIN_NODES:
         try:
             guess = _coarse_guess(cells, n_rows, n_cols, tension, boundary_tension, cell_per_length, is_cancelled)
+        except GriddingCancelled:
+            raise
         except (ValueError, RuntimeError):
             guess = None  # e.g. all data in fewer than 3 coarse cells: start from zero
     if method == "direct":

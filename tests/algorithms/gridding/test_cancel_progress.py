@@ -156,7 +156,15 @@ def test_cancel_during_the_coarse_grid_start(monkeypatch):
     g = GridGeometry(0.0, 20e3, 50.0, 400, 400)
     assert g.n_rows * g.n_cols >= _mincurv.NESTED_MIN_NODES
     fractions = []
-    cancel = CancelAfter(4)  # past the fine grid's first checks, inside the coarse solve
+    # The first check is the fine grid's, the next ones the coarse solve's.
+    # Only one True: the cancel must not be taken for a failed coarse solve.
+    polls = []
+
+    def cancel_once() -> bool:
+        polls.append(1)
+        return len(polls) == 4
+
     with pytest.raises(GriddingCancelled):
-        minimum_curvature(x, y, np.sin(x / 3e3), g, progress=fractions.append, is_cancelled=cancel)
+        minimum_curvature(x, y, np.sin(x / 3e3), g, progress=fractions.append, is_cancelled=cancel_once)
+    assert len(polls) == 4
     assert fractions == []  # the fine solve never started
