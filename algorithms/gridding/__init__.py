@@ -11,11 +11,13 @@ from ._geometry import (
     station_spacing,
 )
 from ._mincurv import minimum_curvature
+from ._solver import GriddingCancelled
 from ._spline import biharmonic_spline
 
 __all__ = [
     "DEFAULT_MARGIN_FRACTION",
     "GridGeometry",
+    "GriddingCancelled",
     "biharmonic_spline",
     "blank_far_cells",
     "contour_levels",

@@ -1,29 +1,35 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
-"""Minimum-curvature gridding with tension: sparse finite-difference system.
+"""Minimum-curvature gridding with tension: the public entry point.
 
-The grid's nodes are the raster's cell centres. Every node carries one
-equation: the finite-difference form of
-:math:`(1 - T)\\nabla^4 u - (T/L^2)\\nabla^2 u = 0`, with
-the edge and corner conditions of Smith & Wessel (1990) eliminated through
-two layers of ghost nodes, or, at a node whose cell holds data, a data
-equation. The square sparse system is solved directly (SuperLU) on small
-grids and by multigrid-preconditioned GMRES on large ones.
+The grid's nodes are the raster's cell centres. The sparse system
+(:mod:`._system`) is solved directly (SuperLU) on small grids and by
+multigrid-preconditioned GMRES (:mod:`._solver`) on large ones.
 """
 
 from __future__ import annotations
-
-import inspect
 
 import math
 from dataclasses import replace
 
 import numpy as np
 import numpy.typing as npt
-import scipy.sparse as sp
 import scipy.sparse.linalg as spla
 
 from ._geometry import GridGeometry, clean_stations, default_cell_size
+from ._solver import (
+    ITERATIVE_RTOL,
+    Cancelled,
+    GriddingCancelled,
+    Multigrid,
+    Progress,
+    _colour_order,
+    check_cancel,
+    gmres,
+)
 from ._stations import CellData, average_per_cell
+from ._system import assemble_system
+
+__all__ = ["GriddingCancelled", "assemble_system", "minimum_curvature"]
 
 #: Largest number of nodes solved by a direct sparse factorisation; larger
 #: grids use the multigrid-preconditioned iteration. Measured on the bench
@@ -31,16 +37,6 @@ from ._stations import CellData, average_per_cell
 #: multigrid 0.20 s vs 0.14 s at 100 x 100 nodes, 1.0 s vs 0.28 s at
 #: 150 x 150, 9.5 s (0.43 GB) vs 0.4 s at 300 x 300.
 DIRECT_SOLVE_MAX_NODES = 10_000
-
-#: Relative residual at which the iterative solver stops. Measured on
-#: 300 x 300 nodes (T = 0.25, T_b = 0) against the direct solution: 1e-8 leaves errors of about
-#: 2e-6 of the data range (1e-6 leaves 1e-3), well below map accuracy.
-ITERATIVE_RTOL = 1e-8
-
-#: GMRES restart length and number of restarts (common practice, no source;
-#: 60 vectors of 10^6 nodes are 0.5 GB).
-GMRES_RESTART = 60
-GMRES_MAX_RESTARTS = 10
 
 
 def _check_tension(tension: float, name: str = "tension") -> float:
@@ -51,383 +47,127 @@ def _check_tension(tension: float, name: str = "tension") -> float:
     return tension
 
 
-def _ghost_map(n_rows: int, n_cols: int, boundary_tension: float) -> sp.csr_matrix:
-    """Values on the grid padded by two ghost layers, as a matrix of the nodes.
-
-    Returns ``G`` of shape ``((n_rows + 4) * (n_cols + 4), n_rows * n_cols)``:
-    padded values = ``G @ u``. Ghosts follow from the boundary conditions,
-    discretised with central differences on the outermost nodes:
-
-    * first layer, edge condition
-      :math:`(1 - T_b)\\,u_{nn} + T_b\\,u_n = 0`;
-    * corner ghost, :math:`u_{xy} = 0`;
-    * second layer, :math:`\\partial(\\nabla^2 u)/\\partial n = 0`.
-
-    Only the ghosts the 13-point stencil reaches are defined.
-    """
-    ny, nx = n_rows, n_cols
-    wx = nx + 4
-    n_ext = (ny + 4) * wx
-
-    def ext(i: np.ndarray, j: np.ndarray) -> np.ndarray:
-        return (np.asarray(i) + 2) * wx + (np.asarray(j) + 2)
-
-    ii, jj = np.meshgrid(np.arange(ny), np.arange(nx), indexing="ij")
-    g = sp.csr_matrix(
-        (np.ones(ny * nx), (ext(ii.ravel(), jj.ravel()), np.arange(ny * nx))),
-        shape=(n_ext, ny * nx),
-    )
-
-    def add_stage(targets: np.ndarray, terms: list[tuple[float, np.ndarray]]) -> None:
-        # Each new ghost is a combination of already-defined padded values, so
-        # one sparse product expresses it in terms of the nodes.
-        nonlocal g
-        rows, cols, vals = [], [], []
-        for coeff, source in terms:
-            rows.append(targets)
-            cols.append(source)
-            vals.append(np.full(targets.size, coeff))
-        c = sp.csr_matrix(
-            (np.concatenate(vals), (np.concatenate(rows), np.concatenate(cols))),
-            shape=(n_ext, n_ext),
-        )
-        g = (g + c @ g).tocsr()
-
-    tb = boundary_tension
-    # (1-Tb)(u_-1 - 2u_0 + u_1) + Tb (u_-1 - u_1)/2 = 0, solved for u_-1.
-    a = 2.0 * (1.0 - tb) / (1.0 - 0.5 * tb)
-    b = (0.5 * tb - (1.0 - tb)) / (1.0 - 0.5 * tb)
-    r = np.arange(ny)
-    c = np.arange(nx)
-    zr, zc = np.zeros_like(r), np.zeros_like(c)
-    targets, terms_a, terms_b = [], [], []
-    for tgt, first, second in (
-        (ext(r, zr - 1), ext(r, zr), ext(r, zr + 1)),  # west
-        (ext(r, zr + nx), ext(r, zr + nx - 1), ext(r, zr + nx - 2)),  # east
-        (ext(zc - 1, c), ext(zc, c), ext(zc + 1, c)),  # north
-        (ext(zc + ny, c), ext(zc + ny - 1, c), ext(zc + ny - 2, c)),  # south
-    ):
-        targets.append(tgt)
-        terms_a.append(first)
-        terms_b.append(second)
-    add_stage(
-        np.concatenate(targets),
-        [(a, np.concatenate(terms_a)), (b, np.concatenate(terms_b))],
-    )
-
-    # Corner ghosts from u_xy = 0 centred on the corner node:
-    # u(-1,-1) = u(-1,1) + u(1,-1) - u(1,1) and mirror images.
-    corners = []
-    for ci, si in ((-1, 1), (ny, -1)):
-        for cj, sj in ((-1, 1), (nx, -1)):
-            i0, j0 = ci + si, cj + sj  # the corner node itself
-            corners.append(
-                (
-                    ext(ci, cj),
-                    ext(ci, j0 + sj),
-                    ext(i0 + si, cj),
-                    ext(i0 + si, j0 + sj),
-                )
-            )
-    tgt, p1, p2, m1 = (np.array([cn[k] for cn in corners]) for k in range(4))
-    add_stage(tgt, [(1.0, p1), (1.0, p2), (-1.0, m1)])
-
-    # Second layer from equal Laplacians at the ghost u_-1 and at u_1:
-    # u_-2 = u_2 - 4u_1 + 4u_-1 + (u_1 - u_-1) at the two neighbours along the edge.
-    targets, terms = [], {k: [] for k in range(7)}
-    coeffs = (1.0, -4.0, 4.0, 1.0, 1.0, -1.0, -1.0)
-    for axis_rows, size, along in ((True, ny, nx), (False, nx, ny)):
-        idx = np.arange(size)
-        for side in (0, 1):
-            def node(k: np.ndarray, depth: int) -> np.ndarray:
-                # depth counts inward from the edge: -2, -1 are ghosts, 0 the edge node.
-                pos = depth if side == 0 else along - 1 - depth
-                return ext(k, np.full_like(k, pos)) if axis_rows else ext(np.full_like(k, pos), k)
-
-            targets.append(node(idx, -2))
-            for n, (k_shift, depth) in enumerate(
-                ((0, 2), (0, 1), (0, -1), (-1, 1), (1, 1), (-1, -1), (1, -1))
-            ):
-                terms[n].append(node(idx + k_shift, depth))
-    add_stage(
-        np.concatenate(targets),
-        [(coeffs[n], np.concatenate(terms[n])) for n in range(7)],
-    )
-    return g
-
-
-def _stencil_matrix(n_rows: int, n_cols: int, tension: float, laplacian_weight: float) -> sp.csr_matrix:
-    """13-point stencil of (1-T)∇⁴ - w∇² (unit spacing) from padded values."""
-    ny, nx = n_rows, n_cols
-    wx = nx + 4
-    t = tension
-    w = laplacian_weight
-    # Biharmonic 20/-8/2/1 (Briggs 1974) and Laplacian -4/1, in grid units.
-    offsets = [
-        ((0, 0), 20.0 * (1 - t) + 4.0 * w),
-        ((-1, 0), -8.0 * (1 - t) - w),
-        ((1, 0), -8.0 * (1 - t) - w),
-        ((0, -1), -8.0 * (1 - t) - w),
-        ((0, 1), -8.0 * (1 - t) - w),
-        ((-1, -1), 2.0 * (1 - t)),
-        ((-1, 1), 2.0 * (1 - t)),
-        ((1, -1), 2.0 * (1 - t)),
-        ((1, 1), 2.0 * (1 - t)),
-        ((-2, 0), 1.0 * (1 - t)),
-        ((2, 0), 1.0 * (1 - t)),
-        ((0, -2), 1.0 * (1 - t)),
-        ((0, 2), 1.0 * (1 - t)),
-    ]
-    ii, jj = np.meshgrid(np.arange(ny), np.arange(nx), indexing="ij")
-    ii, jj = ii.ravel(), jj.ravel()
-    rows, cols, vals = [], [], []
-    flat = np.arange(ny * nx)
-    for (di, dj), coeff in offsets:
-        if coeff == 0.0:
-            continue
-        rows.append(flat)
-        cols.append((ii + di + 2) * wx + (jj + dj + 2))
-        vals.append(np.full(flat.size, coeff))
-    return sp.csr_matrix(
-        (np.concatenate(vals), (np.concatenate(rows), np.concatenate(cols))),
-        shape=(ny * nx, (ny + 4) * wx),
-    )
-
-
-def _data_rows(cells: CellData, n_rows: int, n_cols: int) -> sp.csr_matrix:
-    """Data equations: first-order Taylor expansion about the nearest node.
-
-    ``u_k + dc * (du/dc)_k + dr * (du/dr)_k = value``, with central
-    differences inside and one-sided differences on the outermost nodes, so
-    the equation is exact for any plane.
-    """
-    nx = n_cols
-    node = cells.node
-    i, j = node // nx, node % nx
-    rows, cols, vals = [node], [node], [np.ones(node.size)]
-    for offset, pos, size, stride in (
-        (cells.col_offset, j, n_cols, 1),
-        (cells.row_offset, i, n_rows, nx),
-    ):
-        lo = np.where(pos > 0, -1, 0)
-        hi = np.where(pos < size - 1, 1, 0)
-        span = (hi - lo).astype(float)
-        rows += [node, node]
-        cols += [node + hi * stride, node + lo * stride]
-        vals += [offset / span, -offset / span]
-    return sp.csr_matrix(
-        (np.concatenate(vals), (np.concatenate(rows), np.concatenate(cols))),
-        shape=(n_rows * n_cols, n_rows * n_cols),
-    )
-
-
-def assemble_system(
+def _solve(
     cells: CellData,
     n_rows: int,
     n_cols: int,
     tension: float,
-    boundary_tension: float = 0.0,
-    cell_per_length: float = 1.0,
-) -> tuple[sp.csr_matrix, np.ndarray]:
-    """Sparse system ``A u = b`` of the tensioned minimum-curvature surface.
+    boundary_tension: float,
+    cell_per_length: float,
+    method: str,
+    progress: Progress = None,
+    is_cancelled: Cancelled = None,
+    rtol: float = ITERATIVE_RTOL,
+) -> np.ndarray:
+    """Assemble ``a @ u = rhs`` and solve it directly or by multigrid-preconditioned GMRES.
 
-    Parameters
-    ----------
-    cells : CellData
-        Per-cell averaged data (:func:`average_per_cell`).
-    n_rows, n_cols : int
-        Grid size (>= 3 each).
-    tension : float
-        Interior tension T in [0, 1].
-    boundary_tension : float
-        Edge tension :math:`T_b` in [0, 1].
-    cell_per_length : float
-        Cell size divided by the length unit :math:`L` of the equation.
-
-    Returns
-    -------
-    A : scipy.sparse.csr_matrix, shape (N, N)
-        N = n_rows * n_cols; rows scaled to unit diagonal.
-    b : numpy.ndarray, shape (N,)
-        Right-hand side (data values on data rows, 0 elsewhere).
-
-    Notes
-    -----
-    Interior rows: the 13-point stencil of
-    :math:`(1-T)\\nabla^4 u - (T/L^2)\\nabla^2 u = 0` multiplied by
-    :math:`h^4`, with :math:`w = T (h/L)^2`,
-    :math:`(1-T)[20u_0 - 8\\sum u_{\\pm1} + 2\\sum u_{\\text{diag}} + \\sum u_{\\pm2}] - w[\\sum u_{\\pm1} - 4u_0]`
-    (Briggs 1974; Smith & Wessel 1990), with ghosts from :func:`_ghost_map`.
-    With :math:`T_b = 0` every row annihilates planes, so a plane through
-    the data solves the system exactly.
-
-    Examples
-    --------
-    >>> from ._stations import average_per_cell
-    >>> g = GridGeometry(0.0, 5.0, 1.0, 6, 5)
-    >>> cells = average_per_cell([0.2, 5.5, 2.9, 4.1], [0.3, 1.2, 4.6, 3.3], [1.0, 2.0, 3.0, 4.0], g)
-    >>> a, b = assemble_system(cells, 5, 6, tension=0.25)
-    >>> a.shape, float(abs(a.diagonal()[b == 0] - 1).max())
-    ((30, 30), 0.0)
+    Assembled here so that the matrix in grid order can be released once
+    the multigrid holds its colour-ordered copy (0.16 GB at 10^6 nodes).
+    Large grids start from the surface on a grid :data:`NESTED_FACTOR`
+    times coarser (:func:`_coarse_guess`).
     """
-    n = n_rows * n_cols
-    weight = tension * cell_per_length**2
-    pde = _stencil_matrix(n_rows, n_cols, tension, weight) @ _ghost_map(n_rows, n_cols, boundary_tension)
-    pde = pde.tocsr()
-    pde.eliminate_zeros()
-    is_data = np.zeros(n, dtype=bool)
-    is_data[cells.node] = True
-    keep = sp.diags((~is_data).astype(float))
-    diag = pde.diagonal()
-    if np.any(np.abs(diag[~is_data]) < 1e-12):
-        msg = "Degenerate finite-difference row (grid too small?)."
-        raise ValueError(msg)
-    scale = sp.diags(np.where(is_data, 1.0, 1.0 / np.where(diag == 0, 1.0, diag)))
-    a = (scale @ keep @ pde + _data_rows(cells, n_rows, n_cols)).tocsr()
-    a.sort_indices()
-    rhs = np.zeros(n)
-    rhs[cells.node] = cells.value
-    return a, rhs
-
-
-# --------------------------------------------------------------------------- solvers
-
-
-def _prolongation_1d(n_fine: int) -> sp.csr_matrix:
-    """Linear interpolation from every other node (plus the last) to all nodes.
-
-    Four-point cubic midpoint weights were tried as well (higher order is the
-    textbook advice for a fourth-order operator, from memory); measured on
-    500 x 500 nodes they did not lower the iteration count and doubled the
-    set-up time, so linear it is.
-    """
-    coarse = np.arange(0, n_fine, 2)
-    if coarse[-1] != n_fine - 1:
-        coarse = np.append(coarse, n_fine - 1)
-    fine = np.arange(n_fine)
-    k = np.clip(np.searchsorted(coarse, fine, side="right") - 1, 0, coarse.size - 2)
-    left, right = coarse[k], coarse[k + 1]
-    w = (fine - left) / (right - left)
-    return sp.csr_matrix(
-        (np.concatenate([1.0 - w, w]), (np.concatenate([fine, fine]), np.concatenate([k, k + 1]))),
-        shape=(n_fine, coarse.size),
-    )
-
-
-class _Multigrid:
-    """Galerkin multigrid V-cycle used as a GMRES preconditioner.
-
-    Coarse operators are ``P.T @ A @ P`` with bilinear ``P`` (an algebraic
-    construction, so data rows need no special coarse treatment). The
-    smoother is multicolour Gauss-Seidel: nodes coloured by
-    ``(i mod m, j mod m)`` with ``m`` one more than the stencil's reach are
-    never coupled to a node of their own colour, so each colour is updated
-    at once with one vectorised sparse product. SuperLU on the coarsest
-    level. The cycle runs in float32: it only has to approximate the
-    inverse, and single precision halves the memory traffic.
-    """
-
-    def __init__(
-        self,
-        a: sp.csr_matrix,
-        n_rows: int,
-        n_cols: int,
-        coarsest: int = 4_000,
-        sweeps: int = 2,
-    ) -> None:
-        self.levels = []
-        self.sweeps = sweeps
-        self.n = a.shape[0]
-        shape = (n_rows, n_cols)
-        while a.shape[0] > coarsest and min(shape) > 5:
-            py = _prolongation_1d(shape[0])
-            px = _prolongation_1d(shape[1])
-            p = sp.kron(py, px, format="csr")
-            a32 = a.astype(np.float32)
-            self.levels.append((a32, p.astype(np.float32), p.T.tocsr().astype(np.float32), self._colour_blocks(a32, shape)))
-            a = (p.T @ a @ p).tocsr()
-            shape = (py.shape[1], px.shape[1])
-        self.coarse = spla.splu(a.tocsc(), permc_spec="COLAMD")
-
-    @staticmethod
-    def _colour_blocks(a: sp.csr_matrix, shape: tuple[int, int]) -> list:
-        nx = shape[1]
-        coo = a.tocoo()
-        reach = int(
-            max(
-                np.abs(coo.row // nx - coo.col // nx).max(),
-                np.abs(coo.row % nx - coo.col % nx).max(),
-            )
-        )
-        m = reach + 1
-        i, j = np.divmod(np.arange(a.shape[0]), nx)
-        colour = (i % m) * m + (j % m)
-        diag = a.diagonal()
-        blocks = []
-        for c in range(m * m):
-            idx = np.flatnonzero(colour == c)
-            if idx.size:
-                blocks.append((idx, a[idx], (1.0 / diag[idx]).astype(np.float32)))
-        return blocks
-
-    def _smooth(self, blocks: list, x: np.ndarray, b: np.ndarray, reverse: bool) -> np.ndarray:
-        order = blocks[::-1] if reverse else blocks
-        for _ in range(self.sweeps):
-            for idx, rows, inv_diag in order:
-                x[idx] += inv_diag * (b[idx] - rows @ x)
-        return x
-
-    def _cycle(self, level: int, b: np.ndarray) -> np.ndarray:
-        if level == len(self.levels):
-            return self.coarse.solve(b.astype(np.float64)).astype(np.float32)
-        a, p, r, blocks = self.levels[level]
-        x = self._smooth(blocks, np.zeros_like(b), b, reverse=False)
-        x += p @ self._cycle(level + 1, r @ (b - a @ x))
-        return self._smooth(blocks, x, b, reverse=True)
-
-    def apply(self, b: np.ndarray) -> np.ndarray:
-        """One V-cycle: an approximation of ``A^{-1} b`` (float64 out)."""
-        return self._cycle(0, np.ravel(b).astype(np.float32)).astype(np.float64)
-
-    def operator(self) -> spla.LinearOperator:
-        return spla.LinearOperator((self.n, self.n), matvec=self.apply, dtype=np.float64)
-
-
-def _solve(a: sp.csr_matrix, rhs: np.ndarray, n_rows: int, n_cols: int, method: str) -> np.ndarray:
-    """Solve ``a @ u = rhs`` directly or by multigrid-preconditioned GMRES."""
-    if method == "auto":
-        method = "direct" if a.shape[0] <= DIRECT_SOLVE_MAX_NODES else "multigrid"
-    if method == "direct":
-        return spla.spsolve(a.tocsc(), rhs, permc_spec="COLAMD")
-    if method != "multigrid":
+    if method not in ("auto", "direct", "multigrid"):
         msg = f"Unknown solver {method!r}: expected 'auto', 'direct' or 'multigrid'."
         raise ValueError(msg)
-    scale = float(np.linalg.norm(rhs))
-    if scale == 0.0:
-        return np.zeros_like(rhs)
-    mg = _Multigrid(a, n_rows, n_cols)
-    # scipy renamed gmres' relative tolerance from ``tol`` to ``rtol`` (1.12)
-    # and removed ``tol`` (1.14); Debian's 1.10 knows only ``tol``.
-    tolerance = {"rtol" if "rtol" in inspect.signature(spla.gmres).parameters else "tol": ITERATIVE_RTOL}
-    solution, _ = spla.gmres(
-        a,
+    if method == "auto":
+        method = "direct" if n_rows * n_cols <= DIRECT_SOLVE_MAX_NODES else "multigrid"
+    # The iterative solver works in the multigrid's colour order: assemble
+    # straight into it rather than permuting 10^7 entries afterwards.
+    order = _colour_order(n_rows, n_cols)[0] if method == "multigrid" else None
+    check_cancel(is_cancelled)
+    a, rhs = assemble_system(cells, n_rows, n_cols, tension, boundary_tension, cell_per_length, order=order)
+    check_cancel(is_cancelled)
+    guess = None
+    if method == "multigrid" and n_rows * n_cols >= NESTED_MIN_NODES:
+        try:
+            guess = _coarse_guess(cells, n_rows, n_cols, tension, boundary_tension, cell_per_length, is_cancelled)
+        except GriddingCancelled:
+            raise
+        except (ValueError, RuntimeError):
+            guess = None  # e.g. all data in fewer than 3 coarse cells: start from zero
+    if method == "direct":
+        # One call to SuperLU; small grids only (under a second), so the
+        # cancel check before it is enough.
+        check_cancel(is_cancelled)
+        solution = spla.spsolve(a.tocsc(), rhs, permc_spec="COLAMD")
+        if progress is not None:
+            progress(1.0)
+        return solution
+    mg = Multigrid(a, n_rows, n_cols, is_cancelled=is_cancelled, colour_ordered=True)
+    del a
+    # Solved in the multigrid's colour order (no permutation per iteration).
+    sorted_solution, residual = gmres(
+        mg.sorted_matrix,
         rhs,
-        x0=mg.apply(rhs),
-        **tolerance,
-        atol=ITERATIVE_RTOL * scale,
-        restart=GMRES_RESTART,
-        maxiter=GMRES_MAX_RESTARTS,
-        M=mg.operator(),
+        mg.apply_sorted,
+        rtol=rtol,
+        progress=progress,
+        is_cancelled=is_cancelled,
+        x0=None if guess is None else guess.ravel()[mg.order],
     )
-    residual = float(np.linalg.norm(rhs - a @ solution)) / scale
-    if residual > 100 * ITERATIVE_RTOL:
+    solution = np.empty_like(sorted_solution)
+    solution[mg.order] = sorted_solution
+    if residual > 100 * rtol:
         msg = (
-            f"Minimum curvature: the iterative solver stopped at relative residual "
-            f"{residual:.1e} (target {ITERATIVE_RTOL:.0e}); try solver='direct' on a "
+            f"Minimum curvature: the iterative solver stopped at relative preconditioned residual "
+            f"{residual:.1e} (target {rtol:.0e}); try solver='direct' on a "
             "smaller grid, or a tension below 1."
         )
         raise RuntimeError(msg)
     return solution
+
+
+#: Nested iteration (the coarse-to-fine strategy of Smith & Wessel 1990):
+#: grids of at least NESTED_MIN_NODES nodes start GMRES from the surface
+#: computed on a grid NESTED_FACTOR times coarser, to NESTED_RTOL, and
+#: interpolated (cubic). Measured on 1000 x 1000 nodes, 10,000 stations,
+#: T = 0.25: 12 fine iterations instead of 24 (the guess is within 0.04 mGal
+#: of the result on a 20 mGal field); the stopping test of the fine solve is
+#: unchanged, so is its accuracy.
+NESTED_FACTOR = 4
+NESTED_MIN_NODES = 160_000
+NESTED_RTOL = 1e-4
+
+
+def _coarse_guess(
+    cells: CellData,
+    n_rows: int,
+    n_cols: int,
+    tension: float,
+    boundary_tension: float,
+    cell_per_length: float,
+    is_cancelled: Cancelled,
+) -> np.ndarray:
+    """The surface on a grid NESTED_FACTOR times coarser, interpolated to every node.
+
+    The cell data are averaged again per coarse cell (position and value,
+    in grid units); the equation keeps its length unit, so the coarse grid
+    solves the same surface at a lower resolution.
+    """
+    from scipy.ndimage import map_coordinates
+
+    f = NESTED_FACTOR
+    coarse = GridGeometry(0.0, float(-(-n_rows // f) * f), float(f), -(-n_cols // f), -(-n_rows // f))
+    col = cells.node % n_cols + 0.5 + cells.col_offset
+    row = cells.node // n_cols + 0.5 + cells.row_offset
+    coarse_cells = average_per_cell(col, coarse.north - row, cells.value, coarse)
+    surface = _solve(
+        coarse_cells,
+        coarse.n_rows,
+        coarse.n_cols,
+        tension,
+        boundary_tension,
+        cell_per_length * f,
+        "auto",
+        is_cancelled=is_cancelled,
+        rtol=NESTED_RTOL,
+    ).reshape(coarse.shape)
+    check_cancel(is_cancelled)
+    # Fine node (i, j) sits at ((i + 0.5) / f - 0.5, (j + 0.5) / f - 0.5) in coarse node units.
+    rows = (np.arange(n_rows) + 0.5) / f - 0.5
+    cols = (np.arange(n_cols) + 0.5) / f - 0.5
+    grid_rows, grid_cols = np.meshgrid(rows, cols, indexing="ij")
+    return map_coordinates(surface, [grid_rows, grid_cols], order=3, mode="nearest")
 
 
 def _detrend(cells: CellData, n_cols: int) -> tuple[CellData, np.ndarray]:
@@ -458,6 +198,8 @@ def minimum_curvature(
     boundary_tension: float | None = None,
     length_scale: float | None = None,
     solver: str = "auto",
+    progress: Progress = None,
+    is_cancelled: Cancelled = None,
 ) -> np.ndarray:
     """Grid scattered values by minimum curvature with tension.
 
@@ -473,7 +215,9 @@ def minimum_curvature(
     tension : float, default 0.25
         Interior tension T in [0, 1]: 0 is the minimum-curvature
         (biharmonic) surface, 1 the harmonic (membrane) surface. 0.25 is the
-        figure recommended for potential-field data (REFERENCES.md §9).
+        figure recommended for potential-field data in the documentation of
+        GMT's ``surface``, the authors' own implementation (Wessel et al.
+        2019); see ``docs/gridding.md``.
     boundary_tension : float, optional
         Tension :math:`T_b` in the edge condition, in [0, 1]. Default: equal
         to ``tension``, the edge condition of Smith & Wessel (1990).
@@ -488,6 +232,13 @@ def minimum_curvature(
     solver : {"auto", "direct", "multigrid"}
         Direct sparse LU, or multigrid-preconditioned GMRES; "auto" picks
         direct up to :data:`DIRECT_SOLVE_MAX_NODES` nodes.
+    progress : callable, optional
+        ``progress(fraction)``, fraction 0-1, called during the solve
+        (once per iteration, about every 0.1 s on 10^6 nodes).
+    is_cancelled : callable, optional
+        Polled during assembly, multigrid set-up and every iteration; when
+        it returns True the run stops within a second and raises
+        :class:`GriddingCancelled`.
 
     Returns
     -------
@@ -497,6 +248,8 @@ def minimum_curvature(
 
     Raises
     ------
+    GriddingCancelled
+        ``is_cancelled()`` returned True.
     ValueError
         Fewer than 3 cells with data, stations on one line, tension out of
         range, or a grid smaller than 3 x 3.
@@ -520,7 +273,7 @@ def minimum_curvature(
     the raster's resolution.
 
     *Several stations in one cell* are averaged (position and value), as
-    recommended for this method (REFERENCES.md §9); planes stay exact.
+    recommended for this method (same documentation); planes stay exact.
 
     *Off-node data* constrain their nearest node through a first-order Taylor
     expansion, :math:`u_k + \\delta_c\\,\\partial_c u + \\delta_r\\,\\partial_r u = d`
@@ -544,6 +297,10 @@ def minimum_curvature(
 
     Smith, W. H. F., & Wessel, P. (1990). Gridding with continuous curvature
     splines in tension. Geophysics, 55(3), 293-305.
+
+    Wessel, P., Luis, J. F., Uieda, L., Scharroo, R., Wobbe, F., Smith,
+    W. H. F., & Tian, D. (2019). The Generic Mapping Tools version 6.
+    Geochemistry, Geophysics, Geosystems, 20, 5556-5564.
 
     Examples
     --------
@@ -578,14 +335,16 @@ def minimum_curvature(
         msg = f"Invalid length_scale {length_scale!r}: expected a finite number > 0."
         raise ValueError(msg)
     cells, plane = _detrend(cells, geometry.n_cols)
-    a, rhs = assemble_system(
+    solution = _solve(
         cells,
         geometry.n_rows,
         geometry.n_cols,
         tension,
         boundary_tension,
-        cell_per_length=geometry.cell_size / length_scale,
-    )
-    solution = _solve(a, rhs, geometry.n_rows, geometry.n_cols, solver).reshape(geometry.shape)
+        geometry.cell_size / length_scale,
+        solver,
+        progress,
+        is_cancelled,
+    ).reshape(geometry.shape)
     rows, cols = np.indices(geometry.shape)
     return solution + plane[0] + plane[1] * cols + plane[2] * rows

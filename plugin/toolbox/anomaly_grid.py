@@ -344,7 +344,16 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
                     )
                 )
                 surface = np.asarray(
-                    gridding.minimum_curvature(x, y, v, geometry, tension=tension), dtype=float
+                    gridding.minimum_curvature(
+                        x,
+                        y,
+                        v,
+                        geometry,
+                        tension=tension,
+                        progress=lambda fraction: steps.setProgress(100.0 * fraction),
+                        is_cancelled=feedback.isCanceled,
+                    ),
+                    dtype=float,
                 )
                 if blank is None:
                     blank = BLANK_SPACINGS * gridding.station_spacing(x, y)
@@ -354,6 +363,8 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
                 if blank > 0:
                     far = gridding.blank_far_cells(geometry, x, y, blank)
                     surface[far] = np.nan
+            except gridding.GriddingCancelled as error:
+                raise QgsProcessingException(self.tr("Cancelled by the user.")) from error
             except ValueError as error:
                 raise QgsProcessingException(
                     self.tr("The stations cannot be gridded: {}").format(error)
@@ -418,7 +429,7 @@ class AnomalyGridAlgorithm(ReliefGravityAlgorithm):
             )
             if sink is not None:
                 count = 0
-                for level, wkb in _contour_lines(surface, geometry, interval):
+                for level, wkb in _contour_lines(surface, geometry, interval, is_cancelled=feedback.isCanceled):
                     if feedback.isCanceled():
                         raise QgsProcessingException(self.tr("Cancelled by the user."))
                     feature = QgsFeature(fields)
@@ -507,8 +518,12 @@ def _write_raster(path: str, surface: np.ndarray, geometry, crs_wkt: str, field_
     memory = None
 
 
-def _contour_lines(surface: np.ndarray, geometry, interval: float):
-    """Yield ``(level, wkb)`` for every contour line of the surface (GDAL's contour generator)."""
+def _contour_lines(surface: np.ndarray, geometry, interval: float, is_cancelled=None):
+    """Yield ``(level, wkb)`` for every contour line of the surface (GDAL's contour generator).
+
+    ``is_cancelled()`` is polled by GDAL while it traces; True stops it, and
+    nothing more is yielded (the caller checks for the cancel itself).
+    """
     rows, cols = surface.shape
     raster = gdal.GetDriverByName("MEM").Create("", cols, rows, 1, gdal.GDT_Float64)
     raster.SetGeoTransform(geometry.geotransform)
@@ -521,7 +536,15 @@ def _contour_lines(surface: np.ndarray, geometry, interval: float):
     layer.CreateField(ogr.FieldDefn("value", ogr.OFTReal))
     # Base 0: levels are whole multiples of the interval, so maps of
     # neighbouring surveys share contour values.
-    gdal.ContourGenerate(band, interval, 0.0, [], 1, NODATA, layer, 0, 1)
+    def keep_going(_complete, _message, _data):
+        return 0 if is_cancelled is not None and is_cancelled() else 1
+
+    try:
+        gdal.ContourGenerate(band, interval, 0.0, [], 1, NODATA, layer, 0, 1, callback=keep_going)
+    except RuntimeError:
+        if is_cancelled is not None and is_cancelled():
+            return
+        raise
     decimals = max(0, -math.floor(math.log10(interval)) + 3)
     for feature in layer:
         geometry_ref = feature.GetGeometryRef()

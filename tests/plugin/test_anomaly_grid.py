@@ -282,3 +282,56 @@ def test_output_format_follows_extension(provider, plane_stations, tmp_path):
     ds = gdal.Open(str(out))
     assert ds.GetDriver().ShortName == "AAIGrid"
     assert ds.GetGeoTransform()[1] == 100.0
+
+
+def _cancelling_feedback(threshold):
+    """A feedback that cancels itself once the progress bar passes ``threshold`` %."""
+    feedback = QgsProcessingFeedback()
+    seen = []
+
+    def cancel_after(progress):
+        # setProgress is not virtual in PyQGIS: listen to the signal.
+        seen.append(progress)
+        if progress > threshold and not feedback.isCanceled():
+            feedback.cancel()
+
+    feedback.progressChanged.connect(cancel_after)
+    return feedback, seen
+
+
+@pytest.mark.parametrize(
+    ("threshold", "where"),
+    [(26.0, "solve"), (74.0, "contours")],
+    ids=["during-the-solve", "during-the-contours"],
+)
+def test_cancel_raises_and_leaves_no_files(provider, plane_stations, tmp_path, threshold, where):
+    # Four steps of 25 %: stations, gridding (the solve reports its iterations),
+    # raster, contours. 10 m pixels make 320 x 220 nodes: the iterative solver.
+    # Before this change a cancel returned "success" with an empty contour layer.
+    import processing
+
+    out_dir = tmp_path / "out"
+    out_dir.mkdir()
+    feedback, seen = _cancelling_feedback(threshold)
+    with pytest.raises(QgsProcessingException, match="Cancelled by the user"):
+        processing.run(
+            "reliefgravity:anomalygrid",
+            {
+                "INPUT": plane_stations,
+                "FIELD": "cba",
+                "PIXEL_SIZE": 10.0,
+                "EXTENT": "499900,503100,4999900,5002100 [EPSG:32633]",
+                "BLANK_DISTANCE": 0,
+                "CONTOUR_INTERVAL": 0.1,
+                "OUTPUT": str(out_dir / "grid.tif"),
+                "CONTOURS": str(out_dir / "contours.gpkg"),
+            },
+            feedback=feedback,
+        )
+    assert sorted(p.name for p in out_dir.iterdir()) == []
+    if where == "solve":
+        # Cancelled inside the solve: progress stopped within the gridding step.
+        assert 25.0 < max(seen) < 50.0
+    else:
+        # Cancelled once the raster was written (75 %): the raster goes too.
+        assert max(seen) == 75.0
