@@ -41,6 +41,10 @@ class BlockLevel:
     row_offset, col_offset : numpy.ndarray
         Centroid of that part relative to the block centre, in raster cells
         (row offset positive southward).
+    row_height_cov, col_height_cov : numpy.ndarray
+        Covariance of height with row and with column position over that
+        part (m x cells): the tilt of the terrain inside the block, which
+        enters the column kernel at second order.
     """
 
     factor: int
@@ -51,9 +55,15 @@ class BlockLevel:
     variance: np.ndarray
     row_offset: np.ndarray
     col_offset: np.ndarray
+    row_height_cov: np.ndarray | None = None
+    col_height_cov: np.ndarray | None = None
     has_offsets: bool = field(init=False)
 
     def __post_init__(self) -> None:
+        if self.row_height_cov is None:
+            self.row_height_cov = np.zeros_like(self.weight)
+        if self.col_height_cov is None:
+            self.col_height_cov = np.zeros_like(self.weight)
         # Full-resolution levels without exclusions have centred cells; the
         # engine then uses a cheaper separable geometry.
         self.has_offsets = bool(np.any(self.row_offset) or np.any(self.col_offset))
@@ -155,13 +165,15 @@ def block_statistics(
     variance = np.zeros(shape)
     row_off = np.zeros(shape)
     col_off = np.zeros(shape)
+    row_cov = np.zeros(shape)
+    col_cov = np.zeros(shape)
     b = int(factor)
     centre = (b - 1) / 2.0
     # Only the part of the window inside the raster is ever read.
     gc0 = max(block_col0 * b, 0)
     gc1 = min((block_col0 + shape[1]) * b, grid.n_cols)
     if gc1 <= gc0 or shape[0] == 0:
-        return BlockLevel(b, block_row0, block_col0, weight, mean, variance, row_off, col_off)
+        return BlockLevel(b, block_row0, block_col0, weight, mean, variance, row_off, col_off, row_cov, col_cov)
     cols = np.arange(gc0, gc1)
     col_block = cols // b - block_col0
     starts = np.r_[0, np.nonzero(np.diff(col_block))[0] + 1]
@@ -176,7 +188,7 @@ def block_statistics(
         r0, r1 = max(row0, 0), min(row0 + b, grid.n_rows)
         if r1 <= r0:
             continue
-        acc = np.zeros((5, gc1 - gc0))
+        acc = np.zeros((7, gc1 - gc0))
         for s0 in range(r0, r1, rows_per_read):
             if is_cancelled is not None and is_cancelled():
                 raise TerrainCancelled("terrain correction cancelled")
@@ -203,8 +215,12 @@ def block_statistics(
             acc[0] += w.sum(axis=0)
             acc[1] += wh.sum(axis=0)
             acc[2] += (wh * h).sum(axis=0)
-            acc[3] += (w * (row_local + row_shift)).sum(axis=0)
-            acc[4] += (w * (col_local[None, :] + col_shift)).sum(axis=0)
+            w_row = w * (row_local + row_shift)
+            w_col = w * (col_local[None, :] + col_shift)
+            acc[3] += w_row.sum(axis=0)
+            acc[4] += w_col.sum(axis=0)
+            acc[5] += (w_row * h).sum(axis=0)
+            acc[6] += (w_col * h).sum(axis=0)
         sums = np.add.reduceat(acc, starts, axis=1)
         sum_w = sums[0]
         ok = sum_w > 0
@@ -213,6 +229,11 @@ def block_statistics(
         weight[bi, target] = sum_w / (b * b)
         mean[bi, target] = m
         variance[bi, target] = np.where(ok, np.clip(sums[2] / safe - m * m, 0.0, None), 0.0)
-        row_off[bi, target] = np.where(ok, sums[3] / safe, 0.0)
-        col_off[bi, target] = np.where(ok, sums[4] / safe, 0.0)
-    return BlockLevel(b, block_row0, block_col0, weight, mean, variance, row_off, col_off)
+        r_mean = np.where(ok, sums[3] / safe, 0.0)
+        c_mean = np.where(ok, sums[4] / safe, 0.0)
+        row_off[bi, target] = r_mean
+        col_off[bi, target] = c_mean
+        if b > 1:
+            row_cov[bi, target] = np.where(ok, sums[5] / safe - r_mean * m, 0.0)
+            col_cov[bi, target] = np.where(ok, sums[6] / safe - c_mean * m, 0.0)
+    return BlockLevel(b, block_row0, block_col0, weight, mean, variance, row_off, col_off, row_cov, col_cov)

@@ -60,7 +60,7 @@ def test_density_scales_linearly_and_fields_are_added(provider, stations_gpkg, h
     assert np.all(_values(a, "tc_inner") >= 0)
     # The 12 km DEM does not reach 20 km: coverage is reported and flagged.
     assert np.all(_values(a, "tc_cover") < 1.0)
-    assert all("cover" in flag for flag in (f["qc_flag"] for f in a.getFeatures()))
+    assert all("tc_partial" in flag for flag in (f["qc_flag"] for f in a.getFeatures()))
 
 
 def test_station_height_differs_from_dem_is_reported(provider, make_points, station_rows, hill_dem):
