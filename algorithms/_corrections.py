@@ -15,8 +15,10 @@ import numpy.typing as npt
 
 from .constants import (
     BOUGUER_CAP_RADIUS,
+    DEFAULT_REDUCTION_DENSITY,
     GRAVITATIONAL_CONSTANT,
     LAFEHR_EARTH_RADIUS,
+    PLAUSIBLE_DENSITY,
     SI_TO_MGAL,
 )
 from ._normal_gravity import check_latitude
@@ -34,10 +36,6 @@ FREE_AIR_GRADIENT = 0.3086
 #: Wenzel (1985) atmospheric polynomial coefficients (mGal, mGal/m,
 #: mGal/m^2), as adopted by Hinze et al. (2005), REFERENCES.md section 3 [V2].
 WENZEL_COEFFICIENTS = (0.874, -9.9e-5, 3.56e-9)
-
-#: Plausible bulk density range for a Bouguer reduction, kg/m^3 (water to
-#: the densest common crustal rocks; common practice, no source).
-PLAUSIBLE_DENSITY = (1000.0, 3500.0)
 
 _HEIGHT_METHODS = ("second_order", "first_order")
 
@@ -145,7 +143,7 @@ def atmospheric_correction(height_m: npt.ArrayLike) -> np.ndarray:
 
 def bouguer_slab_correction(
     height_m: npt.ArrayLike,
-    density: npt.ArrayLike = 2670.0,
+    density: npt.ArrayLike = DEFAULT_REDUCTION_DENSITY,
     gravitational_constant: float = GRAVITATIONAL_CONSTANT,
 ) -> np.ndarray:
     """Attraction of the infinite Bouguer slab (Bullard A), in mGal.
@@ -215,7 +213,7 @@ def _curvature_thickness(h: np.ndarray, cap_radius: float, earth_radius: float) 
 
 def spherical_cap_correction(
     height_m: npt.ArrayLike,
-    density: npt.ArrayLike = 2670.0,
+    density: npt.ArrayLike = DEFAULT_REDUCTION_DENSITY,
     gravitational_constant: float = GRAVITATIONAL_CONSTANT,
     cap_radius: float = BOUGUER_CAP_RADIUS,
     earth_radius: float = LAFEHR_EARTH_RADIUS,
@@ -293,7 +291,7 @@ def spherical_cap_correction(
 
 def curvature_correction(
     height_m: npt.ArrayLike,
-    density: npt.ArrayLike = 2670.0,
+    density: npt.ArrayLike = DEFAULT_REDUCTION_DENSITY,
     gravitational_constant: float = GRAVITATIONAL_CONSTANT,
     cap_radius: float = BOUGUER_CAP_RADIUS,
     earth_radius: float = LAFEHR_EARTH_RADIUS,

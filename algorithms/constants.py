@@ -29,6 +29,10 @@ MEAN_EARTH_RADIUS = 6_371_008.7714
 #: Feet to metres (international foot).
 FOOT = 0.3048
 
+#: Plausible bulk density range for a Bouguer reduction, kg/m^3 (water to
+#: the densest common crustal rocks; common practice, no source).
+PLAUSIBLE_DENSITY = (1000.0, 3500.0)
+
 # --- Reference ellipsoids and normal-gravity formulas ------------------------
 # Appended below the scalar constants so that concurrent edits by other
 # contributors (who only append too) never conflict; hence the late import.

@@ -53,7 +53,7 @@ from ..algorithms.constants import (
     MEAN_EARTH_RADIUS,
     SI_TO_MGAL,
 )
-from ..algorithms.terrain import prism_gravity
+from ..algorithms.terrain import ElevationGrid, prism_gravity, sample_bilinear
 
 
 @dataclass(frozen=True)
@@ -408,31 +408,22 @@ def body_attraction(
 def bilinear_height(
     grid: HeightGrid, easting: npt.ArrayLike, northing: npt.ArrayLike, clamp: bool = False
 ) -> np.ndarray:
-    """Bilinear interpolation between cell centres (m).
+    """Bilinear interpolation between cell centres (m), by the plugin's own sampler.
 
-    Outside the lattice of cell centres (the outer half cell) the result is
-    NaN, or with ``clamp`` the value at the nearest point of the lattice.
+    The sampler and its NoData/edge rule are those of
+    ``algorithms/terrain/_sampling.py`` (the outer half cell takes the edge
+    values); outside the raster the result is NaN, or with ``clamp`` the value
+    at the nearest point of the raster.
     """
     x = np.asarray(easting, dtype=float)
     y = np.asarray(northing, dtype=float)
-    col = (x - grid.west) / grid.cell_size - 0.5
-    row = (grid.north - y) / grid.cell_size - 0.5
     if clamp:
-        col = np.clip(col, 0.0, grid.n_cols - 1)
-        row = np.clip(row, 0.0, grid.n_rows - 1)
-    ok = (col >= 0) & (row >= 0) & (col <= grid.n_cols - 1) & (row <= grid.n_rows - 1)
-    c0 = np.clip(np.floor(col).astype(int), 0, grid.n_cols - 2)
-    r0 = np.clip(np.floor(row).astype(int), 0, grid.n_rows - 2)
-    fc = col - c0
-    fr = row - r0
-    h = np.asarray(grid.heights, dtype=float)
-    val = (
-        h[r0, c0] * (1 - fc) * (1 - fr)
-        + h[r0, c0 + 1] * fc * (1 - fr)
-        + h[r0 + 1, c0] * (1 - fc) * fr
-        + h[r0 + 1, c0 + 1] * fc * fr
-    )
-    return np.where(ok, val, np.nan)
+        x = np.clip(x, grid.west, grid.east)
+        y = np.clip(y, grid.south, grid.north)
+    heights = np.asarray(grid.heights, dtype=float)
+    raster = ElevationGrid(grid.west, grid.north, grid.cell_size, grid.cell_size, grid.n_rows, grid.n_cols,
+                           lambda r0, c0, nr, nc: heights[r0 : r0 + nr, c0 : c0 + nc])
+    return sample_bilinear(raster, x, y)
 
 
 def observed_gravity(

@@ -90,6 +90,8 @@ def _output(child, child_output, name, description, x, y):
 
 def build_model():
     """The reduce -> grid -> contour model (QgsProcessingModelAlgorithm)."""
+    _register_checkout()
+    from relief_gravity.algorithms.constants import DEFAULT_REDUCTION_DENSITY
     from qgis.core import (
         QgsProcessing,
         QgsProcessingModelAlgorithm,
@@ -134,7 +136,7 @@ def build_model():
         QgsProcessingParameterRasterLayer(DEM, "Elevation raster (DEM, metres)"),
         QgsProcessingParameterNumber(
             DENSITY, "Reduction density (kg/m³)", type=QgsProcessingParameterNumber.Double,
-            defaultValue=2670.0, optional=True,
+            defaultValue=DEFAULT_REDUCTION_DENSITY, optional=True,
         ),
         QgsProcessingParameterRasterLayer(
             REGIONAL_DEM, "Regional elevation raster for the outer zone", optional=True

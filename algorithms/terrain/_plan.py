@@ -25,8 +25,9 @@ from dataclasses import dataclass
 import numpy as np
 
 from ..constants import MEAN_EARTH_RADIUS
+from ._errors import TerrainCancelled
 from ._grid import ElevationGrid
-from ._levels import BlockLevel, Rectangle, block_statistics
+from ._levels import BlockLevel, Rectangle, block_statistics, merge_blocks
 from ._sampling import station_cells
 
 #: Cells closer than this many cell sides are exact prisms (columns beyond;
@@ -37,6 +38,13 @@ PRISM_RATIO = 5.0
 #: Measured against exact prism sums (bench/README.md, tests): larger values
 #: are more accurate and cost more blocks per ring.
 BLOCK_RATIO = 14.0
+
+#: Half-width (in cells) of the full-resolution square around each station.
+FULL_RESOLUTION_CELLS = 28.0
+
+#: Largest window (cells) read once at full resolution to build every level
+#: of a grid by merging blocks; larger windows are read level by level.
+SINGLE_READ_CELLS = 4_000_000
 
 #: Largest span of stations (m) handled with one set of block windows; larger
 #: surveys are cut into tiles so that memory stays bounded.
@@ -130,7 +138,7 @@ def level_radii(metrics: Metrics, outer_radius: float) -> list[tuple[int, float]
     [(0, 840.0), (1, 1680.0), (2, 3120.0)]
     """
     c = metrics.c_max
-    h = max(BLOCK_RATIO * 2.0 * c, PRISM_RATIO * c)
+    h = max(FULL_RESOLUTION_CELLS * c, PRISM_RATIO * c)
     if h >= outer_radius:
         return [(0, outer_radius + c)]
     levels = [(0, h)]
@@ -320,7 +328,7 @@ def plan_grid(
     levels = level_radii(metrics, outer_radius)
     row, col = station_cells(grid, x, y)
     windows = []
-    stats = []
+    ranges = []
     for idx, (k, half) in enumerate(levels):
         align = 2 ** (levels[idx + 1][0]) if idx + 1 < len(levels) else 2**k
         my = int(math.ceil(half / metrics.cy))
@@ -336,7 +344,29 @@ def plan_grid(
         gc0, gc1 = -1, -(-grid.n_cols // b) + 1
         cr0, cr1 = max(br0, gr0), max(min(br1, gr1), max(br0, gr0))
         cc0, cc1 = max(bc0, gc0), max(min(bc1, gc1), max(bc0, gc0))
-        stats.append(block_statistics(grid, cr0, cc0, cr1 - cr0, cc1 - cc0, b, exclude, is_cancelled))
+        ranges.append((b, cr0, cc0, cr1, cc1))
+    # When the union of all windows is small, read the raster once at full
+    # resolution and build every coarser level by merging blocks.
+    b0, cr0, cc0, cr1, cc1 = ranges[0]
+    union = [min(cr0, *(r[1] * r[0] for r in ranges)), min(cc0, *(r[2] * r[0] for r in ranges)),
+             max(cr1, *(r[3] * r[0] for r in ranges)), max(cc1, *(r[4] * r[0] for r in ranges))]
+    union = [max(union[0], -1), max(union[1], -1), min(union[2], grid.n_rows + 1), min(union[3], grid.n_cols + 1)]
+    if b0 == 1 and (union[2] - union[0]) * (union[3] - union[1]) <= SINGLE_READ_CELLS:
+        ranges[0] = (1, *union)
+    stats: list[BlockLevel] = []
+    for idx, (b, cr0, cc0, cr1, cc1) in enumerate(ranges):
+        # From a finer level already built when it holds the window (no
+        # raster read), else from the raster by strips.
+        lvl = None
+        for finer in reversed(stats):
+            lvl = merge_blocks(finer, b, cr0, cc0, cr1 - cr0, cc1 - cc0, (grid.n_rows, grid.n_cols))
+            if lvl is not None:
+                break
+        if lvl is None:
+            lvl = block_statistics(grid, cr0, cc0, cr1 - cr0, cc1 - cc0, b, exclude, is_cancelled)
+        stats.append(lvl)
+        if is_cancelled is not None and is_cancelled():
+            raise TerrainCancelled("terrain correction cancelled")
         if level_done is not None:
             level_done((idx + 1) / len(levels))
     return GridPlan(grid, levels, windows, stats, [block_table(grid, lvl) for lvl in stats], is_fine, exclude)

@@ -9,6 +9,8 @@ from qgis.core import QgsProcessingAlgorithm
 from qgis.PyQt.QtCore import QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
+from ...algorithms.constants import BOUGUER_CAP_RADIUS, DEFAULT_REDUCTION_DENSITY, FOOT
+
 ICON = Path(__file__).resolve().parent.parent.parent / "icons" / "relief_gravity.svg"
 
 #: Text every report and help page carries (DESIGN.md, Cautions).
@@ -48,7 +50,6 @@ class ReliefGravityAlgorithm(QgsProcessingAlgorithm):
 
 
 #: International foot in metres.
-FOOT = 0.3048
 
 
 def _tr(text: str) -> str:
@@ -103,7 +104,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
                 self.DENSITY,
                 _tr("Reduction density (kg/m³)"),
                 type=QgsProcessingParameterNumber.Double,
-                defaultValue=2670.0,
+                defaultValue=DEFAULT_REDUCTION_DENSITY,
             )
         )
 
@@ -118,7 +119,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
         ]
         for key, label, default in (
             (self.INNER_RADIUS, _tr("Inner zone radius (m)"), 2000.0),
-            (self.OUTER_RADIUS, _tr("Outer zone radius (m)"), 166735.0),
+            (self.OUTER_RADIUS, _tr("Outer zone radius (m)"), BOUGUER_CAP_RADIUS),
         ):
             definitions.append(
                 QgsProcessingParameterNumber(

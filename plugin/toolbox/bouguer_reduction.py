@@ -19,6 +19,7 @@ from qgis.core import (
 from qgis.PyQt.QtCore import QVariant
 
 from ...algorithms import REDUCTION_FIELDS, reduce_gravity
+from ...algorithms.constants import PLAUSIBLE_DENSITY
 from ..stations import write_stations
 from ..terrain_run import EXACT, compute_terrain, place_stations
 from .base import StationAlgorithm
@@ -26,7 +27,6 @@ from .field_checks import check_numeric_fields
 
 NORMAL_FORMULAS = ("grs80", "wgs84", "1967")
 HEIGHT_FORMULAS = ("second_order", "first_order")
-PLAUSIBLE_DENSITY = (1000.0, 3500.0)
 
 #: Fields added to the copy of the station layer (DESIGN.md), all mGal but
 #: qc_flag: the reduction's fields with the two terrain zones before their total.
