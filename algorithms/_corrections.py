@@ -24,17 +24,19 @@ from .constants import (
 from ._normal_gravity import check_latitude
 
 #: Hinze et al. (2005) second-order height correction coefficients
-#: (mGal/m, mGal/m, mGal/m^2), see REFERENCES.md section 2 [V2].
+#: (mGal/m, mGal/m, mGal/m^2), docs/reduction.md section 3
+#: (secondary: the same coefficients in several codes citing the paper).
 HINZE_LINEAR = 0.3087691
 HINZE_LATITUDE = 0.0004398
 HINZE_QUADRATIC = 7.2125e-8
 
 #: The classic free-air gradient, mGal/m (common practice; it is the GRS80
-#: normal gradient at 45 degrees, REFERENCES.md section 2).
+#: normal gradient at 45 degrees, docs/reduction.md section 3).
 FREE_AIR_GRADIENT = 0.3086
 
 #: Wenzel (1985) atmospheric polynomial coefficients (mGal, mGal/m,
-#: mGal/m^2), as adopted by Hinze et al. (2005), REFERENCES.md section 3 [V2].
+#: mGal/m^2), as adopted by Hinze et al. (2005), docs/reduction.md section 4
+#: (secondary).
 WENZEL_COEFFICIENTS = (0.874, -9.9e-5, 3.56e-9)
 
 _HEIGHT_METHODS = ("second_order", "first_order")

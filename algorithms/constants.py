@@ -107,7 +107,7 @@ GRS80 = Ellipsoid(
 )
 
 #: World Geodetic System 1984 (NIMA TR8350.2, 2000 -- from memory; the normal
-#: gravity values as quoted by a secondary source, see REFERENCES.md 1.1 [V2]).
+#: gravity values as quoted by a secondary source, docs/reduction.md section 2).
 WGS84 = Ellipsoid(
     name="wgs84",
     semimajor_axis=6_378_137.0,

@@ -382,7 +382,7 @@ def main(argv: list[str] | None = None) -> int:
     curv = terrain_reference.curvature_check()
     out("  curvature check, 1 x 1 km x 500 m column on the station's sphere, TC contribution (mGal): "
         + ", ".join(f"{d / 1000:g} km {v:+.6f}" for d, v in curv)
-        + " (REFERENCES.md section 5.7, lowered prism: +0.002162, +0.000004, -0.000005)")
+        + " (docs/terrain.md section 6, harmonica 0.7.0 prism lowered by s^2/2R: +0.002162, +0.000004, -0.000005)")
     conv = _REF.convergence(xa[:2], ya[:2], ha[:2])
     out(f"  convergence on 2 stations: halving the regional sub-prisms changes TC beyond 100 m by "
         f"{conv['regional_halving_max']:.1e} mGal; halving the 100 m-circle sub-prisms by "

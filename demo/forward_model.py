@@ -24,14 +24,14 @@ Model of the Earth used here (all heights above the ellipsoid, metres):
   lacks the atmospheric correction that GRS80 normal gravity contains;
 * normal gravity at the station is the exact GRS80 closed form at height and
   the atmosphere is the Wenzel polynomial, both taken from
-  ``relief_gravity.algorithms`` (checked there against REFERENCES §1.3, §3;
+  ``relief_gravity.algorithms`` (checked there against docs/reduction.md, sections 3 and 4;
   the reduction itself uses the Somigliana value plus the Hinze et al. 2005
   second-order height correction by default, a different route).
 
 Quadrature of the terrain: exact prisms (Nagy 1966) for fine cells within
 ``near_radius`` (default 3 km) and for regional cells within
-``regional_prism_radius`` (default 30 km); vertical line masses (REFERENCES
-§5.3) elsewhere, where the cell is at least 60 (fine) or 30 (regional) cell
+``regional_prism_radius`` (default 30 km); vertical line masses (docs/terrain.md,
+section 5) elsewhere, where the cell is at least 60 (fine) or 30 (regional) cell
 widths away and the line-mass error is below 0.05 % of those cells' small
 share. Cells straddling the 166 735 m circle are weighted by the fraction of
 their area inside it.
@@ -437,7 +437,7 @@ def observed_gravity(
 
     ``g_obs = gamma_GRS80(phi, h) - g_atm(h) + terrain + bodies + noise``:
     normal gravity already contains the atmosphere's mass, whose part above
-    the station does not pull on it (REFERENCES §3).
+    the station does not pull on it (docs/reduction.md, section 4).
     """
     h = np.asarray(station_height, dtype=float)
     return (

@@ -473,7 +473,8 @@ def minimum_curvature(
     tension : float, default 0.25
         Interior tension T in [0, 1]: 0 is the minimum-curvature
         (biharmonic) surface, 1 the harmonic (membrane) surface. 0.25 is the
-        figure recommended for potential-field data (REFERENCES.md §9).
+        figure recommended for potential-field data (the documentation of the
+        common open-source implementation of Smith & Wessel 1990).
     boundary_tension : float, optional
         Tension :math:`T_b` in the edge condition, in [0, 1]. Default: equal
         to ``tension``, the edge condition of Smith & Wessel (1990).
@@ -520,7 +521,8 @@ def minimum_curvature(
     the raster's resolution.
 
     *Several stations in one cell* are averaged (position and value), as
-    recommended for this method (REFERENCES.md §9); planes stay exact.
+    recommended for this method (Smith & Wessel 1990, Geophysics 55(3)
+    293-305); planes stay exact.
 
     *Off-node data* constrain their nearest node through a first-order Taylor
     expansion, :math:`u_k + \\delta_c\\,\\partial_c u + \\delta_r\\,\\partial_r u = d`

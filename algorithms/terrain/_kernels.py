@@ -55,7 +55,7 @@ def line_mass_gravity(
     .. math:: g_z = G\\rho A \\left[\\frac{1}{\\sqrt{s^2 + z_1^2}}
               - \\frac{1}{\\sqrt{s^2 + z_2^2}}\\right],
 
-    the exact vertical integral of a point-mass kernel; REFERENCES §5.3 gives
+    the exact vertical integral of a point-mass kernel; docs/terrain.md section 5 gives
     the case :math:`z_1 = 0`. The difference is evaluated without
     cancellation. The horizontal distance must be positive.
 
@@ -95,7 +95,7 @@ def column_terrain_effect(
     """Terrain-correction contribution of distant columns, in m^-1 x m^2.
 
     Multiply by G rho (and SI_TO_MGAL) to get mGal. Positive convention of
-    DESIGN.md: mass above the station and missing mass below both add.
+    docs/terrain.md section 1: mass above the station and missing mass below both add.
 
     Parameters
     ----------

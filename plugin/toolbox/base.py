@@ -13,7 +13,7 @@ from ...algorithms.constants import BOUGUER_CAP_RADIUS, DEFAULT_REDUCTION_DENSIT
 
 ICON = Path(__file__).resolve().parent.parent.parent / "icons" / "relief_gravity.svg"
 
-#: Text every report and help page carries (DESIGN.md, Cautions).
+#: Text every report and help page carries (README.md, "Caution").
 CAUTION = (
     "Results support interpretation only. Check every reduction against the "
     "survey's own ties and specifications; decisions on drilling, groundwater or "

@@ -28,7 +28,7 @@ from .field_checks import check_numeric_fields
 NORMAL_FORMULAS = ("grs80", "wgs84", "1967")
 HEIGHT_FORMULAS = ("second_order", "first_order")
 
-#: Fields added to the copy of the station layer (DESIGN.md), all mGal but
+#: Fields added to the copy of the station layer (docs/reduction.md, section 6), all mGal but
 #: qc_flag: the reduction's fields with the two terrain zones before their total.
 _TC_TOTAL_AT = REDUCTION_FIELDS.index("tc_total")
 RESULT_FIELDS = REDUCTION_FIELDS[:_TC_TOTAL_AT] + ("tc_inner", "tc_outer") + REDUCTION_FIELDS[_TC_TOTAL_AT:]

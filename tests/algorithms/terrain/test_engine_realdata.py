@@ -230,7 +230,7 @@ def test_rockies_geographic_outer_zone_vs_sphere(rockies):
     flat = terrain_correction(lon, lat, dem, grid, inner_radius=20000.0, curvature=False)
     for k in range(3):
         ref = spherical_far_reference(z, gt, lon[k], lat[k], dem[k], 20000.0, 166735.0)
-        # Flat frame lowered by s^2/2R vs the sphere: REFERENCES.md §5.7 finds
+        # Flat frame lowered by s^2/2R vs the sphere: docs/terrain.md section 6 finds
         # < 1 % for a single column; here the sum over 20-167 km agrees to
         # about 1e-3 mGal, while leaving curvature out is off by 0.2 mGal.
         assert r.tc_outer[k] == pytest.approx(ref, abs=0.003)
