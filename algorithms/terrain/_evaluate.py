@@ -254,13 +254,19 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     if lvl.weight.size == 0:
         return np.zeros(n_st), np.zeros(n_st), np.zeros(n_st)
     r_lo, r_hi, c_lo, c_hi = (a[bt.local] // b for a in plan.windows[level_index])
-    nr, nc = int((r_hi - r_lo).max()), int((c_hi - c_lo).max())
+    # Only the part of each window where the level has data is looked at.
+    box_r0, box_r1, box_c0, box_c1 = tab.data_box
+    r_lo, r_hi = np.maximum(r_lo, box_r0), np.minimum(r_hi, box_r1)
+    c_lo, c_hi = np.maximum(c_lo, box_c0), np.minimum(c_hi, box_c1)
+    nr, nc = int(max((r_hi - r_lo).max(), 0)), int(max((c_hi - c_lo).max(), 0))
+    if nr == 0 or nc == 0:
+        return np.zeros(n_st), np.zeros(n_st), np.zeros(n_st)
     rows = r_lo[:, None] + np.arange(nr)[None, :]
     cols = c_lo[:, None] + np.arange(nc)[None, :]
     ri = rows - lvl.block_row0
     ci = cols - lvl.block_col0
-    row_ok = (ri >= 0) & (ri < n_br) & (rows < r_hi[:, None])
-    col_ok = (ci >= 0) & (ci < n_bc) & (cols < c_hi[:, None])
+    row_ok = (ri < n_br) & (rows < r_hi[:, None])
+    col_ok = (ci < n_bc) & (cols < c_hi[:, None])
     valid = row_ok[:, :, None] & col_ok[:, None, :]
     if level_index > 0:
         # The ring of this level: leave out the square of the finer level.
@@ -274,7 +280,8 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
         near_c = (cols == bt.cell_col[:, None]) | (cols == bt.cell_col[:, None] + 1)
         valid &= ~(near_r[:, :, None] & near_c[:, None, :])
     # Gather only the blocks of the rings that have data.
-    dense = np.minimum(np.maximum(ri, 0), n_br - 1)[:, :, None] * n_bc + np.minimum(np.maximum(ci, 0), n_bc - 1)[:, None, :]
+    index_type = np.int32 if n_br * n_bc < 2**31 else np.int64
+    dense = (np.minimum(ri, n_br - 1).astype(index_type) * n_bc)[:, :, None] + np.minimum(ci, n_bc - 1).astype(index_type)[:, None, :]
     valid &= tab.has_data[dense]
     counts = valid.sum(axis=(1, 2))
     flat = dense[valid]

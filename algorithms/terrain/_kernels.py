@@ -187,22 +187,27 @@ def column_kernel(s2, dx, dy, relief, drop, side_x, side_y, area, variance=0.0, 
         q_ref = s2 + d2
     r_ref = np.sqrt(q_ref)
     t_ref = q_ref * q_ref * r_ref
-    # Leading part without cancellation: u(d) - u(c) = (c^2 - d^2) / (r_d r_c (r_d + r_c)).
-    total = (c2 - d2) / (r_ref * r_top * (r_ref + r_top))
+    # Leading part without cancellation: u(d) - u(c) = (c^2 - d^2) / (r_d r_c (r_d + r_c)),
+    # c^2 - d^2 = relief (relief - 2 d).
+    total = relief * (relief - 2.0 * drop) / (r_ref * r_top * (r_ref + r_top))
     square = np.ndim(side_x) == 0 and np.ndim(side_y) == 0 and side_x == side_y
     if square:
         a = side_x * side_x / 24.0
         total += a * (s2 - 2.0 * d2) / t_ref
-        total += (0.5 * variance - a) * (s2 - 2.0 * c2) / t_top
-    else:
-        # (a^2 u_xx + b^2 u_yy) / 24 at both ends, u_xx = (3x^2 - q) / q^(5/2).
-        ax = side_x * side_x / 24.0
-        ay = side_y * side_y / 24.0
-        p = 3.0 * (ax * dx * dx + ay * dy * dy)
-        sa = ax + ay
-        total += (p - sa * q_ref) / t_ref - (p - sa * q_top) / t_top
-        if np.any(np.asarray(variance) > 0):
-            total -= 0.5 * variance * (2.0 * c2 - s2) / t_top
+        top = (0.5 * variance - a) * (s2 - 2.0 * c2)
+        if cov_east is not None:
+            top -= 3.0 * c_top * (dx * cov_east + dy * cov_north)
+        total += top / t_top
+        total *= area
+        return total
+    # (a^2 u_xx + b^2 u_yy) / 24 at both ends, u_xx = (3x^2 - q) / q^(5/2).
+    ax = side_x * side_x / 24.0
+    ay = side_y * side_y / 24.0
+    p = 3.0 * (ax * dx * dx + ay * dy * dy)
+    sa = ax + ay
+    total += (p - sa * q_ref) / t_ref - (p - sa * q_top) / t_top
+    if np.any(np.asarray(variance) > 0):
+        total -= 0.5 * variance * (2.0 * c2 - s2) / t_top
     if cov_east is not None:
         total -= 3.0 * c_top * (dx * cov_east + dy * cov_north) / t_top
     total *= area

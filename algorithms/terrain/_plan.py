@@ -194,6 +194,9 @@ class BlockTable:
         True where the block has data.
     half_diagonal : float
         Largest half diagonal of a block (m).
+    data_box : (int, int, int, int)
+        Block rows and columns [row0, row1) x [col0, col1) (absolute block
+        indices) outside which the level has no data.
     """
 
     x: np.ndarray
@@ -207,6 +210,7 @@ class BlockTable:
     side_y: float
     has_data: np.ndarray
     half_diagonal: float
+    data_box: tuple[int, int, int, int]
 
 
 def block_table(grid: ElevationGrid, lvl: BlockLevel) -> BlockTable:
@@ -237,6 +241,14 @@ def block_table(grid: ElevationGrid, lvl: BlockLevel) -> BlockTable:
         widest = side_x
     metric_x = side_x.reshape(y.shape) / b if grid.geographic else side_x / b
     area = (lvl.weight * side_y * (metric_x * b)).ravel()
+    has = lvl.weight > 0
+    rows = np.flatnonzero(has.any(axis=1))
+    cols = np.flatnonzero(has.any(axis=0))
+    if rows.size:
+        box = (int(rows[0]) + lvl.block_row0, int(rows[-1]) + 1 + lvl.block_row0,
+               int(cols[0]) + lvl.block_col0, int(cols[-1]) + 1 + lvl.block_col0)
+    else:
+        box = (lvl.block_row0, lvl.block_row0, lvl.block_col0, lvl.block_col0)
     return BlockTable(
         x=np.ascontiguousarray(x).ravel(),
         y=y.ravel(),
@@ -247,8 +259,9 @@ def block_table(grid: ElevationGrid, lvl: BlockLevel) -> BlockTable:
         cov_north=(lvl.row_height_cov * (-side_y / b)).ravel(),
         side_x=side_x,
         side_y=side_y,
-        has_data=(lvl.weight > 0).ravel(),
+        has_data=has.ravel(),
         half_diagonal=0.5 * math.hypot(widest, side_y),
+        data_box=box,
     )
 
 
