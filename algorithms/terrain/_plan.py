@@ -177,9 +177,17 @@ class BlockTable:
     Attributes
     ----------
     x, y : numpy.ndarray
-        Centroid of the part with data, in the grid's CRS.
+        Centroid of the part with data, in the grid's CRS (float64).
+    east, north : numpy.ndarray
+        The same relative to ``origin`` (float32; projected grids only, else
+        None): a tile spans at most a few hundred kilometres, where single
+        precision resolves 2 cm.
+    origin : (float, float)
+        The tile's reference point (grid CRS).
     area : numpy.ndarray
-        Area with data (m^2).
+        Area with data (m^2). This and the following arrays are float32: the
+        column terms are evaluated in single precision (see
+        :func:`~._evaluate.evaluate_level`).
     mean, variance : numpy.ndarray
         Mean height (m) and height variance (m^2) of that part.
     cov_east, cov_north : numpy.ndarray
@@ -197,10 +205,16 @@ class BlockTable:
     data_box : (int, int, int, int)
         Block rows and columns [row0, row1) x [col0, col1) (absolute block
         indices) outside which the level has no data.
+    missing_table : numpy.ndarray
+        Summed-area table of blocks without data (shape + 1), to tell at once
+        whether a window has any.
     """
 
     x: np.ndarray
     y: np.ndarray
+    east: np.ndarray | None
+    north: np.ndarray | None
+    origin: tuple[float, float]
     area: np.ndarray
     mean: np.ndarray
     variance: np.ndarray
@@ -211,9 +225,10 @@ class BlockTable:
     has_data: np.ndarray
     half_diagonal: float
     data_box: tuple[int, int, int, int]
+    missing_table: np.ndarray
 
 
-def block_table(grid: ElevationGrid, lvl: BlockLevel) -> BlockTable:
+def block_table(grid: ElevationGrid, lvl: BlockLevel, origin: tuple[float, float] = (0.0, 0.0)) -> BlockTable:
     """The :class:`BlockTable` of one level's block statistics.
 
     Examples
@@ -221,7 +236,7 @@ def block_table(grid: ElevationGrid, lvl: BlockLevel) -> BlockTable:
     >>> from ._levels import block_statistics
     >>> g = ElevationGrid.from_array([[0.0, 2.0], [np.nan, 4.0]], 0, 20, 10, 10)
     >>> t = block_table(g, block_statistics(g, 0, 0, 1, 1, 2))
-    >>> t.area.tolist(), t.x.tolist(), t.y.tolist(), t.side_x
+    >>> t.area.tolist(), t.x.tolist(), t.y.tolist(), float(t.side_x)
     ([300.0], [11.666666666666664], [11.666666666666666], 20.0)
     """
     b = lvl.factor
@@ -249,16 +264,23 @@ def block_table(grid: ElevationGrid, lvl: BlockLevel) -> BlockTable:
                int(cols[0]) + lvl.block_col0, int(cols[-1]) + 1 + lvl.block_col0)
     else:
         box = (lvl.block_row0, lvl.block_row0, lvl.block_col0, lvl.block_col0)
+    f32 = np.float32
+    missing = np.zeros((has.shape[0] + 1, has.shape[1] + 1), dtype=np.int64)
+    missing[1:, 1:] = np.cumsum(np.cumsum(~has, axis=0), axis=1)
     return BlockTable(
         x=np.ascontiguousarray(x).ravel(),
         y=y.ravel(),
-        area=area,
-        mean=lvl.mean.ravel(),
-        variance=lvl.variance.ravel(),
-        cov_east=(lvl.col_height_cov * metric_x).ravel(),
-        cov_north=(lvl.row_height_cov * (-side_y / b)).ravel(),
-        side_x=side_x,
-        side_y=side_y,
+        east=None if grid.geographic else (np.ascontiguousarray(x).ravel() - origin[0]).astype(f32),
+        north=None if grid.geographic else (y.ravel() - origin[1]).astype(f32),
+        origin=origin,
+        missing_table=missing,
+        area=area.astype(f32),
+        mean=lvl.mean.ravel().astype(f32),
+        variance=lvl.variance.ravel().astype(f32),
+        cov_east=(lvl.col_height_cov * metric_x).ravel().astype(f32),
+        cov_north=(lvl.row_height_cov * (-side_y / b)).ravel().astype(f32),
+        side_x=side_x.astype(f32) if grid.geographic else f32(side_x),
+        side_y=f32(side_y),
         has_data=has.ravel(),
         half_diagonal=0.5 * math.hypot(widest, side_y),
         data_box=box,
@@ -382,7 +404,8 @@ def plan_grid(
             raise TerrainCancelled("terrain correction cancelled")
         if level_done is not None:
             level_done((idx + 1) / len(levels))
-    return GridPlan(grid, levels, windows, stats, [block_table(grid, lvl) for lvl in stats], is_fine, exclude)
+    origin = tile_origin(grid, x, y) if not grid.geographic else (0.0, 0.0)
+    return GridPlan(grid, levels, windows, stats, [block_table(grid, lvl, origin) for lvl in stats], is_fine, exclude)
 
 
 def tiles(grid: ElevationGrid, x: np.ndarray, y: np.ndarray, todo: np.ndarray) -> list[np.ndarray]:
@@ -403,7 +426,24 @@ def tiles(grid: ElevationGrid, x: np.ndarray, y: np.ndarray, todo: np.ndarray) -
         span_x = span_y / max(math.cos(math.radians(float(np.max(np.abs(y[idx]))))), 0.05)
     else:
         span_x = span_y = span
-    tx = np.floor((x[idx] - x[idx].min()) / span_x).astype(np.int64)
-    ty = np.floor((y[idx] - y[idx].min()) / span_y).astype(np.int64)
-    key = tx * (int(ty.max()) + 1) + ty
+    # Tiles are cells of a lattice anchored at the raster's corner, so a
+    # station's tile (and the tile's origin, see plan_grid) does not depend on
+    # the other stations of the run.
+    tx = np.floor((x[idx] - grid.x_origin) / span_x).astype(np.int64)
+    ty = np.floor((grid.y_origin - y[idx]) / span_y).astype(np.int64)
+    key = (tx - tx.min()) * (int(ty.max() - ty.min()) + 1) + (ty - ty.min())
     return [idx[key == kk] for kk in np.unique(key)]
+
+
+def tile_origin(grid: ElevationGrid, x: np.ndarray, y: np.ndarray) -> tuple[float, float]:
+    """Centre of the tile-lattice cell holding the stations (projected grids).
+
+    Examples
+    --------
+    >>> g = ElevationGrid.from_array([[0.0]], 0, 1e6, 1e6, 1e6)
+    >>> tile_origin(g, np.array([10.0, 20.0]), np.array([999_000.0]))
+    (30000.0, 970000.0)
+    """
+    col = math.floor((float(np.mean(x)) - grid.x_origin) / TILE_SPAN)
+    row = math.floor((grid.y_origin - float(np.mean(y))) / TILE_SPAN)
+    return grid.x_origin + (col + 0.5) * TILE_SPAN, grid.y_origin - (row + 0.5) * TILE_SPAN
