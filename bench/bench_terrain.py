@@ -310,6 +310,17 @@ def _engine_accuracy(out, scn, xa, ya, ha, own, within, beyond, ref_outer, terra
         f"tc_outer RMS {_stats(e_out)[0]:.4f}, max {_stats(e_out)[1]:.4f} mGal")
     flags = sorted({f for f in default.flags if f})
     out(f"  flags: {flags or 'none'}; coverage {np.nanmin(default.coverage):.4f}-{np.nanmax(default.coverage):.4f}")
+    fine_only = terrain_correction(xa, ya, ha, fine, None)
+    missing = default.tc_total - fine_only.tc_total
+    est = fine_only.truncation
+    err_t = est - missing
+    corr = float(np.corrcoef(est, missing)[0, 1]) if n_acc > 2 else float("nan")
+    out(f"\n[truncation] fine DEM alone (coverage {np.nanmean(fine_only.coverage):.3f} of the 166.7 km disc): "
+        f"the regional part it misses is {missing.mean():+.3f} mGal on average ({missing.min():+.3f}..{missing.max():+.3f});")
+    out(f"  the engine's estimate from the relief at the edge of coverage: {est.mean():+.3f} ({est.min():+.3f}.."
+        f"{est.max():+.3f}); estimate - missing: mean {err_t.mean():+.3f}, RMS {_stats(err_t)[0]:.3f}, "
+        f"max |.| {_stats(err_t)[1]:.3f} mGal; correlation {corr:.2f}; estimate >= missing at "
+        f"{int(np.sum(est >= missing))} of {n_acc} stations")
     out("\n[innermost ring] the 30 m square centred on the station (the engine's innermost model), "
         "mean over the sample (min..max), mGal:")
     d_flat = engine_cell - own["flat"]

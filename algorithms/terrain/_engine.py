@@ -28,6 +28,7 @@ import numpy as np
 import numpy.typing as npt
 
 from ._errors import TerrainCancelled
+from ._coverage import truncation_estimate
 from ._evaluate import Batch, Physics, evaluate_level
 from ._grid import ElevationGrid
 from ._innermost import innermost
@@ -58,6 +59,13 @@ class TerrainResult:
     coverage : numpy.ndarray
         Fraction (0-1) of the disc of radius ``outer_radius`` covered by data
         (NaN for stations not computed).
+    coverage_inner : numpy.ndarray
+        The same for the disc of ``inner_radius`` (a NoData hole near the
+        station shows here; 1 when the inner radius is 0).
+    truncation : numpy.ndarray
+        Estimate (mGal) of what the uncovered part of the disc would add,
+        from the relief near the edge of coverage (0 when covered; see
+        :func:`~._coverage.truncation_estimate`).
     flags : list of list of str
         Per station, codes of :data:`relief_gravity.algorithms.qc.VOCABULARY`
         (empty when clean).
@@ -69,6 +77,8 @@ class TerrainResult:
     dem_height: np.ndarray
     height_difference: np.ndarray
     coverage: np.ndarray
+    coverage_inner: np.ndarray
+    truncation: np.ndarray
     flags: list[list[str]]
 
 
@@ -119,6 +129,7 @@ def terrain_correction(
         Flags: ``outside_dem`` and ``no_height`` (NaN results),
         ``no_dem_at_station`` (innermost square left out), ``tc_partial``
         (the rasters cover less than 99 % of the disc of ``outer_radius``),
+        ``tc_gap_inner`` (less than 99 % of the inner zone has data),
         ``tc_density_reference`` (water with per-station densities: computed
         at the reference density).
 
@@ -178,6 +189,9 @@ def terrain_correction(
     tc_inner = np.full(n, np.nan)
     tc_outer = np.full(n, np.nan)
     coverage = np.zeros(n)
+    coverage_inner = np.zeros(n)
+    edge_mean = np.full(n, np.nan)
+    edge_square = np.full(n, np.nan)
     flags: list[list[str]] = [[] for _ in range(n)]
     inside = inside_extent(fine, xs, ys) & np.isfinite(xs) & np.isfinite(ys)
     dem_height = sample_bilinear(fine, xs, ys)
@@ -209,6 +223,7 @@ def terrain_correction(
             raise TerrainCancelled("terrain correction cancelled")
 
     disc = math.pi * model.outer_radius**2
+    inner_disc = math.pi * model.inner_radius**2
     for tile in groups:
         check()
         tx, ty = xs[tile], ys[tile]
@@ -227,43 +242,66 @@ def terrain_correction(
         origin = (level0.block_row0, level0.block_col0)
         base_r, base_c, _, _ = bilinear_setup(fine, tx, ty)
 
-        def one_batch(ch: range) -> tuple[np.ndarray, np.ndarray, np.ndarray, np.ndarray]:
+        def one_batch(ch: range) -> tuple[np.ndarray, ...]:
             loc = np.arange(ch.start, ch.stop)
             gi = tile[loc]
             bt = Batch(loc, xs[gi], ys[gi], hs[gi], base_r[loc], base_c[loc])
             inner = np.zeros(loc.size)
             outer = np.zeros(loc.size)
             area = np.zeros(loc.size)
+            area_in = np.zeros(loc.size)
+            # Relief statistics of the two outermost levels with data (the edge of coverage).
+            reach = np.zeros(loc.size)
+            last = np.zeros((3, loc.size))
+            before = np.zeros((3, loc.size))
             for plan in plans:
                 for li in range(len(plan.levels)):
-                    a, b, c = evaluate_level(plan, li, bt, physics)
-                    inner += a
-                    outer += b
-                    area += c
+                    r = evaluate_level(plan, li, bt, physics)
+                    inner += r.inner
+                    outer += r.outer
+                    area += r.covered
+                    area_in += r.covered_inner
+                    farther = (r.relief_area > 0) & (plan.levels[li][1] > reach)
+                    if np.any(farther):
+                        reach = np.where(farther, plan.levels[li][1], reach)
+                        sums = np.stack([r.relief_area, r.relief_sum, r.relief_square])
+                        before = np.where(farther, last, before)
+                        last = np.where(farther, sums, last)
             square, rest, rest_area, square_area = innermost(fine, bt.x, bt.y, bt.height, physics, window, origin)
             inner += rest
             area += rest_area
+            area_in += rest_area
             if field_tc is not None:
                 square = np.where(np.isfinite(field_tc[gi]), field_tc[gi], square)
             has = np.isfinite(square)
             inner = inner + np.where(has, square, 0.0)
             area = np.where(has, area + square_area, area)
-            return inner, outer, area, has
+            area_in = np.where(has, area_in + square_area, area_in)
+            edge = last + before
+            with np.errstate(invalid="ignore", divide="ignore"):
+                e_mean = edge[1] / edge[0]
+                e_square = edge[2] / edge[0]
+            return inner, outer, area, area_in, has, e_mean, e_square
 
         chunks = [range(i, min(i + CHUNK, len(tile))) for i in range(0, len(tile), CHUNK)]
         pool = ThreadPoolExecutor(max_workers=n_workers) if n_workers > 1 else None
         try:
             results = pool.map(one_batch, chunks) if pool is not None else (one_batch(ch) for ch in chunks)
-            for ch, (inner, outer, area, has) in zip(chunks, results):
+            for ch, (inner, outer, area, area_in, has, e_mean, e_square) in zip(chunks, results):
                 gi = tile[ch.start : ch.stop]
                 tc_inner[gi] = inner
                 tc_outer[gi] = outer
                 coverage[gi] = np.minimum(area / disc, 1.0)
-                for i, ok, cov in zip(gi, has, coverage[gi]):
+                coverage_inner[gi] = np.minimum(area_in / inner_disc, 1.0) if inner_disc > 0 else 1.0
+                edge_mean[gi] = e_mean
+                edge_square[gi] = e_square
+                for i, ok, cov, cov_in in zip(gi, has, coverage[gi], coverage_inner[gi]):
                     if not ok:
                         flags[i].append("no_dem_at_station")
                     if cov < COVERAGE_FLAG_BELOW:
                         flags[i].append("tc_partial")
+                    if cov_in < COVERAGE_FLAG_BELOW:
+                        flags[i].append("tc_gap_inner")
                 done += len(ch)
                 report(done / (total_work * (1 + setup_share)))
                 check()
@@ -279,13 +317,17 @@ def terrain_correction(
             flags[i].append("tc_density_reference")
     tc_inner = tc_inner * factor
     tc_outer = tc_outer * factor
+    covered = np.where(todo, coverage, np.nan)
+    truncation = truncation_estimate(covered, edge_mean, edge_square, model.outer_radius, physics.density, model.curvature)
     return TerrainResult(
         tc_inner=tc_inner,
         tc_outer=tc_outer,
         tc_total=tc_inner + tc_outer,
         dem_height=dem_height,
         height_difference=hs - dem_height,
-        coverage=np.where(todo, coverage, np.nan),
+        coverage=covered,
+        coverage_inner=np.where(todo, coverage_inner, np.nan),
+        truncation=truncation * factor,
         flags=flags,
     )
 

@@ -69,6 +69,43 @@ class Physics:
     curvature: bool
 
 
+@dataclass(frozen=True, eq=False)
+class LevelSums:
+    """What one level adds to each station of a batch (arrays of one value per station).
+
+    Attributes
+    ----------
+    inner, outer : numpy.ndarray
+        Terrain correction (mGal) counted to ``tc_inner`` and ``tc_outer``.
+    covered, covered_inner : numpy.ndarray
+        Area with data (m^2) inside the outer and inside the inner circle.
+    relief_area, relief_sum, relief_square : numpy.ndarray
+        Sums over the level's blocks with data of area, area x relief and
+        area x (relief^2 + height variance), relief relative to the station:
+        the relief statistics of the level, used to estimate what terrain
+        beyond the rasters' reach would add (docs/terrain.md, "Truncation").
+    """
+
+    inner: np.ndarray
+    outer: np.ndarray
+    covered: np.ndarray
+    covered_inner: np.ndarray
+    relief_area: np.ndarray
+    relief_sum: np.ndarray
+    relief_square: np.ndarray
+
+    @classmethod
+    def empty(cls, n: int) -> LevelSums:
+        """All zeros for ``n`` stations.
+
+        Examples
+        --------
+        >>> LevelSums.empty(2).inner.tolist()
+        [0.0, 0.0]
+        """
+        return cls(*(np.zeros(n) for _ in range(7)))
+
+
 def ground_offsets(grid: ElevationGrid, xs, ys, cx, cy) -> tuple[np.ndarray, np.ndarray]:
     """Ground offsets (m) east and north of points from the station(s).
 
@@ -229,8 +266,8 @@ def share_inside(s: np.ndarray, dx, dy, side_x, side_y, radius: float) -> np.nda
     return np.clip(0.5 + (radius - s) / np.maximum(width, 1e-9), 0.0, 1.0)
 
 
-def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics) -> tuple[np.ndarray, np.ndarray, np.ndarray]:
-    """Inner and outer terrain correction (mGal) and covered area (m^2) of one level.
+def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics) -> LevelSums:
+    """Terrain correction (mGal), covered areas and relief statistics of one level.
 
     Parameters
     ----------
@@ -245,13 +282,12 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
 
     Returns
     -------
-    inner, outer, covered : numpy.ndarray
-        One value per station of the batch. A block straddling the inner
-        circle is shared between ``inner`` and ``outer`` by the part of its
-        area inside (:func:`share_inside`); a block straddling the outer
-        circle counts by the part of it inside, in the correction and in
-        ``covered`` (the area with data), a full-resolution cell by its
-        centre in the correction.
+    LevelSums
+        A block straddling the inner circle is shared between ``inner`` and
+        ``outer`` (and counts to ``covered_inner``) by the part of its area
+        inside (:func:`share_inside`); a block straddling the outer circle
+        counts by the part of it inside, in the correction and in
+        ``covered``, a full-resolution cell by its centre in the correction.
 
     Examples
     --------
@@ -259,9 +295,9 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     >>> g = ElevationGrid.from_array(np.full((100, 100), 10.0), 0, 3000, 30, 30)
     >>> x = np.array([1500.0]); p = plan_grid(g, x, x, 1000.0, True, None, None)
     >>> bt = Batch(np.array([0]), x, x, x * 0, np.array([49]), np.array([49]))
-    >>> i, o, c = evaluate_level(p, 0, bt, Physics(2670.0, None, 500.0, 1000.0, False))
-    >>> bool(i[0] > 0 and o[0] > 0), bool(c[0] > 2.0e6)
-    (True, True)
+    >>> r = evaluate_level(p, 0, bt, Physics(2670.0, None, 500.0, 1000.0, False))
+    >>> bool(r.inner[0] > 0 and r.outer[0] > 0), bool(r.covered[0] > 2.0e6), bool(r.covered_inner[0] < 8e5)
+    (True, True, True)
     """
     k, _ = plan.levels[level_index]
     b = 2**k
@@ -271,7 +307,7 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     n_st = bt.local.size
     n_br, n_bc = lvl.weight.shape
     if lvl.weight.size == 0:
-        return np.zeros(n_st), np.zeros(n_st), np.zeros(n_st)
+        return LevelSums.empty(n_st)
     r_lo, r_hi, c_lo, c_hi = (a[bt.local] // b for a in plan.windows[level_index])
     # Only the part of each window where the level has data is looked at.
     box_r0, box_r1, box_c0, box_c1 = tab.data_box
@@ -279,7 +315,7 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     c_lo, c_hi = np.maximum(c_lo, box_c0), np.minimum(c_hi, box_c1)
     nr, nc = int(max((r_hi - r_lo).max(), 0)), int(max((c_hi - c_lo).max(), 0))
     if nr == 0 or nc == 0:
-        return np.zeros(n_st), np.zeros(n_st), np.zeros(n_st)
+        return LevelSums.empty(n_st)
     rows = r_lo[:, None] + np.arange(nr)[None, :]
     cols = c_lo[:, None] + np.arange(nc)[None, :]
     ri = rows - lvl.block_row0
@@ -328,9 +364,17 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     side_y = tab.side_y
     s2 = np.maximum(dx * dx + dy * dy, np.float32(1e-6))
     if s2.size == 0:
-        return np.zeros(n_st), np.zeros(n_st), np.zeros(n_st)
+        return LevelSums.empty(n_st)
     half = tab.half_diagonal
     outer = physics.outer_radius
+    inner_r = physics.inner_radius
+    # Area with data inside the inner circle, by the part of each block inside.
+    if s2.min() >= (inner_r + half) ** 2:
+        covered_inner = np.zeros(n_st)
+    elif inner_r > half and s2.max() <= (inner_r - half) ** 2:
+        covered_inner = _station_sums(owner, area, n_st)
+    else:
+        covered_inner = _station_sums(owner, area * share_inside(np.sqrt(s2), dx, dy, side_x, side_y, inner_r), n_st)
     rim = None
     if float(s2.max()) > (outer - half) ** 2:
         # Blocks at the rim count by the part of them inside the outer circle
@@ -359,7 +403,8 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     if rim is not None:
         tc *= rim
     total = _station_sums(owner, tc, n_st)
-    inner_r = physics.inner_radius
+    if rim is not None:
+        area = area * rim
     if tc.size == 0 or s2.min() >= (inner_r + half) ** 2:
         inner = np.zeros(n_st)
     elif inner_r > half and s2.max() <= (inner_r - half) ** 2:
@@ -367,7 +412,16 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     else:
         share = share_inside(np.sqrt(s2), dx, dy, side_x, side_y, inner_r)
         inner = _station_sums(owner, tc * share, n_st)
-    return inner, total - inner, covered
+    square = relief * relief + variance
+    return LevelSums(
+        inner=inner,
+        outer=total - inner,
+        covered=covered,
+        covered_inner=covered_inner,
+        relief_area=_station_sums(owner, area, n_st),
+        relief_sum=_station_sums(owner, area * relief, n_st),
+        relief_square=_station_sums(owner, area * square, n_st),
+    )
 
 
 def _exact_near_cells(plan, bt, owner, flat, area, dx, dy, s2, side_x, side_y, relief, tc, physics) -> None:
