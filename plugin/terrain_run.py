@@ -110,7 +110,8 @@ def compute_terrain(
                 is_cancelled=feedback.isCanceled,
             )
             table.flag_each(hammer.flags)
-            scale = model.density_factors(n)
+            # Linear in density: from the reference density to each station's.
+            scale = model.density_factors(n) / model.reference_density
             total = np.asarray(hammer.total, dtype=float) * scale
             if innermost_tc is not None:
                 # Hammer's zone A (station to 2 m) is the field-estimated part.

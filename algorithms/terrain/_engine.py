@@ -183,7 +183,7 @@ def terrain_correction(
     n_workers = workers if workers is not None else min(2, os.cpu_count() or 1)
     if n_workers < 1:
         raise ValueError(f"workers must be >= 1, got {workers}")
-    physics = Physics(model.reference_density, model.water_density, model.inner_radius, model.outer_radius, model.curvature)
+    physics = Physics(1.0, model.engine_water_density, model.inner_radius, model.outer_radius, model.curvature)
     field_tc = model.engine_innermost(n)
 
     tc_inner = np.full(n, np.nan)

@@ -12,13 +12,14 @@ Density handling (see ``docs/terrain.md``, "Density"):
 
 * one density: the engine runs at that density;
 * one density per station: the terrain correction of dry land is linear in
-  density, so the engine runs once at a reference density (the median) and
-  each station's result is scaled by its own density over the reference;
-  a field-estimated innermost value, already at the station's density, is
-  divided by that same factor before the engine adds it, so it comes back
-  unchanged. With water the correction is not proportional to the rock
-  density alone (the water layer keeps its own density), so every station is
-  computed at the reference density and flagged ``tc_density_reference``.
+  density, so the engine runs once at unit density and each station's result
+  is scaled by its own density (stations without one get the reference
+  density, the median); a field-estimated innermost value, already at the
+  station's density, is divided by that same factor before the engine adds
+  it, so it comes back unchanged. With water the correction is not
+  proportional to the rock density alone (the water layer keeps its own
+  density), so every station is computed at the reference density and
+  flagged ``tc_density_reference`` where its own differs.
 """
 
 from __future__ import annotations
@@ -69,7 +70,7 @@ class TerrainModel:
     >>> m.reference_density
     2650.0
     >>> m.density_factors(3).tolist()
-    [0.9811320754716981, 1.0188679245283019, 1.0]
+    [2600.0, 2700.0, 2650.0]
     >>> TerrainModel(inner_radius=-1.0)
     Traceback (most recent call last):
     ...
@@ -137,8 +138,19 @@ class TerrainModel:
         finite = self.density[np.isfinite(self.density)]
         return float(np.median(finite)) if finite.size else DEFAULT_REDUCTION_DENSITY
 
+    @property
+    def engine_water_density(self) -> float | None:
+        """Water density over the reference density: the engine runs at unit rock density.
+
+        Examples
+        --------
+        >>> TerrainModel(density=2000.0, water_density=1000.0).engine_water_density
+        0.5
+        """
+        return None if self.water_density is None else self.water_density / self.reference_density
+
     def density_factors(self, n: int) -> np.ndarray:
-        """Per-station density over the reference density (1 where NaN).
+        """Per-station factors that turn unit-density engine results into results at each station's density.
 
         Parameters
         ----------
@@ -148,19 +160,19 @@ class TerrainModel:
         Returns
         -------
         numpy.ndarray
-            Factors that scale results computed at the reference density.
-            All 1 with water (the water layer is not proportional to the rock
-            density).
+            The station's density (the reference where NaN); the reference
+            density for every station with water (the water layer is not
+            proportional to the rock density).
 
         Examples
         --------
-        >>> TerrainModel(density=2670.0).density_factors(2).tolist()
-        [1.0, 1.0]
+        >>> TerrainModel(density=[2600.0, np.nan]).density_factors(2).tolist()
+        [2600.0, 2600.0]
         """
         self.check_stations(n)
-        if not self.per_station_density or self.water_density is not None:
-            return np.ones(n)
-        return np.where(np.isfinite(self.density), self.density, self.reference_density) / self.reference_density
+        if self.water_density is not None or not self.per_station_density:
+            return np.full(n, self.reference_density)
+        return np.where(np.isfinite(self.density), self.density, self.reference_density)
 
     def check_stations(self, n: int) -> None:
         """Raise when a per-station array does not have ``n`` values.
@@ -204,7 +216,7 @@ class TerrainModel:
         Examples
         --------
         >>> TerrainModel(density=[2000.0, 4000.0], innermost_tc=[0.1, 0.2]).engine_innermost(2).tolist()
-        [0.15000000000000002, 0.15000000000000002]
+        [5e-05, 5e-05]
         """
         if self.innermost_tc is None:
             return None
