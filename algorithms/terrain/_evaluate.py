@@ -351,14 +351,11 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     # (geographic): each term is good to about 1e-6 of itself, far below the
     # model's own error, at half the cost.
     if grid.geographic:
-        xs, ys = np.repeat(np.stack([bt.x, bt.y]), counts, axis=1)
-        dx, dy = (d.astype(np.float32) for d in ground_offsets(grid, xs, ys, tab.x[flat], tab.y[flat]))
+        dx, dy = (d.astype(np.float32) for d in ground_offsets(grid, bt.x[owner], bt.y[owner], tab.x[flat], tab.y[flat]))
     else:
-        local = np.stack([bt.x - tab.origin[0], bt.y - tab.origin[1]]).astype(np.float32)
-        xs, ys = np.repeat(local, counts, axis=1)
-        dx = tab.east[flat] - xs
-        dy = tab.north[flat] - ys
-    heights = np.repeat(bt.height.astype(np.float32), counts)
+        dx = tab.east[flat] - (bt.x - tab.origin[0]).astype(np.float32)[owner]
+        dy = tab.north[flat] - (bt.y - tab.origin[1]).astype(np.float32)[owner]
+    heights = bt.height.astype(np.float32)[owner]
     area = tab.area[flat]
     side_x = tab.side_x[flat] if grid.geographic else tab.side_x
     side_y = tab.side_y
@@ -369,11 +366,11 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     outer = physics.outer_radius
     inner_r = physics.inner_radius
     # Area with data inside the inner circle, by the part of each block inside.
-    if s2.min() >= (inner_r + half) ** 2:
+    all_out = s2.min() >= (inner_r + half) ** 2
+    all_in = inner_r > half and s2.max() <= (inner_r - half) ** 2
+    if all_out:
         covered_inner = np.zeros(n_st)
-    elif inner_r > half and s2.max() <= (inner_r - half) ** 2:
-        covered_inner = _station_sums(owner, area, n_st)
-    else:
+    elif not all_in:
         covered_inner = _station_sums(owner, area * share_inside(np.sqrt(s2), dx, dy, side_x, side_y, inner_r), n_st)
     rim = None
     if float(s2.max()) > (outer - half) ** 2:
@@ -393,6 +390,9 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
             side_x = side_x[use]
     else:
         covered = _station_sums(owner, area, n_st)
+    if all_in:
+        # Inside the inner circle, hence inside the outer one.
+        covered_inner = covered
     mean = tab.mean[flat]
     variance = tab.variance[flat] if k > 0 else 0.0
     cov = (tab.cov_east[flat], tab.cov_north[flat]) if k > 0 else (None, None)

@@ -4,8 +4,8 @@
 Around each station the plane is tiled by nested squares (see
 ``docs/terrain.md``, "Zones and levels"):
 
-* level 0: full-resolution cells of a square of half-width at least
-  ``BLOCK_RATIO * 2`` cells (and ``PRISM_RATIO`` cells);
+* level 0: full-resolution cells of a square of half-width
+  ``FULL_RESOLUTION_CELLS`` (= 2 ``BLOCK_RATIO``, at least ``PRISM_RATIO``);
 * level k = 1, 2, ...: blocks of 2^k x 2^k cells in a square ring whose
   inner edge lies at least ``BLOCK_RATIO`` block sides from the station;
 * each square is aligned to the blocks of the next level, so the rings tile
@@ -35,12 +35,14 @@ from ._sampling import station_cells
 PRISM_RATIO = 5.0
 
 #: Each coarse ring starts at least this many block sides from the station.
-#: Measured against exact prism sums (bench/README.md, tests): larger values
-#: are more accurate and cost more blocks per ring.
-BLOCK_RATIO = 14.0
+#: Measured against exact prism sums (docs/terrain.md, "Zones and levels"):
+#: larger values are more accurate and cost more blocks per ring.
+BLOCK_RATIO = 13.0
 
-#: Half-width (in cells) of the full-resolution square around each station.
-FULL_RESOLUTION_CELLS = 28.0
+#: Half-width (in cells) of the full-resolution square around each station;
+#: at least 2 BLOCK_RATIO, so that the first ring of 2-cell blocks starts far
+#: enough out.
+FULL_RESOLUTION_CELLS = 2.0 * BLOCK_RATIO
 
 #: Largest window (cells) read once at full resolution to build every level
 #: of a grid by merging blocks; larger windows are read level by level.
@@ -135,7 +137,7 @@ def level_radii(metrics: Metrics, outer_radius: float) -> list[tuple[int, float]
     Examples
     --------
     >>> level_radii(Metrics(30.0, 30.0, 30.0), 3000.0)
-    [(0, 840.0), (1, 1680.0), (2, 3120.0)]
+    [(0, 780.0), (1, 1560.0), (2, 3120.0)]
     """
     c = metrics.c_max
     h = max(FULL_RESOLUTION_CELLS * c, PRISM_RATIO * c)
@@ -357,7 +359,7 @@ def plan_grid(
     >>> g = ElevationGrid.from_array(np.zeros((100, 100)), 0, 3000, 30, 30)
     >>> p = plan_grid(g, np.array([1500.0]), np.array([1500.0]), 1000.0, True, None, None)
     >>> [k for k, _ in p.levels], p.windows[0][0].tolist()
-    ([0, 1], [22])
+    ([0, 1], [24])
     """
     metrics = tile_metrics(grid, float(np.min(y)), float(np.max(y)), outer_radius)
     levels = level_radii(metrics, outer_radius)
