@@ -141,6 +141,8 @@ def compute_terrain(
         "tc_total": engine.tc_total,
         "dem_diff": engine.height_difference,
         "coverage": engine.coverage,
+        "coverage_inner": engine.coverage_inner,
+        "truncation": engine.truncation,
     }
 
 
