@@ -191,10 +191,12 @@ class BlockTable:
         column terms are evaluated in single precision (see
         :func:`~._evaluate.evaluate_level`).
     mean, variance : numpy.ndarray
-        Mean height (m) and height variance (m^2) of that part.
+        Mean height (m) and height variance (m^2) of that part (variance
+        empty for single cells).
     cov_east, cov_north : numpy.ndarray
         Covariance of height with the ground position east and north
-        (m^2): the tilt of the terrain inside the block.
+        (m^2): the tilt of the terrain inside the block (empty for single
+        cells).
     side_x : numpy.ndarray or float
         East-west side (m): one value on projected grids, per block on
         geographic ones.
@@ -267,20 +269,24 @@ def block_table(grid: ElevationGrid, lvl: BlockLevel, origin: tuple[float, float
     else:
         box = (lvl.block_row0, lvl.block_row0, lvl.block_col0, lvl.block_col0)
     f32 = np.float32
-    missing = np.zeros((has.shape[0] + 1, has.shape[1] + 1), dtype=np.int64)
-    missing[1:, 1:] = np.cumsum(np.cumsum(~has, axis=0), axis=1)
+    missing = np.zeros((has.shape[0] + 1, has.shape[1] + 1), dtype=np.int32)
+    np.cumsum(np.cumsum(~has, axis=0, dtype=np.int32), axis=1, out=missing[1:, 1:])
+    x = np.ascontiguousarray(x).ravel()
+    y = y.ravel()
+    # Full-resolution cells have no spread or tilt: their arrays are unused.
+    unused = np.zeros(0, dtype=f32)
     return BlockTable(
-        x=np.ascontiguousarray(x).ravel(),
-        y=y.ravel(),
-        east=None if grid.geographic else (np.ascontiguousarray(x).ravel() - origin[0]).astype(f32),
-        north=None if grid.geographic else (y.ravel() - origin[1]).astype(f32),
+        x=x,
+        y=y,
+        east=None if grid.geographic else (x - origin[0]).astype(f32),
+        north=None if grid.geographic else (y - origin[1]).astype(f32),
         origin=origin,
         missing_table=missing,
         area=area.astype(f32),
         mean=lvl.mean.ravel().astype(f32),
-        variance=lvl.variance.ravel().astype(f32),
-        cov_east=(lvl.col_height_cov * metric_x).ravel().astype(f32),
-        cov_north=(lvl.row_height_cov * (-side_y / b)).ravel().astype(f32),
+        variance=lvl.variance.ravel().astype(f32) if b > 1 else unused,
+        cov_east=(lvl.col_height_cov * metric_x).ravel().astype(f32) if b > 1 else unused,
+        cov_north=(lvl.row_height_cov * (-side_y / b)).ravel().astype(f32) if b > 1 else unused,
         side_x=side_x.astype(f32) if grid.geographic else f32(side_x),
         side_y=f32(side_y),
         has_data=has.ravel(),
