@@ -390,6 +390,7 @@ def plan_grid(
         ranges.append((b, cr0, cc0, cr1, cc1))
     # When the union of all windows is small, read the raster once at full
     # resolution and build every coarser level by merging blocks.
+    level0 = ranges[0]
     b0, cr0, cc0, cr1, cc1 = ranges[0]
     union = [min(cr0, *(r[1] * r[0] for r in ranges)), min(cc0, *(r[2] * r[0] for r in ranges)),
              max(cr1, *(r[3] * r[0] for r in ranges)), max(cc1, *(r[4] * r[0] for r in ranges))]
@@ -412,6 +413,14 @@ def plan_grid(
             raise TerrainCancelled("terrain correction cancelled")
         if level_done is not None:
             level_done((idx + 1) / len(levels))
+    if ranges[0] != level0:
+        # Level 0 was read over every window to build the others; the stations
+        # need only its own window.
+        _, r0, c0, r1, c1 = level0
+        full = stats[0]
+        sl = (slice(r0 - full.block_row0, r1 - full.block_row0), slice(c0 - full.block_col0, c1 - full.block_col0))
+        stats[0] = BlockLevel(1, r0, c0, *(a[sl] for a in (full.weight, full.mean, full.variance, full.row_offset,
+                                                           full.col_offset, full.row_height_cov, full.col_height_cov)))
     origin = tile_origin(grid, x, y) if not grid.geographic else (0.0, 0.0)
     return GridPlan(grid, levels, windows, stats, [block_table(grid, lvl, origin) for lvl in stats], is_fine, exclude)
 
