@@ -13,14 +13,14 @@ stays bounded by the block arrays themselves.
 from __future__ import annotations
 
 from dataclasses import dataclass, field
-from typing import Callable, Optional, Tuple
+from collections.abc import Callable
 
 import numpy as np
 
 from ._errors import TerrainCancelled
 from ._grid import ElevationGrid
 
-Rectangle = Tuple[float, float, float, float]  # west, east, south, north
+Rectangle = tuple[float, float, float, float]  # west, east, south, north
 
 
 @dataclass
@@ -68,7 +68,7 @@ class BlockLevel:
         # engine then uses a cheaper separable geometry.
         self.has_offsets = bool(np.any(self.row_offset) or np.any(self.col_offset))
 
-    def window(self, brow0: int, bcol0: int, brow1: int, bcol1: int) -> Tuple[np.ndarray, ...]:
+    def window(self, brow0: int, bcol0: int, brow1: int, bcol1: int) -> tuple[np.ndarray, ...]:
         """Views of the arrays for blocks [brow0, brow1) x [bcol0, bcol1).
 
         Parameters
@@ -97,7 +97,7 @@ class BlockLevel:
         return (self.weight[sl], self.mean[sl], self.variance[sl], self.row_offset[sl], self.col_offset[sl])
 
 
-def _outside_fraction(lo: np.ndarray, hi: np.ndarray, ex_lo: float, ex_hi: float) -> Tuple[np.ndarray, np.ndarray]:
+def _outside_fraction(lo: np.ndarray, hi: np.ndarray, ex_lo: float, ex_hi: float) -> tuple[np.ndarray, np.ndarray]:
     """Overlap fraction of intervals [lo, hi] with [ex_lo, ex_hi] and its centre.
 
     The centre is returned relative to the interval centre, in interval widths.
@@ -117,8 +117,8 @@ def block_statistics(
     n_block_rows: int,
     n_block_cols: int,
     factor: int,
-    exclude: Optional[Rectangle] = None,
-    is_cancelled: Optional[Callable[[], bool]] = None,
+    exclude: Rectangle | None = None,
+    is_cancelled: Callable[[], bool] | None = None,
 ) -> BlockLevel:
     """Block means, variances and centroids of a raster window, by strips.
 
@@ -246,8 +246,8 @@ def _cell_statistics(
     row0: int,
     col0: int,
     shape: tuple[int, int],
-    exclude: Optional[Rectangle],
-    is_cancelled: Optional[Callable[[], bool]],
+    exclude: Rectangle | None,
+    is_cancelled: Callable[[], bool] | None,
 ) -> BlockLevel:
     """:func:`block_statistics` for single cells, read in large strips."""
     weight = np.zeros(shape)
