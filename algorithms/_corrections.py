@@ -15,29 +15,29 @@ import numpy.typing as npt
 
 from .constants import (
     BOUGUER_CAP_RADIUS,
+    DEFAULT_REDUCTION_DENSITY,
     GRAVITATIONAL_CONSTANT,
     LAFEHR_EARTH_RADIUS,
+    PLAUSIBLE_DENSITY,
     SI_TO_MGAL,
 )
 from ._normal_gravity import check_latitude
 
 #: Hinze et al. (2005) second-order height correction coefficients
-#: (mGal/m, mGal/m, mGal/m^2), see REFERENCES.md section 2 [V2].
+#: (mGal/m, mGal/m, mGal/m^2), docs/reduction.md section 3
+#: (secondary: the same coefficients in several codes citing the paper).
 HINZE_LINEAR = 0.3087691
 HINZE_LATITUDE = 0.0004398
 HINZE_QUADRATIC = 7.2125e-8
 
 #: The classic free-air gradient, mGal/m (common practice; it is the GRS80
-#: normal gradient at 45 degrees, REFERENCES.md section 2).
+#: normal gradient at 45 degrees, docs/reduction.md section 3).
 FREE_AIR_GRADIENT = 0.3086
 
 #: Wenzel (1985) atmospheric polynomial coefficients (mGal, mGal/m,
-#: mGal/m^2), as adopted by Hinze et al. (2005), REFERENCES.md section 3 [V2].
+#: mGal/m^2), as adopted by Hinze et al. (2005), docs/reduction.md section 4
+#: (secondary).
 WENZEL_COEFFICIENTS = (0.874, -9.9e-5, 3.56e-9)
-
-#: Plausible bulk density range for a Bouguer reduction, kg/m^3 (water to
-#: the densest common crustal rocks; common practice, no source).
-PLAUSIBLE_DENSITY = (1000.0, 3500.0)
 
 _HEIGHT_METHODS = ("second_order", "first_order")
 
@@ -145,7 +145,7 @@ def atmospheric_correction(height_m: npt.ArrayLike) -> np.ndarray:
 
 def bouguer_slab_correction(
     height_m: npt.ArrayLike,
-    density: npt.ArrayLike = 2670.0,
+    density: npt.ArrayLike = DEFAULT_REDUCTION_DENSITY,
     gravitational_constant: float = GRAVITATIONAL_CONSTANT,
 ) -> np.ndarray:
     """Attraction of the infinite Bouguer slab (Bullard A), in mGal.
@@ -215,7 +215,7 @@ def _curvature_thickness(h: np.ndarray, cap_radius: float, earth_radius: float) 
 
 def spherical_cap_correction(
     height_m: npt.ArrayLike,
-    density: npt.ArrayLike = 2670.0,
+    density: npt.ArrayLike = DEFAULT_REDUCTION_DENSITY,
     gravitational_constant: float = GRAVITATIONAL_CONSTANT,
     cap_radius: float = BOUGUER_CAP_RADIUS,
     earth_radius: float = LAFEHR_EARTH_RADIUS,
@@ -293,7 +293,7 @@ def spherical_cap_correction(
 
 def curvature_correction(
     height_m: npt.ArrayLike,
-    density: npt.ArrayLike = 2670.0,
+    density: npt.ArrayLike = DEFAULT_REDUCTION_DENSITY,
     gravitational_constant: float = GRAVITATIONAL_CONSTANT,
     cap_radius: float = BOUGUER_CAP_RADIUS,
     earth_radius: float = LAFEHR_EARTH_RADIUS,

@@ -129,7 +129,7 @@ def complete_bouguer_anomaly(sba: npt.ArrayLike, tc_total: npt.ArrayLike) -> np.
     sba : array_like
         Simple Bouguer anomaly in mGal.
     tc_total : array_like
-        Total terrain correction in mGal (positive for relief, DESIGN.md).
+        Total terrain correction in mGal (positive for relief, docs/terrain.md section 1).
 
     Returns
     -------

@@ -29,6 +29,10 @@ MEAN_EARTH_RADIUS = 6_371_008.7714
 #: Feet to metres (international foot).
 FOOT = 0.3048
 
+#: Plausible bulk density range for a Bouguer reduction, kg/m^3 (water to
+#: the densest common crustal rocks; common practice, no source).
+PLAUSIBLE_DENSITY = (1000.0, 3500.0)
+
 # --- Reference ellipsoids and normal-gravity formulas ------------------------
 # Appended below the scalar constants so that concurrent edits by other
 # contributors (who only append too) never conflict; hence the late import.
@@ -103,7 +107,7 @@ GRS80 = Ellipsoid(
 )
 
 #: World Geodetic System 1984 (NIMA TR8350.2, 2000 -- from memory; the normal
-#: gravity values as quoted by a secondary source, see REFERENCES.md 1.1 [V2]).
+#: gravity values as quoted by a secondary source, docs/reduction.md section 2).
 WGS84 = Ellipsoid(
     name="wgs84",
     semimajor_axis=6_378_137.0,

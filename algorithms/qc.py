@@ -89,6 +89,8 @@ VOCABULARY = {
         ("no_dem_at_station", NOT_COMPUTED, "The elevation raster has no data at the station: no terrain correction."),
         ("tc_partial", WARNING, "The elevation rasters do not cover the whole correction area (see tc_cover)."),
         ("tc_no_data_zones", WARNING, "Some ring-and-sector compartments had no elevation data and count as flat."),
+        ("tc_gap_inner", WARNING, "The elevation rasters lack data over part of the inner zone (see the inner coverage)."),
+        ("tc_density_reference", INFO, "With water, the terrain correction uses the reference (median) density, not this station's."),
     ),
     # --- terrain correction: ring-and-sector (Hammer 1939) ------------------
     **_entries(

@@ -12,7 +12,7 @@ with ``g_z`` the exact downward attraction of a right rectangular prism
 excess mass above the station pulls up and missing mass below pulls less
 down, so both give TC > 0 on a flat Earth. Earth curvature: every prism (or
 sub-prism) is lowered by s^2 / (2R), s its centre's horizontal distance from
-the station and R = ``MEAN_EARTH_RADIUS`` (REFERENCES.md §5.7), so distant
+the station and R = ``MEAN_EARTH_RADIUS`` (docs/terrain.md section 6), so distant
 terrain can give negative contributions.
 
 No cell is ever averaged or approximated:
@@ -218,7 +218,7 @@ class Reference:
 def curvature_check(distances=(10_000.0, 50_000.0, 100_000.0)) -> list[tuple[float, float]]:
     """TC contribution (mGal) of a 1 km x 1 km x 500 m column standing on the
     station's sphere (station height 0) at the given distances: the case of
-    REFERENCES.md §5.7, whose lowered-prism column this must reproduce
+    docs/terrain.md section 6, whose lowered-prism column this must reproduce
     (positive near, negative once the column's middle is below the horizon).
     """
     return [(d, _tc_of_columns(np.array([d]), np.array([0.0]), 500.0, 500.0, np.array([500.0]), 2670.0))

@@ -24,14 +24,14 @@ Model of the Earth used here (all heights above the ellipsoid, metres):
   lacks the atmospheric correction that GRS80 normal gravity contains;
 * normal gravity at the station is the exact GRS80 closed form at height and
   the atmosphere is the Wenzel polynomial, both taken from
-  ``relief_gravity.algorithms`` (checked there against REFERENCES §1.3, §3;
+  ``relief_gravity.algorithms`` (checked there against docs/reduction.md, sections 3 and 4;
   the reduction itself uses the Somigliana value plus the Hinze et al. 2005
   second-order height correction by default, a different route).
 
 Quadrature of the terrain: exact prisms (Nagy 1966) for fine cells within
 ``near_radius`` (default 3 km) and for regional cells within
-``regional_prism_radius`` (default 30 km); vertical line masses (REFERENCES
-§5.3) elsewhere, where the cell is at least 60 (fine) or 30 (regional) cell
+``regional_prism_radius`` (default 30 km); vertical line masses (docs/terrain.md,
+section 5) elsewhere, where the cell is at least 60 (fine) or 30 (regional) cell
 widths away and the line-mass error is below 0.05 % of those cells' small
 share. Cells straddling the 166 735 m circle are weighted by the fraction of
 their area inside it.
@@ -53,7 +53,7 @@ from ..algorithms.constants import (
     MEAN_EARTH_RADIUS,
     SI_TO_MGAL,
 )
-from ..algorithms.terrain import prism_gravity
+from ..algorithms.terrain import ElevationGrid, prism_gravity, sample_bilinear
 
 
 @dataclass(frozen=True)
@@ -408,31 +408,22 @@ def body_attraction(
 def bilinear_height(
     grid: HeightGrid, easting: npt.ArrayLike, northing: npt.ArrayLike, clamp: bool = False
 ) -> np.ndarray:
-    """Bilinear interpolation between cell centres (m).
+    """Bilinear interpolation between cell centres (m), by the plugin's own sampler.
 
-    Outside the lattice of cell centres (the outer half cell) the result is
-    NaN, or with ``clamp`` the value at the nearest point of the lattice.
+    The sampler and its NoData/edge rule are those of
+    ``algorithms/terrain/_sampling.py`` (the outer half cell takes the edge
+    values); outside the raster the result is NaN, or with ``clamp`` the value
+    at the nearest point of the raster.
     """
     x = np.asarray(easting, dtype=float)
     y = np.asarray(northing, dtype=float)
-    col = (x - grid.west) / grid.cell_size - 0.5
-    row = (grid.north - y) / grid.cell_size - 0.5
     if clamp:
-        col = np.clip(col, 0.0, grid.n_cols - 1)
-        row = np.clip(row, 0.0, grid.n_rows - 1)
-    ok = (col >= 0) & (row >= 0) & (col <= grid.n_cols - 1) & (row <= grid.n_rows - 1)
-    c0 = np.clip(np.floor(col).astype(int), 0, grid.n_cols - 2)
-    r0 = np.clip(np.floor(row).astype(int), 0, grid.n_rows - 2)
-    fc = col - c0
-    fr = row - r0
-    h = np.asarray(grid.heights, dtype=float)
-    val = (
-        h[r0, c0] * (1 - fc) * (1 - fr)
-        + h[r0, c0 + 1] * fc * (1 - fr)
-        + h[r0 + 1, c0] * (1 - fc) * fr
-        + h[r0 + 1, c0 + 1] * fc * fr
-    )
-    return np.where(ok, val, np.nan)
+        x = np.clip(x, grid.west, grid.east)
+        y = np.clip(y, grid.south, grid.north)
+    heights = np.asarray(grid.heights, dtype=float)
+    raster = ElevationGrid(grid.west, grid.north, grid.cell_size, grid.cell_size, grid.n_rows, grid.n_cols,
+                           lambda r0, c0, nr, nc: heights[r0 : r0 + nr, c0 : c0 + nc])
+    return sample_bilinear(raster, x, y)
 
 
 def observed_gravity(
@@ -446,7 +437,7 @@ def observed_gravity(
 
     ``g_obs = gamma_GRS80(phi, h) - g_atm(h) + terrain + bodies + noise``:
     normal gravity already contains the atmosphere's mass, whose part above
-    the station does not pull on it (REFERENCES §3).
+    the station does not pull on it (docs/reduction.md, section 4).
     """
     h = np.asarray(station_height, dtype=float)
     return (

@@ -47,6 +47,12 @@ def _register_checkout():
     return forward_model
 
 
+def _reduction_density() -> float:
+    from relief_gravity.algorithms.constants import DEFAULT_REDUCTION_DENSITY
+
+    return DEFAULT_REDUCTION_DENSITY
+
+
 fm = _register_checkout()
 
 NAME = "corvahl"
@@ -60,7 +66,7 @@ REGIONAL_CELL = 1_000.0
 REGIONAL_HALF = 200_000.0  # regional DEM: 400 km x 400 km
 SURVEY_HALF = 10_000.0  # stations inside the central 20 km x 20 km
 
-TERRAIN_DENSITY = 2670.0  # kg/m^3, the reduction density, so the CBA gives back the bodies
+TERRAIN_DENSITY = _reduction_density()  # kg/m^3, the reduction density, so the CBA gives back the bodies
 SEDIMENT_CONTRAST = -450.0  # kg/m^3, basin fill against 2670 granite/basement
 SEDIMENT_TOP = 250.0  # m; flat top of the modelled deficit, below the lowest basin station
 SEDIMENT_MAX_THICKNESS = 1700.0  # m below SEDIMENT_TOP at the deepest point

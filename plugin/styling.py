@@ -310,7 +310,7 @@ class ContourStylePostProcessor(QgsProcessingLayerPostProcessorInterface):
 #: Every post-processor handed to QGIS, one per output, kept alive for the
 #: life of the process: QGIS holds only a C++ pointer, and a Python object
 #: held by the (short-lived) algorithm clone would be collected before the
-#: layer is loaded, leaving the style unapplied (QGIS-PRACTICE.md §3.6).
+#: layer is loaded, leaving the style unapplied (docs/processing-practice.md, "Styling outputs").
 _POST_PROCESSORS: list = []
 
 

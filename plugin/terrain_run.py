@@ -71,15 +71,14 @@ def compute_terrain(
     feedback,
     zones: str = "BCDEFGHIJKLM",
 ) -> dict:
-    """Terrain correction of every station, in mGal, with flags added to ``table``.
+    """Terrain correction of every station, in mGal, with flag codes added to ``table``.
 
-    The engine runs at one reference density; the terrain correction is linear
-    in density, so per-station densities scale the result (except where water
-    cells take their own density, where the reference density is used as given).
-    ``zones`` (ring-and-sector only): contiguous Hammer zone letters or a range
-    such as "B-M".
+    Opens the regional raster, builds the terrain model and calls the engine;
+    density handling and innermost values are the model's
+    (``algorithms/terrain/_model.py``). ``zones`` (ring-and-sector only):
+    contiguous Hammer zone letters or a range such as "B-M".
     """
-    from ..algorithms.terrain import TerrainCancelled, hammer_terrain_correction, terrain_correction
+    from ..algorithms.terrain import TerrainCancelled, TerrainModel, hammer_terrain_correction, terrain_correction
 
     fine, x, y = placed.raster, placed.x, placed.y
     regional_grid = None
@@ -89,21 +88,18 @@ def compute_terrain(
             feedback.pushInfo(_tr("Reprojecting the regional elevation raster to the CRS of the fine one."))
             regional = warp_to(regional, fine.crs_wkt)
         regional_grid = regional.elevation_grid()
-
-    density = np.broadcast_to(np.asarray(density, dtype=float), heights.shape)
-    finite_density = density[np.isfinite(density)]
-    reference_density = float(np.median(finite_density)) if finite_density.size else 2670.0
+    n = len(heights)
+    model = TerrainModel(
+        density=np.broadcast_to(np.asarray(density, dtype=float), (n,)),
+        water_density=water_density,
+        inner_radius=inner_radius,
+        outer_radius=outer_radius,
+        innermost_tc=innermost_tc,
+    )
 
     def progress(fraction: float) -> None:
         feedback.setProgress(100.0 * fraction)
 
-    n = len(heights)
-    result = {}
-    engine_innermost = innermost_tc
-    if innermost_tc is not None and water_density is None:
-        # Field estimates are at the station's own density; the engine result
-        # is scaled by density below, so pre-divide to keep them as given.
-        engine_innermost = innermost_tc * reference_density / np.where(density > 0, density, np.nan)
     try:
         if method == RING_SECTOR:
             # --- ring-and-sector (Hammer 1939): algorithms/terrain/_hammer.py ---
@@ -112,7 +108,7 @@ def compute_terrain(
                 y,
                 heights,
                 fine.elevation_grid(),
-                density=reference_density,
+                density=model.reference_density,
                 zones=zones,
                 regional=regional_grid,
                 inner_radius=inner_radius,
@@ -120,47 +116,40 @@ def compute_terrain(
                 is_cancelled=feedback.isCanceled,
             )
             table.flag_each(hammer.flags)
-            for key in ("tc_inner", "tc_outer", "tc_total"):
-                result[key] = np.array(getattr(hammer, key), dtype=float)
-            result["zones"] = {k: np.array(v, dtype=float) for k, v in hammer.zones.items()}
+            # Linear in density: from the reference density to each station's.
+            scale = model.density_factors(n) / model.reference_density
+            result = {key: np.array(getattr(hammer, key), dtype=float) * scale for key in ("tc_inner", "tc_outer", "tc_total")}
+            result["zones"] = {k: np.asarray(v, dtype=float) * scale for k, v in hammer.zones.items()}
             result["plane_zones"] = hammer.plane_zones
+            if innermost_tc is not None:
+                # Hammer's zone A (station to 2 m) is the field-estimated part (inner zone).
+                extra = np.where(np.isfinite(innermost_tc), innermost_tc, 0.0)
+                result["tc_inner"] = result["tc_inner"] + extra
+                result["tc_total"] = result["tc_total"] + extra
+            return result
             # --- end ring-and-sector ---
-        else:
-            engine = terrain_correction(
-                x,
-                y,
-                heights,
-                fine.elevation_grid(),
-                regional_grid,
-                inner_radius=inner_radius,
-                outer_radius=outer_radius,
-                density=reference_density,
-                water_density=water_density,
-                innermost_tc=engine_innermost,
-                progress=progress,
-                is_cancelled=feedback.isCanceled,
-            )
-            result["tc_inner"] = np.asarray(engine.tc_inner, dtype=float)
-            result["tc_outer"] = np.asarray(engine.tc_outer, dtype=float)
-            result["tc_total"] = np.asarray(engine.tc_total, dtype=float)
-            result["dem_diff"] = np.asarray(engine.height_difference, dtype=float)
-            result["coverage"] = np.asarray(engine.coverage, dtype=float)
-            table.flag_each(engine.flags)
+        engine = terrain_correction(
+            x,
+            y,
+            heights,
+            fine.elevation_grid(),
+            regional_grid,
+            model,
+            progress=progress,
+            is_cancelled=feedback.isCanceled,
+        )
     except TerrainCancelled as error:
         raise QgsProcessingException(_tr("Cancelled by the user.")) from error
-
-    if water_density is None:
-        scale = density / reference_density
-        for key in ("tc_inner", "tc_outer", "tc_total"):
-            result[key] = result[key] * scale
-        for key, values in result.get("zones", {}).items():
-            result["zones"][key] = values * scale
-    if innermost_tc is not None and method == RING_SECTOR:
-        # Hammer's zone A (station to 2 m) is the field-estimated part (inner zone).
-        extra = np.where(np.isfinite(innermost_tc), innermost_tc, 0.0)
-        result["tc_inner"] = result["tc_inner"] + extra
-        result["tc_total"] = result["tc_total"] + extra
-    return result
+    table.flag_each([";".join(codes) for codes in engine.flags])
+    return {
+        "tc_inner": engine.tc_inner,
+        "tc_outer": engine.tc_outer,
+        "tc_total": engine.tc_total,
+        "dem_diff": engine.height_difference,
+        "coverage": engine.coverage,
+        "coverage_inner": engine.coverage_inner,
+        "truncation": engine.truncation,
+    }
 
 
 def heights_from_dem(table, placed: StationsOnRaster) -> np.ndarray:

@@ -103,6 +103,14 @@ def _output(child, child_output, name, description, x, y):
     child.setModelOutputs(outputs)
 
 
+def _default_density() -> float:
+    """The reduction's default density (kg/m³), from the checkout's constants."""
+    _register_checkout()
+    from relief_gravity.algorithms.constants import DEFAULT_REDUCTION_DENSITY
+
+    return DEFAULT_REDUCTION_DENSITY
+
+
 def _add_inputs(model, definitions, x, y0, dy):
     """Add model parameters (in this order, one below the other)."""
     from qgis.core import QgsProcessingModelParameter
@@ -259,7 +267,7 @@ def _stations_model(name, description):
         QgsProcessingParameterRasterLayer(DEM, "Elevation raster (DEM, metres)"),
         QgsProcessingParameterNumber(
             DENSITY, "Reduction density (kg/m³)", type=QgsProcessingParameterNumber.Double,
-            defaultValue=2670.0, optional=True,
+            defaultValue=_default_density(), optional=True,
         ),
         QgsProcessingParameterRasterLayer(
             REGIONAL_DEM, "Regional elevation raster for the outer zone", optional=True
@@ -382,7 +390,7 @@ def build_readings_model():
         QgsProcessingParameterRasterLayer(DEM, "Elevation raster (DEM, metres)"),
         QgsProcessingParameterRasterLayer(REGIONAL_DEM, "Regional elevation raster for the outer zone", optional=True),
         QgsProcessingParameterNumber(DENSITY, "Reduction density (kg/m³)", type=QgsProcessingParameterNumber.Double,
-                                     defaultValue=2670.0, optional=True),
+                                     defaultValue=_default_density(), optional=True),
         *_datum_inputs(),
     ], 120.0, 40.0, 55.0)
 

@@ -1,9 +1,11 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
 """Terrain corrections: exact prisms, far-zone kernels, zone engine, Hammer zones."""
 
-from ._engine import TerrainResult, plane_terrain_effect, terrain_correction
+from ._engine import TerrainResult, terrain_correction
 from ._errors import TerrainCancelled
 from ._grid import ElevationGrid
+from ._innermost import plane_terrain_effect
+from ._model import TerrainModel
 from ._hammer import HammerResult, hammer_terrain_correction, station_gradient
 from ._hammer_zones import (
     HAMMER_ZONES,
@@ -25,6 +27,7 @@ __all__ = [
     "HammerResult",
     "HammerZone",
     "TerrainCancelled",
+    "TerrainModel",
     "TerrainResult",
     "column_terrain_effect",
     "hammer_terrain_correction",

@@ -185,7 +185,7 @@ def prism_gravity(
 
     Examples
     --------
-    1 km cube, station at the centre of its top face (REFERENCES §5.2):
+    1 km cube, station at the centre of its top face (docs/terrain.md section 4):
 
     >>> g = prism_gravity(0, 0, 0, -500, 500, -500, 500, -1000, 0, 2670)
     >>> print(f"{float(g):.6f}")

@@ -11,9 +11,11 @@ from qgis.core import QgsProcessingAlgorithm
 from qgis.PyQt.QtCore import QCoreApplication
 from qgis.PyQt.QtGui import QIcon
 
+from ...algorithms.constants import BOUGUER_CAP_RADIUS, DEFAULT_REDUCTION_DENSITY, FOOT
+
 ICON = Path(__file__).resolve().parent.parent.parent / "icons" / "relief_gravity.svg"
 
-#: Text every report and help page carries (DESIGN.md, Cautions).
+#: Text every report and help page carries (README.md, "Caution").
 CAUTION = (
     "Results support interpretation only. Check every reduction against the "
     "survey's own ties and specifications; decisions on drilling, groundwater or "
@@ -50,7 +52,6 @@ class ReliefGravityAlgorithm(QgsProcessingAlgorithm):
 
 
 #: International foot in metres.
-FOOT = 0.3048
 
 
 def _tr(text: str) -> str:
@@ -212,7 +213,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
                 self.DENSITY,
                 _tr("Reduction density (kg/m³)"),
                 type=QgsProcessingParameterNumber.Double,
-                defaultValue=2670.0,
+                defaultValue=DEFAULT_REDUCTION_DENSITY,
             )
         )
 
@@ -227,7 +228,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
         ]
         for key, label, default in (
             (self.INNER_RADIUS, _tr("Inner zone radius (m)"), self.DEFAULT_INNER_RADIUS),
-            (self.OUTER_RADIUS, _tr("Outer zone radius (m)"), 166735.0),
+            (self.OUTER_RADIUS, _tr("Outer zone radius (m)"), BOUGUER_CAP_RADIUS),
         ):
             definitions.append(
                 QgsProcessingParameterNumber(

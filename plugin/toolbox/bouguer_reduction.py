@@ -20,6 +20,7 @@ from qgis.core import (
 from qgis.PyQt.QtCore import QVariant
 
 from ...algorithms import REDUCTION_FIELDS, reduce_gravity
+from ...algorithms.constants import PLAUSIBLE_DENSITY
 from ...algorithms.plausibility import (
     DENSITY_LIMITS,
     GRAVITY_UNITS,
@@ -44,9 +45,8 @@ from .field_checks import check_numeric_fields
 
 NORMAL_FORMULAS = ("grs80", "wgs84", "1967")
 HEIGHT_FORMULAS = ("second_order", "first_order")
-PLAUSIBLE_DENSITY = (1000.0, 3500.0)
 
-#: Fields added to the copy of the station layer (DESIGN.md), all mGal but
+#: Fields added to the copy of the station layer (docs/reduction.md, section 6), all mGal but
 #: qc_flag: the reduction's fields with the two terrain zones before their total.
 _TC_TOTAL_AT = REDUCTION_FIELDS.index("tc_total")
 RESULT_FIELDS = REDUCTION_FIELDS[:_TC_TOTAL_AT] + ("tc_inner", "tc_outer") + REDUCTION_FIELDS[_TC_TOTAL_AT:]

@@ -22,7 +22,7 @@ from relief_gravity.algorithms import (
 
 # --- height correction -------------------------------------------------------
 
-# ../shared/REFERENCES.md section 2 table (mGal; the table gives the change of
+# docs/reduction.md section 3 table (mGal; the table gives the change of
 # normal gravity g_h, our correction is -g_h). Hinze et al. (2005) formula [V2].
 HEIGHT_CASES = [
     # (lat, h, Hinze 2005 column)
@@ -43,7 +43,7 @@ def test_hinze_height_correction_matches_reference_table():
 
 def test_hinze_height_correction_is_the_published_formula():
     # Hinze et al. (2005): g_h = -(0.3087691 - 0.0004398 sin^2 phi) h
-    # + 7.2125e-8 h^2 mGal [V2: REFERENCES.md 2], written out here independently.
+    # + 7.2125e-8 h^2 mGal [V2: docs/reduction.md section 3], written out here independently.
     lat = np.linspace(-90.0, 90.0, 19)[:, None]
     h = np.array([-400.0, 0.0, 13.0, 850.0, 2500.0, 6000.0])[None, :]
     g_h = -(0.3087691 - 0.0004398 * np.sin(np.radians(lat)) ** 2) * h + 7.2125e-8 * h**2
@@ -51,7 +51,7 @@ def test_hinze_height_correction_is_the_published_formula():
 
 
 def test_hinze_versus_exact_closed_form():
-    # REFERENCES.md 2: Hinze's series is within 0.01 mGal of the exact closed
+    # docs/reduction.md section 3: Hinze's series is within 0.01 mGal of the exact closed
     # form at 1 km and within 0.045 mGal at 5 km [C].
     lat = np.array([0.0, 30.0, 45.0, 60.0, 90.0])
     for h, tol in ((1000.0, 0.011), (5000.0, 0.046)):
@@ -60,13 +60,13 @@ def test_hinze_versus_exact_closed_form():
 
 
 def test_first_order_height_correction():
-    # Classic 0.3086 mGal/m (REFERENCES.md 2 [V: SLB glossary]).
+    # Classic 0.3086 mGal/m (docs/reduction.md section 3 [V: SLB glossary]).
     out = height_correction([0.0, 45.0, 90.0], [1000.0, 1000.0, -20.0], "first_order")
     assert_allclose(out, [308.6, 308.6, -6.172], rtol=0, atol=1e-9)
     # Does not depend on latitude, so a NaN latitude leaves it finite.
     assert_allclose(height_correction([np.nan, 10.0], 100.0, "first_order"), [30.86, 30.86], rtol=1e-14)
     assert height_correction(np.zeros((2, 3)), 1.0, "first_order").shape == (2, 3)
-    # Feet: 0.09406 mGal/ft (REFERENCES.md 2).
+    # Feet: 0.09406 mGal/ft (docs/reduction.md section 3).
     assert_allclose(height_correction(45.0, 0.3048, "first_order"), 0.09406, rtol=0, atol=1e-5)
 
 
@@ -80,7 +80,7 @@ def test_height_correction_rejects_unknown_method_and_bad_latitude():
 # --- atmospheric correction --------------------------------------------------
 
 ATM_HEIGHTS_KM = np.arange(0.0, 5.01, 0.5)
-# REFERENCES.md 3: Wenzel (1985) polynomial evaluated [C] and the IAG table
+# docs/reduction.md section 4: Wenzel (1985) polynomial evaluated [C] and the IAG table
 # published with GRS80 (Moritz 1980) [V2], mGal.
 ATM_POLYNOMIAL = [0.87400, 0.82539, 0.77856, 0.73351, 0.69024, 0.64875, 0.60904, 0.57111, 0.53496, 0.50059, 0.46800]
 ATM_IAG_TABLE = [0.87, 0.82, 0.77, 0.73, 0.68, 0.64, 0.60, 0.57, 0.53, 0.50, 0.47]
@@ -100,7 +100,7 @@ def test_atmospheric_correction_close_to_iag_table():
 
 @pytest.mark.parametrize(
     "big_g, per_gcc, per_2670",
-    # REFERENCES.md 4.1 [C]: 2 pi G 1000 and 2 pi G 2670, mGal per metre.
+    # docs/reduction.md section 5 [C]: 2 pi G 1000 and 2 pi G 2670, mGal per metre.
     [
         (6.670e-11, 0.041909, 0.111897),
         (6.673e-11, 0.041928, 0.111947),
@@ -114,7 +114,7 @@ def test_slab_gradients(big_g, per_gcc, per_2670):
 
 
 def test_slab_check_values():
-    # REFERENCES.md 4.1: h = 1000 m, rho = 2670: 111.96876 mGal with G = 6.6743e-11
+    # docs/reduction.md section 5: h = 1000 m, rho = 2670: 111.96876 mGal with G = 6.6743e-11
     # (the default, CODATA 2018) and 111.9637 with G = 6.674e-11 [C].
     assert_allclose(bouguer_slab_correction(1000.0, 2670.0), 111.96876, rtol=0, atol=6e-6)
     assert_allclose(bouguer_slab_correction(1000.0, 2670.0, 6.674e-11), 111.9637, rtol=0, atol=6e-5)
@@ -129,7 +129,7 @@ def test_slab_is_signed_and_broadcasts_density():
 
 # --- spherical cap and Bullard B ---------------------------------------------
 
-# REFERENCES.md 4.2, rho = 2670, R0 = 6371 km, S = 166.735 km.
+# docs/reduction.md section 5, rho = 2670, R0 = 6371 km, S = 166.735 km.
 CAP_HEIGHTS = np.array([0.0, 100, 500, 1000, 1500, 2000, 2500, 3000, 3500, 4000, 4500, 5000, 6000])
 # LaFehr (1991) table as transcribed in pygeoid's test data [V2], reproduced
 # with G = 6.67e-11 to +-0.0005 mGal.
@@ -159,7 +159,7 @@ def test_cap_and_bullard_b_match_computed_columns():
 
 
 def _cap_oracle(h, density, big_g, cap_radius=166_735.0, earth_radius=6_371_000.0):
-    """Independent oracle (REFERENCES.md 4.2 [C]): quadrature of the axial attraction
+    """Independent oracle (docs/reduction.md section 5 [C]): quadrature of the axial attraction
     of a cap between radii R0 and R0 + h, polar angle alpha, station at R0 + h."""
     alpha = cap_radius / earth_radius
     r_s = earth_radius + h
@@ -173,7 +173,7 @@ def _cap_oracle(h, density, big_g, cap_radius=166_735.0, earth_radius=6_371_000.
 
 @pytest.mark.parametrize("h", [1.0, 37.5, 250.0, 1000.0, 2100.0, 4150.0, 6000.0, 8848.0])
 def test_cap_matches_quadrature_oracle(h):
-    # REFERENCES.md 4.2: closed form = quadrature to 1e-4 mGal; we ask 1e-6.
+    # docs/reduction.md section 5: closed form = quadrature to 1e-4 mGal; we ask 1e-6.
     for big_g, rho in ((6.6743e-11, 2670.0), (6.67e-11, 2000.0)):
         assert_allclose(spherical_cap_correction(h, rho, big_g), _cap_oracle(h, rho, big_g), rtol=0, atol=1e-6)
 
@@ -203,7 +203,7 @@ def test_curvature_is_cap_minus_slab():
 
 
 def test_bullard_b_shape():
-    # REFERENCES.md 4.2 [C]: B peaks at ~1.52 mGal near 2.1 km and changes
+    # docs/reduction.md section 5 [C]: B peaks at ~1.52 mGal near 2.1 km and changes
     # sign near 4.15 km (rho = 2670).
     h = np.linspace(0.0, 6000.0, 60001)
     bb = curvature_correction(h, 2670.0)
@@ -224,7 +224,7 @@ def test_bullard_b_small_heights():
 
 
 def test_whitman_style_three_term_approximation():
-    # REFERENCES.md 4.2: B ~ 2 pi G rho h [alpha/2 - eta/(2 alpha) - eta] matches
+    # docs/reduction.md section 5: B ~ 2 pi G rho h [alpha/2 - eta/(2 alpha) - eta] matches
     # the exact values to <= 1 microGal up to ~2.5 km [M/C]; not Whitman's own
     # formula, used here only as an independent shape check.
     h = np.linspace(0.0, 2500.0, 26)

@@ -22,7 +22,7 @@ from relief_gravity.demo import forward_model as fm
 
 DEMO_DIR = Path(__file__).resolve().parents[2] / "demo"
 
-# G of the LaFehr cap column in REFERENCES §4.2; the model uses CODATA 2018,
+# G of the LaFehr cap column in docs/reduction.md section 5; the model uses CODATA 2018,
 # and the cap is proportional to G.
 G_TABLE = 6.674e-11
 
@@ -41,7 +41,7 @@ def _flat_world(height, fine_half=3000.0, regional_half=170_000.0):
     ids=["500m", "1000m", "2000m", "3000m"],
 )
 def test_flat_topography_on_the_sphere_is_the_lafehr_cap(height, cap):
-    # Source: REFERENCES §4.2 table, "cap (G=6.674e-11)" column = LaFehr (1991)
+    # Source: docs/reduction.md section 5 table, "cap (G=6.674e-11)" column = LaFehr (1991)
     # closed form, R0 = 6371 km, S = 166.735 km, rho = 2670 [C there]. Our
     # columns are vertical prisms/line masses lowered by s^2/2R on a plane,
     # not spherical shells, so a few µGal to a few mGal-thousandths differ.
@@ -68,7 +68,7 @@ def test_single_near_cell_is_the_lowered_prism():
 
 def test_far_cell_line_mass_close_to_prism():
     # Beyond near_radius a cell is a vertical line mass; at 80 cell widths it
-    # must match the exact prism to better than 0.05 % (REFERENCES §5.3: the
+    # must match the exact prism to better than 0.05 % (docs/terrain.md section 5: the
     # error falls off roughly as (cell/s)^2, -0.09 % at 20 widths).
     heights = np.zeros((200, 200))
     heights[100, 180] = 400.0  # centre (4025, -25)
@@ -93,7 +93,7 @@ def test_station_buried_mid_height_feels_nothing():
 
 @pytest.mark.parametrize(("slope_deg", "tc"), [(5.0, 0.21334), (10.0, 0.85541)], ids=["5deg", "10deg"])
 def test_station_on_an_inclined_plane(slope_deg, tc):
-    # Source: REFERENCES §6 case 5 [C, derived and checked by quadrature
+    # Source: docs/terrain.md section 11, case 5 [C, derived and checked by quadrature
     # there]: terrain correction of an infinite inclined plane through the
     # station, to R = 1 km: TC = G rho R [2 pi - 4 cos(theta) K(sin^2 theta)].
     # On a flat Earth the terrain attraction is then the flat disc (slab to
@@ -166,7 +166,7 @@ def test_scenario_bodies_far_away_are_point_masses():
 
 
 def test_normal_gravity_and_atmosphere_used_by_the_model():
-    # Source: REFERENCES §1.3 check values [C: closed form, two implementations]
+    # Source: docs/reduction.md section 3 check values [C: closed form, two implementations]
     # and §3 Wenzel polynomial row [C].
     npt.assert_allclose(
         fm.normal_gravity_at_height([45.0, 0.0, 90.0, 30.0, 60.0], [1000.0, 0.0, 0.0, 3000.0, 5000.0]),
@@ -181,7 +181,7 @@ def test_observed_gravity_on_a_flat_world_reduces_to_zero_with_the_cap():
     fine, regional = _flat_world(1000.0)
     terrain = fm.terrain_attraction(0.0, 0.0, 1000.0, fine, regional)
     obs = fm.observed_gravity(45.0, 1000.0, terrain, 0.0)
-    cap = 113.0754 * GRAVITATIONAL_CONSTANT / G_TABLE  # REFERENCES §4.2, G scaled
+    cap = 113.0754 * GRAVITATIONAL_CONSTANT / G_TABLE  # docs/reduction.md section 5, G scaled
     residual = obs - fm.normal_gravity_at_height(45.0, 1000.0) + fm.atmospheric_correction(1000.0) - cap
     npt.assert_allclose(residual, 0.0, atol=0.005)
 

@@ -58,3 +58,13 @@ def test_reduction_modules_have_examples():
         }
         assert public, name
         assert public <= documented, f"{name}: no Examples in {sorted(public - documented)}"
+
+
+def test_terrain_modules_have_examples():
+    # Every module of algorithms/terrain carries at least one running example
+    # (run above; this only guards against a module without any).
+    names = [n for n in MODULES if n.startswith("relief_gravity.algorithms.terrain.")]
+    assert names
+    for name in names:
+        tests = doctest.DocTestFinder(exclude_empty=True).find(importlib.import_module(name))
+        assert any(t.examples for t in tests), f"{name} has no Examples"

@@ -18,7 +18,7 @@ from relief_gravity.algorithms import (
 
 LATITUDES = np.array([0.0, 15.0, 30.0, 45.0, 60.0, 75.0, 90.0])
 
-# ../shared/REFERENCES.md section 1.2, m/s^2. The 0 and 90 degree GRS80 values
+# docs/reduction.md section 2, m/s^2. The 0 and 90 degree GRS80 values
 # are Moritz (1980)'s published gamma_e, gamma_p [V]; WGS84 gamma_e, gamma_p
 # as quoted from NIMA TR8350.2 by a secondary source [V2]; the other rows are
 # [C] (own Somigliana and boule 0.6.0 agreeing to 1e-10 m/s^2).
@@ -45,22 +45,22 @@ def test_equator_and_pole_are_the_defining_values():
 
 
 def test_wgs84_minus_grs80_at_equator():
-    # REFERENCES.md 1.2: WGS84 - GRS80 at the equator = -0.1436 mGal [C].
+    # docs/reduction.md section 2: WGS84 - GRS80 at the equator = -0.1436 mGal [C].
     assert_allclose(normal_gravity(0.0, "wgs84") - normal_gravity(0.0, "grs80"), -0.1436, atol=1e-4)
 
 
 def test_somigliana_k_matches_moritz():
-    # Moritz (1980) printed k = 0.001931851353 (from memory, REFERENCES.md 1.2 [M]).
+    # Moritz (1980) printed k = 0.001931851353 (from memory, docs/reduction.md section 2 [M]).
     assert_allclose(GRS80.somigliana_k, 0.001931851353, rtol=0, atol=1e-11)
     # GRS80 e^2 = 0.00669438002290 (Moritz 1980 [V]).
     assert_allclose(GRS80.first_eccentricity_squared, 0.00669438002290, rtol=0, atol=5e-15)
-    # WGS84 e^2 = 0.00669437999014 (REFERENCES.md 1.1 [V2]).
+    # WGS84 e^2 = 0.00669437999014 (docs/reduction.md section 2 [V2]).
     assert_allclose(WGS84.first_eccentricity_squared, 0.00669437999014, rtol=0, atol=5e-15)
 
 
 def test_mean_normal_gravity_over_the_ellipsoid():
-    # Surface-mean normal gravity of GRS80 = 9.797644656 m/s^2 (REFERENCES.md
-    # 1.2: [C] by quadrature, matching Moritz 1980 from memory [M]).
+    # Surface-mean normal gravity of GRS80 = 9.797644656 m/s^2 (docs/reduction.md
+    # section 2: computed by quadrature, matching Moritz 1980 from memory).
     # Area element on the ellipsoid in geodetic latitude: M N cos(phi) dphi.
     phi = np.radians(np.linspace(-90.0, 90.0, 200001))
     e2 = GRS80.first_eccentricity_squared
@@ -92,7 +92,7 @@ def test_1967_formula_versus_grs80_conversion():
 
 
 def test_closed_form_at_height_matches_reference_values():
-    # REFERENCES.md 1.3 check values, GRS80, mGal [C: two implementations
+    # docs/reduction.md section 3 check values, GRS80, mGal [C: two implementations
     # (own and boule 0.6.0) agree to 1e-6 mGal].
     lat = [45.0, 45.0, 0.0, 90.0, 30.0, 60.0]
     h = [0.0, 1000.0, 0.0, 0.0, 3000.0, 5000.0]
@@ -110,7 +110,7 @@ def test_closed_form_on_the_ellipsoid_equals_somigliana():
 
 
 def test_closed_form_height_change_matches_exact_column():
-    # REFERENCES.md 2, "exact" column: gamma(phi, h) - gamma(phi, 0), mGal [C].
+    # docs/reduction.md section 3, "exact" column: gamma(phi, h) - gamma(phi, 0), mGal [C].
     lat = np.array([0.0, 45.0, 45.0, 45.0, 45.0, 90.0])
     h = np.array([1000.0, 500.0, 1000.0, 3000.0, 5000.0, 1000.0])
     exact = [-308.7072, -154.2618, -308.4873, -925.0270, -1540.9873, -308.2664]

@@ -130,7 +130,7 @@ def test_curvature_term_against_publisher(survey, reduced):
     polynomial = 1.464e-3 * h - 3.533e-7 * h**2 + 4.5e-14 * h**3
     rms, worst = _stats("Bullard B (LaFehr - USGS polynomial)", reduced["curv_corr"] - polynomial)
     assert worst < 0.002
-    # With LaFehr's own G = 6.67e-11 (REFERENCES.md 4.2) the polynomial is matched
+    # With LaFehr's own G = 6.67e-11 (docs/reduction.md section 5) the polynomial is matched
     # to 0.0005 mGal over 13-1542 m: it is a fit to the same closed form.
     assert np.max(np.abs(curvature_correction(h, DENSITY, 6.67e-11) - polynomial)) < 6e-4
 

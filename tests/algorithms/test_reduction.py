@@ -21,7 +21,7 @@ from relief_gravity.algorithms import (
     valid_latitude,
 )
 
-# ../shared/REFERENCES.md section 10, worked example [C]: phi = 45 deg,
+# docs/reduction.md section 7, worked example [C]: phi = 45 deg,
 # ellipsoidal h = 1000 m, g_obs = 980400 mGal, rho = 2670, G = 6.6743e-11,
 # TC = 2.5 mGal. Values in mGal, given to 1e-5.
 OBS, LAT, H, TC = 980_400.0, 45.0, 1000.0, 2.5
@@ -76,7 +76,7 @@ def test_fields_identities_and_dtype():
     tc = rng.uniform(0.0, 20.0, n)
     out = reduce_gravity(obs, lat, h, 2670.0, tc)
     assert tuple(out) == REDUCTION_FIELDS
-    # DESIGN.md output field names.
+    # output field names (docs/reduction.md section 6).
     design_fields = {"normal_g", "height_corr", "atmos_corr", "slab_corr", "curv_corr"}
     design_fields |= {"tc_inner", "tc_outer", "tc_total", "faa", "sba", "cba"}
     assert set(REDUCTION_FIELDS) <= design_fields
@@ -189,7 +189,7 @@ def test_per_station_density():
 
 
 def test_gravitational_constant_keyword():
-    # REFERENCES.md 4.1: G = 6.674e-11 gives a 1 km, 2670 kg/m^3 slab of 111.9637 mGal [C].
+    # docs/reduction.md section 5: G = 6.674e-11 gives a 1 km, 2670 kg/m^3 slab of 111.9637 mGal [C].
     out = reduce_gravity(OBS, LAT, H, gravitational_constant=6.674e-11)
     assert_allclose(out["slab_corr"], 111.9637, rtol=0, atol=6e-5)
 

@@ -5,7 +5,7 @@ All station data are invented (self-consistency checks). The one outside
 reference is the plane: minimum curvature with any tension reproduces data
 sampled from a plane exactly, because planes satisfy the equation and all
 boundary conditions (Smith & Wessel 1990, Geophysics 55(3) 293-305;
-../shared/REFERENCES.md §9 "Exact tests"), so the raster must equal the
+Smith & Wessel 1990: planes satisfy the equation and its boundary conditions), so the raster must equal the
 plane at every cell centre — which also pins the georeference to the half
 cell.
 """

@@ -131,7 +131,7 @@ def test_per_station_density_in_grams(provider, make_points, station_rows):
     slab = np.array(_values(layer, "slab_corr"))
     rho = np.array([r["rho"] for r in station_rows])
     h = np.array([r["elev"] for r in station_rows])
-    # Bouguer slab 2πGρh (REFERENCES §4.1) with G = 6.6743e-11 (CODATA 2018).
+    # Bouguer slab 2πGρh (docs/reduction.md section 5) with G = 6.6743e-11 (CODATA 2018).
     np.testing.assert_allclose(slab, 2 * np.pi * 6.6743e-11 * rho * h * 1e5, rtol=1e-12)
 
 

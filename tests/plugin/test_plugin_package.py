@@ -12,7 +12,7 @@ from pathlib import Path
 
 ROOT = Path(__file__).resolve().parents[2]
 
-# Required metadata keys: QGIS plugin cookbook, plugins.rst (see ../shared/QGIS-PRACTICE.md §1).
+# Required metadata keys: QGIS plugin cookbook, plugins.rst (see docs/processing-practice.md).
 REQUIRED = ("name", "qgisMinimumVersion", "description", "about", "version", "author", "email", "repository")
 
 

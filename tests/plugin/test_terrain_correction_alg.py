@@ -25,7 +25,7 @@ def _values(layer, name):
 
 def _square_mesa(tmp_path, write_dem):
     """A raster that tiles a square mesa exactly: half-side a = 100 m, relief 50 m,
-    plain to half-side L = 5 km, 10 m cells (REFERENCES §6 case 7)."""
+    plain to half-side L = 5 km, 10 m cells (docs/terrain.md section 11, case 7)."""
     cell = 10.0
     half = 5000.0
     n = int(2 * half / cell)
@@ -40,7 +40,7 @@ def test_station_on_square_mesa_matches_prism_difference(provider, tmp_path, mak
     dem = _square_mesa(tmp_path, dem_writer)
     # Station on the mesa top at its centre (height 150 m): TC = 1.175474 mGal
     # for a = 100 m, h = 50 m, L = 5 km, rho = 2670, G = 6.6743e-11
-    # (REFERENCES §6 case 7, [C]: prism difference).
+    # (docs/terrain.md section 11, case 7, [C]: prism difference).
     rows = [{"x": 500_000.0, "y": 5_000_000.0, "name": "top", "elev": 150.0, "g_obs": 0.0, "rho": 0.0, "tc_given": 0.0, "label": ""}]
     stations = make_points(rows, name="mesa_station.gpkg")
     result = _run({"INPUT": str(stations), "HEIGHT_FIELD": "elev", "DEM": str(dem), "INNER_RADIUS": 2000.0, "OUTER_RADIUS": 4990.0})

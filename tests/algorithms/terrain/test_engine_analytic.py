@@ -1,8 +1,8 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
-"""The zone engine on rasters of analytic terrain (REFERENCES.md §6, §5.7).
+"""The zone engine on rasters of analytic terrain (docs/terrain.md sections 11 and 6).
 
 All cases are flat-Earth (``curvature=False``) unless the test is about
-curvature. Values and formulas are from REFERENCES.md §6 [C: derived there and
+curvature. Values and formulas are from docs/terrain.md section 11 [C: derived there and
 checked by independent numerical integration]; G = 6.6743e-11, rho = 2670.
 """
 
@@ -47,8 +47,8 @@ def test_zero_relief_gives_zero_references_6_case_9(curvature):
 @pytest.mark.parametrize(
     "a, h, L, cell, expected",
     [
-        (100.0, 50.0, 5000.0, 10.0, 1.175474),  # REFERENCES.md §6 case 7
-        (50.0, 10.0, 2000.0, 10.0, 0.097461),  # REFERENCES.md §6 case 7
+        (100.0, 50.0, 5000.0, 10.0, 1.175474),  # docs/terrain.md section 11, case 7
+        (50.0, 10.0, 2000.0, 10.0, 0.097461),  # docs/terrain.md section 11, case 7
     ],
 )
 @pytest.mark.parametrize("pit", [False, True])
@@ -65,7 +65,7 @@ def test_square_mesa_and_pit_references_6_case_7(a, h, L, cell, expected, pit):
 def test_circular_mesa_hammer_ring_references_6_case_3():
     # Station on a flat-topped circular mesa a = 100 m, h = 50 m, plain to
     # R = 1 km: Hammer's ring formula 2 pi G rho [(R - a) + sqrt(a^2 + h^2)
-    # - sqrt(R^2 + h^2)] = 1.181738 mGal (REFERENCES.md §6 cases 2-3).
+    # - sqrt(R^2 + h^2)] = 1.181738 mGal (docs/terrain.md section 11, cases 2-3).
     a, h, R = 100.0, 50.0, 1000.0
     formula = 2 * math.pi * G_RHO * ((R - a) + math.hypot(a, h) - math.hypot(R, h))
     assert formula == pytest.approx(1.181738, abs=1e-6)
@@ -78,7 +78,7 @@ def test_circular_mesa_hammer_ring_references_6_case_3():
 
 def test_cone_apex_references_6_case_4():
     # Station at the apex of a cone falling at 10 degrees to R = 1 km:
-    # 2 pi G rho R (1 - cos theta) = 1.70106 mGal (REFERENCES.md §6 case 4).
+    # 2 pi G rho R (1 - cos theta) = 1.70106 mGal (docs/terrain.md section 11, case 4).
     theta, R = math.radians(10.0), 1000.0
     expected = 2 * math.pi * G_RHO * R * (1 - math.cos(theta))
     assert expected == pytest.approx(1.70106, abs=1e-5)
@@ -98,7 +98,7 @@ def test_cone_apex_references_6_case_4():
 @pytest.mark.parametrize("theta_deg, expected", [(10.0, 0.85541), (20.0, 3.45501)])
 def test_inclined_plane_references_6_case_5(theta_deg, expected):
     # TC of an infinite plane of slope theta to R = 1 km:
-    # G rho R [2 pi - 4 cos(theta) K(sin^2 theta)] (REFERENCES.md §6 case 5).
+    # G rho R [2 pi - 4 cos(theta) K(sin^2 theta)] (docs/terrain.md section 11, case 5).
     theta, R = math.radians(theta_deg), 1000.0
     formula = G_RHO * R * (2 * math.pi - 4 * math.cos(theta) * ellipk(math.sin(theta) ** 2))
     assert formula == pytest.approx(expected, abs=1e-5)
@@ -113,7 +113,7 @@ def test_inclined_plane_references_6_case_5(theta_deg, expected):
 
 @pytest.mark.parametrize(
     "L, expected",
-    # REFERENCES.md §6 case 8: block x = d..L, y = +-L, 0..100 m above, d = 100 m
+    # docs/terrain.md section 11, case 8: block x = d..L, y = +-L, 0..100 m above, d = 100 m
     [(5000.0, 1.51396)],
 )
 def test_two_dimensional_step_references_6_case_8(L, expected):
@@ -128,7 +128,7 @@ def test_two_dimensional_step_references_6_case_8(L, expected):
 
 @pytest.mark.parametrize(
     "distance, expected",
-    # REFERENCES.md §5.7 table [C/L: harmonica prism lowered by s^2/2R]:
+    # docs/terrain.md section 6 table [C/L: harmonica prism lowered by s^2/2R]:
     # downward g_z of a 1 km x 1 km x 500 m column on the station's sphere;
     # the terrain correction is -g_z.
     [(10e3, 0.002162), (22e3, 0.000177), (50e3, 0.000004), (100e3, -0.000005), (166.7e3, -0.000004)],
@@ -146,7 +146,7 @@ def test_curvature_far_column_references_5_7(distance, expected):
 
 def test_curvature_sign_change_at_mid_height():
     # The column's mid-height (250 m) falls below the station's horizontal
-    # plane at s = sqrt(2 R 250 m) = 56.4 km (REFERENCES.md §5.7).
+    # plane at s = sqrt(2 R 250 m) = 56.4 km (docs/terrain.md section 6).
     switch = math.sqrt(2 * MEAN_EARTH_RADIUS * 250.0)
     values = []
     for distance in (switch - 6e3, switch + 6e3):

@@ -15,7 +15,9 @@ import pytest
 
 from relief_gravity.algorithms.constants import GRAVITATIONAL_CONSTANT, MEAN_EARTH_RADIUS
 from relief_gravity.algorithms.terrain import ElevationGrid, prism_gravity, terrain_correction
-from relief_gravity.algorithms.terrain import _engine
+from relief_gravity.algorithms.terrain import bilinear_setup, sample_bilinear
+from relief_gravity.algorithms.terrain._evaluate import Physics
+from relief_gravity.algorithms.terrain._innermost import innermost
 
 
 def open_raster(path):
@@ -62,14 +64,14 @@ def prism_reference(z, west, north, cell, x, y, h, radius):
     dx, dy = X - x, Y - y
     s2 = dx * dx + dy * dy
     grid = ElevationGrid.from_array(z, west, north, cell, cell)
-    i0, j0, _, _ = _engine._bilinear_base(grid, x, y)
+    i0, j0, _, _ = (int(v[0]) for v in bilinear_setup(grid, np.array([x]), np.array([y])))
     m = (s2 <= radius * radius) & np.isfinite(z)
     m[max(i0, 0) : i0 + 2, max(j0, 0) : j0 + 2] = False
     drop = s2[m] / (2 * MEAN_EARTH_RADIUS)
     rel = z[m] - h
     g = prism_gravity(0, 0, 0, dx[m] - cell / 2, dx[m] + cell / 2, dy[m] - cell / 2, dy[m] + cell / 2, np.minimum(-drop, rel - drop), np.maximum(-drop, rel - drop), 2670.0)
-    square, rest, _, _ = _engine._innermost(grid, _engine._Station(x, y, h, (i0, j0)), 2670.0)
-    return float(np.sum(-np.sign(rel) * g)) + square + rest
+    square, rest, _, _ = innermost(grid, np.array([x]), np.array([y]), np.array([h]), Physics(2670.0, None, radius, radius, True))
+    return float(np.sum(-np.sign(rel) * g)) + float(square[0]) + float(rest[0])
 
 
 @pytest.fixture(scope="module")
@@ -100,7 +102,10 @@ def test_bigtujunga_plausible_full_radius(tujunga):
     # of mGal (common practice, no source).
     assert 0.5 < np.median(r.tc_total) < 40.0 and r.tc_total.max() < 80.0
     # The 36 x 19 km DEM covers only a few per cent of the 166.7 km disc.
-    assert np.all(r.coverage < 0.05) and all(f.startswith("partial coverage") for f in r.flags)
+    assert np.all(r.coverage < 0.05) and all(f[0] == "tc_partial" for f in r.flags)
+    # Stations within 2 km of the DEM's edge also miss part of the inner zone.
+    gap = np.array(["tc_gap_inner" in f for f in r.flags])
+    assert np.all(r.coverage_inner[gap] < 0.99) and np.all(r.coverage_inner[~gap] >= 0.99)
     # Windowed reads: no single read is larger than the raster itself.
     assert max(reads) <= z.size
     # The GDAL-backed windowed grid and the in-memory grid agree exactly.
@@ -220,15 +225,15 @@ def test_rockies_geographic_outer_zone_vs_sphere(rockies):
     grid, _ = windowed_grid(ds, geographic=True)
     lon = np.array([-105.62, -106.1, -105.0])
     lat = np.array([37.55, 38.4, 36.9])
-    dem = np.array([_engine._bilinear(grid, a, b) for a, b in zip(lon, lat)])
+    dem = sample_bilinear(grid, lon, lat)
     r = terrain_correction(lon, lat, dem, grid, inner_radius=20000.0)
-    assert np.all(r.coverage > 0.99) and r.flags == ["", "", ""]
+    assert np.all(r.coverage > 0.99) and r.flags == [[], [], []]
     assert np.all(np.isfinite(r.tc_total)) and np.all(r.tc_inner > 0)
     assert np.all(r.tc_total < 100.0)
     flat = terrain_correction(lon, lat, dem, grid, inner_radius=20000.0, curvature=False)
     for k in range(3):
         ref = spherical_far_reference(z, gt, lon[k], lat[k], dem[k], 20000.0, 166735.0)
-        # Flat frame lowered by s^2/2R vs the sphere: REFERENCES.md §5.7 finds
+        # Flat frame lowered by s^2/2R vs the sphere: docs/terrain.md section 6 finds
         # < 1 % for a single column; here the sum over 20-167 km agrees to
         # about 1e-3 mGal, while leaving curvature out is off by 0.2 mGal.
         assert r.tc_outer[k] == pytest.approx(ref, abs=0.003)
@@ -246,7 +251,7 @@ def test_rockies_fine_window_plus_regional_equals_one_grid(rockies):
     fine = ElevationGrid.from_array(z[r0 : r0 + n, c0 : c0 + n], gt[0] + c0 * gt[1], gt[3] + r0 * gt[5], gt[1], -gt[5], geographic=True)
     lon = gt[0] + (c0 + np.array([3.3, 60.5, 110.8])) * gt[1]
     lat = gt[3] + (r0 + np.array([50.2, 4.6, 116.1])) * gt[5]
-    h = np.array([_engine._bilinear(whole, a, b) for a, b in zip(lon, lat)]) + 5.0
+    h = sample_bilinear(whole, lon, lat) + 5.0
     a = terrain_correction(lon, lat, h, fine, whole)
     b = terrain_correction(lon, lat, h, whole)
     assert np.all(np.abs(a.coverage - b.coverage) < 0.002)

@@ -23,7 +23,7 @@ SCALE = GRAVITATIONAL_CONSTANT * 2670.0 * 1e5
 
 @pytest.mark.parametrize(
     "ratio, expected",
-    # REFERENCES.md §5.3 [C]: line mass vs exact prism, 100 m cell, relief 50 m
+    # docs/terrain.md section 5 [C]: line mass vs exact prism, 100 m cell, relief 50 m
     [(10, -0.0037), (20, -0.0009), (50, -0.00015)],
 )
 def test_line_mass_error_matches_references_5_3(ratio, expected):
@@ -68,7 +68,7 @@ def test_column_variance_term_matches_sum_of_cells():
 
 def test_curvature_makes_far_columns_negative():
     # Flat terrain 500 m above the station, 100 km away: the drop of 785 m
-    # puts it below the station's horizontal plane (REFERENCES.md §5.7).
+    # puts it below the station's horizontal plane (docs/terrain.md section 6).
     drop = 100e3**2 / (2 * 6371008.7714)
     t = column_terrain_effect(np.array(1e5), np.array(0.0), np.array(500.0), np.array(drop), 1e3, 1e3, 1e6)
     assert float(t) < 0
@@ -84,7 +84,7 @@ def test_inverse_distance_difference_keeps_digits():
 
 @pytest.mark.parametrize(
     "theta, expected",
-    # REFERENCES.md §6 case 5 [C]: infinite inclined plane, TC to R = 1 km
+    # docs/terrain.md section 11, case 5 [C]: infinite inclined plane, TC to R = 1 km
     [(5.0, 0.21334), (10.0, 0.85541), (20.0, 3.45501), (30.0, 7.90467)],
 )
 def test_plane_wedges_on_a_disc_references_6_case_5(theta, expected):

@@ -16,7 +16,7 @@ CUBE = (-500.0, 500.0, -500.0, 500.0, -1000.0, 0.0)
 @pytest.mark.parametrize(
     "station, expected",
     [
-        # REFERENCES.md §5.2 [C: own Nagy formula = choclo], rho 2670, G 6.6743e-11
+        # docs/terrain.md section 4 [C: own Nagy formula = choclo], rho 2670, G 6.6743e-11
         ((0.0, 0.0, 0.0), 46.277686),  # centre of the top face
         ((500.0, 500.0, 0.0), 17.274864),  # top corner
         ((0.0, 0.0, 100.0), 37.407751),  # 100 m above the centre
@@ -28,7 +28,7 @@ def test_cube_values_references_5_2(station, expected):
 
 
 def test_cube_point_mass_limit_references_5_2():
-    # REFERENCES.md §5.2: 10 km above the top, point mass gives 0.161636 mGal
+    # docs/terrain.md section 4: 10 km above the top, point mass gives 0.161636 mGal
     # (mass at the cube centre, 10.5 km below the station).
     point = GRAVITATIONAL_CONSTANT * 2670.0 * 1e9 / 10500.0**2 * 1e5
     assert point == pytest.approx(0.161636, abs=1e-6)
@@ -37,7 +37,7 @@ def test_cube_point_mass_limit_references_5_2():
 
 @pytest.mark.parametrize(
     "side, expected",
-    # REFERENCES.md §5.2: 100 m thick square slab, station at the centre of its top
+    # docs/terrain.md section 4: 100 m thick square slab, station at the centre of its top
     [(1e3, 10.19706), (1e4, 11.09608), (1e5, 11.18680), (1e6, 11.19587)],
 )
 def test_slab_convergence_references_5_2(side, expected):
@@ -49,7 +49,7 @@ def test_slab_convergence_references_5_2(side, expected):
 
 
 def test_cube_factors_references_5_2():
-    # REFERENCES.md §5.2: centre-top 2.596897 G rho a, corner-top 0.969388 G rho a
+    # docs/terrain.md section 4: centre-top 2.596897 G rho a, corner-top 0.969388 G rho a
     a = 1000.0
     unit = GRAVITATIONAL_CONSTANT * 1000.0 * a * 1e5
     assert float(prism_gravity(0, 0, 0, *CUBE, 1000.0)) / unit == pytest.approx(2.596897, abs=1e-6)
@@ -57,7 +57,7 @@ def test_cube_factors_references_5_2():
 
 
 def test_four_quarters_make_the_whole():
-    # Symmetry (REFERENCES.md §5.2 check): the centre value is four quarter
+    # Symmetry (docs/terrain.md section 4 check): the centre value is four quarter
     # prisms seen from their common corner.
     whole = prism_gravity(0, 0, 0, *CUBE, 2670.0)
     quarters = prism_gravity(0, 0, 0, [0, -500, -500, 0], [500, 0, 0, 500], [0, 0, -500, -500], [500, 500, 0, 0], -1000, 0, 2670.0)
@@ -124,7 +124,7 @@ def test_far_prisms_keep_their_digits_vs_mpmath(distance, size, bottom, top):
 
 def test_choclo_agrees_if_installed():
     # choclo (general forward-modelling library) gives the upward component
-    # with z up: g_down = -gravity_u (REFERENCES.md §0). Skips where absent;
+    # with z up: g_down = -gravity_u (choclo 0.3.2: gravity_u is the upward component). Skips where absent;
     # passed with choclo 0.3.2 + Debian numpy 1.24.2 in a throwaway venv.
     choclo = pytest.importorskip("choclo")
     rng = np.random.default_rng(3)
