@@ -64,6 +64,8 @@ def _notes() -> dict:
         "not_read": _tr("No usable reading of this station: no observed gravity."),
         "single_reading": _tr("One reading only: no check on this station's value."),
         "known_station": _tr("A station of known gravity (a tie of the network)."),
+        "tc_gap_inner": _tr("The elevation rasters lack data over part of the inner zone (see the inner coverage)."),
+        "tc_density_reference": _tr("With water, the terrain correction uses the reference (median) density, not this station's."),
     }
 
 

@@ -141,6 +141,16 @@ def compute_terrain(
     except TerrainCancelled as error:
         raise QgsProcessingException(_tr("Cancelled by the user.")) from error
     table.flag_each([";".join(codes) for codes in engine.flags])
+    truncation = np.asarray(engine.truncation, dtype=float)
+    if np.any(truncation > 0):
+        worst = int(np.nanargmax(truncation))
+        feedback.pushWarning(
+            _tr(
+                "The elevation rasters stop short of the outer radius for {} station(s): the terrain they miss "
+                "could add about {:.3f} mGal at worst (station {}; field tc_trunc, an estimate from the relief at "
+                "the edge of coverage, not a bound). Give a regional DEM reaching {:.0f} m around every station."
+            ).format(int(np.sum(truncation > 0)), float(truncation[worst]), worst + 1, outer_radius)
+        )
     return {
         "tc_inner": engine.tc_inner,
         "tc_outer": engine.tc_outer,
@@ -148,7 +158,7 @@ def compute_terrain(
         "dem_diff": engine.height_difference,
         "coverage": engine.coverage,
         "coverage_inner": engine.coverage_inner,
-        "truncation": engine.truncation,
+        "tc_trunc": truncation,
     }
 
 

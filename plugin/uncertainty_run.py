@@ -8,6 +8,8 @@ reads the settings and fields and returns the columns to write.
 
 from __future__ import annotations
 
+import warnings
+
 import numpy as np
 from qgis.core import (
     QgsProcessingParameterDefinition,
@@ -104,6 +106,19 @@ def density_sigma(algorithm, parameters, context):
     return (high - low) / (2.0 * Z95)
 
 
+def uncertainty_settings(algorithm, parameters, context) -> dict:
+    """What the budget assumed, for the provenance record."""
+    field = algorithm.first_field(parameters, HEIGHT_SIGMA_FIELD, context)
+    return {
+        "height_sigma_m": algorithm.parameterAsDouble(parameters, HEIGHT_SIGMA, context),
+        "height_sigma_field": field,
+        "gravity_sigma_mgal": algorithm.parameterAsDouble(parameters, G_SIGMA, context),
+        "dem_sigma_m": algorithm.parameterAsDouble(parameters, DEM_SIGMA, context),
+        "density_sigma_kg_m3": density_sigma(algorithm, parameters, context),
+        "method": "components in quadrature, Gauss-Hermite propagation (docs/uncertainty.md)",
+    }
+
+
 def station_sigmas(algorithm, parameters, context, table):
     """Per-station height (m) and gravity (mGal) one-sigma errors."""
     height = np.full(len(table), algorithm.parameterAsDouble(parameters, HEIGHT_SIGMA, context))
@@ -161,13 +176,17 @@ def uncertainty_columns(
     lat = np.asarray(table.latitude, dtype=float)
     usable = np.isfinite(lat) & (np.abs(lat) <= 90.0) & np.isfinite(heights_reduced)
     h_cba = np.full(len(table), np.nan)
+    rho = np.broadcast_to(np.asarray(density, dtype=float), lat.shape)
+    usable &= np.isfinite(rho) & (rho > 0)
     if usable.any():
         nodes = None if terrain_nodes is None else terrain_nodes[:, usable]
-        h_cba[usable] = height_component(
-            lat[usable], heights_reduced[usable], height_sigma[usable],
-            np.broadcast_to(np.asarray(density, dtype=float), lat.shape)[usable],
-            terrain_nodes=nodes, **reduction_options,
-        )
+        with warnings.catch_warnings():
+            # The reduction itself has already warned about unusual densities.
+            warnings.simplefilter("ignore")
+            h_cba[usable] = height_component(
+                lat[usable], heights_reduced[usable], height_sigma[usable], rho[usable],
+                terrain_nodes=nodes, **reduction_options,
+            )
     h_tc = terrain_height_spread(terrain_nodes) if terrain_nodes is not None else np.full(len(table), np.nan)
     budget = uncertainty_budget(
         gravity_sigma=gravity_sigma,

@@ -39,6 +39,9 @@ from ..heights import (
 )
 from ..raster_io import raster_path
 from ..stations import write_stations
+from ..uncertainty_run import add_parameters as add_uncertainty_parameters
+from ..uncertainty_run import check_parameters as check_uncertainty_parameters
+from ..uncertainty_run import uncertainty_columns, uncertainty_settings
 from ..terrain_run import EXACT, compute_terrain, place_stations
 from .base import StationAlgorithm, density_sentence
 from .field_checks import check_numeric_fields
@@ -265,6 +268,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             )
         )
         self.add_zone_parameters(advanced=True)
+        add_uncertainty_parameters(self)
         legacy = QgsProcessingParameterBoolean(
             self.ORTHOMETRIC_REDUCTION,
             self.tr("Reduce with orthometric heights (legacy practice; the standard uses ellipsoidal heights)"),
@@ -300,7 +304,11 @@ class BouguerReductionAlgorithm(StationAlgorithm):
         )
         if problem:
             return False, problem
-        problem = self.check_density_and_radii(parameters, context) or self.check_datums(parameters, context)
+        problem = (
+            self.check_density_and_radii(parameters, context)
+            or self.check_datums(parameters, context)
+            or check_uncertainty_parameters(self, parameters, context)
+        )
         if problem:
             return False, problem
         height_field = self.parameterAsFields(parameters, self.HEIGHT_FIELD, context)
@@ -409,8 +417,16 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             )
         columns = {k: reduced[k] for k in RESULT_FIELDS if k not in ("tc_inner", "tc_outer")}
         columns.update(engine_columns)
+        uncertainty = self._uncertainty(
+            parameters, context, table, placed, heights, reduction_heights, density, reduced,
+            engine_columns.get("tc_trunc"), inner,
+            {"normal_formula": normal_formula, "height_formula": height_formula,
+             "atmospheric": atmospheric, "curvature": curvature},
+        )
+        columns.update(uncertainty)
         added = [(name, QVariant.Double) for name in (*RESULT_FIELDS, "dem_diff", "tc_cover")]
         added += [(name, QVariant.Double) for name in engine_columns if name not in dict(added)]
+        added += [(name, QVariant.Double) for name in uncertainty]
         added += [("qc_flag", QVariant.String), ("qc_note", QVariant.String)]
         sink, dest_id, fields, indices = self.station_sink(parameters, context, source, added, feedback)
         write_stations(sink, table, fields, indices, columns, steps)
@@ -444,6 +460,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             "outer_radius_m": outer,
             "dem_files": [p for p in (placed.raster.path if placed else None, raster_path(regional) if regional and placed else None) if p],
             "geoid": geoid_description(height_datum, dem_datum),
+            "uncertainty": uncertainty_settings(self, parameters, context),
         }
         results = {
             self.OUTPUT: dest_id,
@@ -451,6 +468,26 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             self.STATIONS_FLAGGED: flagged,
         }
         return results, settings
+
+    def _uncertainty(self, parameters, context, table, placed, heights, reduction_heights, density, reduced,
+                     truncation, inner, options):
+        """``tc_sigma``, ``cba_sigma`` and their components (docs/uncertainty.md)."""
+        grid = None
+        x = y = None
+        if placed is not None and not self.first_field(parameters, self.TC_FIELD, context):
+            grid = placed.raster.elevation_grid()
+            x, y = placed.x, placed.y
+        return uncertainty_columns(
+            self, parameters, context, table,
+            grid=grid, x=x, y=y,
+            heights_in_dem=heights.in_dem_datum,
+            heights_reduced=reduction_heights,
+            density=density,
+            reduced=reduced,
+            truncation=truncation,
+            reduction_options=options,
+            radius=inner,
+        )
 
     def _observed_gravity(self, table, gravity_field, units):
         return observed_gravity_mgal(table, gravity_field, units)
