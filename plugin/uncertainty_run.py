@@ -49,7 +49,7 @@ def add_parameters(algorithm) -> None:
     definitions = [
         number(
             HEIGHT_SIGMA, _tr("Station height error, one sigma (m)"), number.Double,
-            defaultValue=DEFAULT_HEIGHT_SIGMA, minValue=0.0, maxValue=1000.0,
+            defaultValue=DEFAULT_HEIGHT_SIGMA, minValue=0.0, maxValue=1000.0, optional=True,
         ),
         QgsProcessingParameterField(
             HEIGHT_SIGMA_FIELD, _tr("Station height error field (m; replaces the number where set)"),
@@ -57,11 +57,11 @@ def add_parameters(algorithm) -> None:
         ),
         number(
             G_SIGMA, _tr("Observed gravity error, one sigma (mGal; a g_sigma field of the input is used instead)"),
-            number.Double, defaultValue=DEFAULT_G_SIGMA, minValue=0.0, maxValue=1000.0,
+            number.Double, defaultValue=DEFAULT_G_SIGMA, minValue=0.0, maxValue=1000.0, optional=True,
         ),
         number(
             DEM_SIGMA, _tr("DEM vertical random error per cell, one sigma (m)"), number.Double,
-            defaultValue=DEFAULT_DEM_SIGMA, minValue=0.0, maxValue=1000.0,
+            defaultValue=DEFAULT_DEM_SIGMA, minValue=0.0, maxValue=1000.0, optional=True,
         ),
         number(
             DENSITY_LOW, _tr("Reduction density, lower bound of its 95 % interval (kg/m³)"), number.Double,

@@ -80,7 +80,10 @@ def test_report_is_self_contained(demo_report):
                     "Terrain correction by zone", "Uncertainty", "Flagged stations", "Cautions"):
         assert f"<h2>{heading}" in text, heading
     assert "licensed practice" in text and "drilling" in text
-    assert "no uncertainty fields" in text  # this reduction does not write them yet; said plainly
+    # The reduction writes tc_sigma, cba_sigma and their components: the report shows them.
+    assert "no uncertainty fields" not in text
+    for name in ("cba_sigma", "sigma_dem", "sigma_h"):
+        assert name in text, name
 
 
 @pytest.mark.skipif(CHROMIUM is None, reason="Debian's chromium is not installed (tools/setup.sh installs it)")
