@@ -94,10 +94,11 @@ class DensityUnits:
                 raise ValueError(f"{name} unit grid must be 2-D, got shape {arr.shape}")
             if arr.size and not np.issubdtype(arr.dtype, np.integer):
                 raise ValueError(f"{name} unit grid must hold integer unit indices, got {arr.dtype}")
-            arr = arr.astype(np.int32 if dens.size > 32767 else np.int16)
             if arr.size and (arr.min() < 0 or arr.max() >= dens.size):
                 worst = int(arr.min()) if arr.min() < 0 else int(arr.max())
                 raise ValueError(f"{name} unit grid holds unit index {worst}; the units are 0 to {dens.size - 1}")
+            # One byte per cell for up to 256 units (the grids are as large as the DEMs).
+            arr = arr.astype(np.uint8 if dens.size <= 256 else np.int32)
             arr.flags.writeable = False
             object.__setattr__(self, name, arr)
 
@@ -112,7 +113,7 @@ class DensityUnits:
         grids = [self.fine] + ([self.regional] if self.regional is not None else [])
         seen = np.zeros(self.densities.size, dtype=bool)
         for g in grids:
-            seen[np.unique(g)] = True
+            seen |= np.bincount(g.ravel(), minlength=self.densities.size).astype(bool)
         return np.nonzero(seen)[0]
 
     def station_density(self, grid: ElevationGrid, x: npt.ArrayLike, y: npt.ArrayLike) -> np.ndarray:

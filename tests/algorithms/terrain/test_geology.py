@@ -261,3 +261,9 @@ def test_unit_table_default_first():
     assert d.tolist() == [2670.0, 2900.0, 2100.0] and u.tolist() == [1, 0, 0, 1, 2]
     with pytest.raises(ValueError, match="default density"):
         unit_table([2900.0], 0.0)
+
+
+def test_unit_grid_index_beyond_a_byte_is_refused_not_wrapped():
+    with pytest.raises(ValueError, match="unit index 256"):
+        DensityUnits([2670.0, 2200.0], np.array([[0, 256]]))
+    assert DensityUnits([2670.0, 2200.0], np.array([[0, 1]])).fine.dtype == np.uint8
