@@ -183,10 +183,10 @@ def test_bad_layers_give_sentences(qgis_processing, tmp_path):
         _read(good, field="missing")
 
 
-def test_parameters_are_optional_and_linked(qgis_processing):
-    from qgis.core import QgsProcessingAlgorithm, QgsProcessingParameterDefinition
+def _probe():
+    from qgis.core import QgsProcessingAlgorithm
 
-    from relief_gravity.plugin.density_layer import DENSITY_LAYER, DENSITY_LAYER_FIELD, add_parameters
+    from relief_gravity.plugin.density_layer import add_parameters
 
     class Probe(QgsProcessingAlgorithm):
         def name(self):
@@ -206,8 +206,32 @@ def test_parameters_are_optional_and_linked(qgis_processing):
 
     probe = Probe()
     probe.initAlgorithm()
+    return probe
+
+
+def test_parameters_are_optional_and_linked(qgis_processing):
+    from qgis.core import QgsProcessingParameterDefinition
+
+    from relief_gravity.plugin.density_layer import DENSITY_LAYER, DENSITY_LAYER_FIELD
+
+    probe = _probe()
     layer = probe.parameterDefinition(DENSITY_LAYER)
     field = probe.parameterDefinition(DENSITY_LAYER_FIELD)
     assert layer.flags() & QgsProcessingParameterDefinition.FlagOptional
     assert field.flags() & QgsProcessingParameterDefinition.FlagOptional
     assert field.parentLayerParameterName() == DENSITY_LAYER
+
+
+def test_read_parameters(qgis_processing, tmp_path, collecting_feedback):
+    from qgis.core import QgsCoordinateReferenceSystem, QgsProcessingContext, QgsProcessingException
+
+    from relief_gravity.plugin.density_layer import DENSITY_LAYER, DENSITY_LAYER_FIELD, read_parameters
+
+    probe, context = _probe(), QgsProcessingContext()
+    crs = QgsCoordinateReferenceSystem("EPSG:32632")
+    path = _write_polygons(tmp_path / "geology.gpkg", [WEST_BLOCK, EAST_BLOCK], [2.2, 2.9])
+    assert read_parameters(probe, {}, context, 2670.0, crs) is None
+    got = read_parameters(probe, {DENSITY_LAYER: path, DENSITY_LAYER_FIELD: "rho"}, context, 2500.0, crs, collecting_feedback)
+    assert got.densities.tolist() == [2500.0, 2200.0, 2900.0] and got.crs == crs
+    with pytest.raises(QgsProcessingException, match="DENSITY_LAYER_FIELD is not"):
+        read_parameters(probe, {DENSITY_LAYER: path}, context, 2670.0, crs)
