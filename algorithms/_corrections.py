@@ -13,6 +13,7 @@ import warnings
 import numpy as np
 import numpy.typing as npt
 
+from ._normal_gravity import check_latitude
 from .constants import (
     BOUGUER_CAP_RADIUS,
     DEFAULT_REDUCTION_DENSITY,
@@ -21,7 +22,6 @@ from .constants import (
     PLAUSIBLE_DENSITY,
     SI_TO_MGAL,
 )
-from ._normal_gravity import check_latitude
 
 #: Hinze et al. (2005) second-order height correction coefficients
 #: (mGal/m, mGal/m, mGal/m^2), docs/reduction.md section 3

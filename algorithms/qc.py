@@ -23,8 +23,9 @@ Examples
 
 from __future__ import annotations
 
+from collections.abc import Iterable
 from dataclasses import dataclass
-from typing import Iterable, List
+from typing import List
 
 INFO = "info"
 WARNING = "warning"

@@ -192,7 +192,8 @@ def local_relief(raster, x, y) -> np.ndarray:
 
 def flag_mismatches(table, dem_diff, heights: Heights, placed, height_datum, dem_datum, feedback) -> int:
     """Flag stations whose height disagrees with the DEM beyond the local relief;
-    say in the log which datum setting is likely wrong. Returns the count."""
+    say in the log which datum setting is likely wrong. Returns the count.
+    """
     diff = np.asarray(dem_diff, dtype=float)
     tolerance = datums.mismatch_tolerance(local_relief(placed.raster, placed.x, placed.y))
     off = np.isfinite(diff) & (np.abs(diff) > tolerance)

@@ -77,7 +77,8 @@ class StationTable:
 
     def field_values(self, name: str | None, scale: float = 1.0, missing_code: str = "") -> np.ndarray:
         """Numeric attribute as a float array (NaN where NULL or not a number),
-        flagged ``missing_code`` where missing."""
+        flagged ``missing_code`` where missing.
+        """
         if not name:
             return np.full(len(self), np.nan)
         values = np.array([as_float(f[name]) for f in self.features], dtype=float) * scale
@@ -184,7 +185,8 @@ SAME_POINT = 0.01
 
 def _station_point(geometry):
     """(x, y, distinct) of a station geometry: NaN for none; ``distinct`` when
-    a multi-part point has parts farther apart than ``SAME_POINT``."""
+    a multi-part point has parts farther apart than ``SAME_POINT``.
+    """
     if geometry is None or geometry.isNull() or geometry.isEmpty():
         return math.nan, math.nan, False
     if not geometry.isMultipart():

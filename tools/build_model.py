@@ -234,12 +234,12 @@ def _stations_model(name, description):
     from qgis.core import (
         QgsProcessing,
         QgsProcessingModelAlgorithm,
-        QgsProcessingModelChildParameterSource as Source,
-        QgsProcessingParameterField,
         QgsProcessingParameterFeatureSource,
+        QgsProcessingParameterField,
         QgsProcessingParameterNumber,
         QgsProcessingParameterRasterLayer,
     )
+    from qgis.core import QgsProcessingModelChildParameterSource as Source
 
     model = QgsProcessingModelAlgorithm(name, "Relief Gravity", "reliefgravity")
     model.setHelpContent(
@@ -299,8 +299,8 @@ REGIONAL, RESIDUAL = "regional", "residual"
 
 def build_separation_model():
     """Stations with observed gravity -> reduce -> grid -> regional-residual."""
+    from qgis.core import QgsProcessingModelChildParameterSource as Source
     from qgis.core import (
-        QgsProcessingModelChildParameterSource as Source,
         QgsProcessingParameterEnum,
         QgsProcessingParameterNumber,
     )
@@ -353,13 +353,13 @@ def build_readings_model():
     from qgis.core import (
         QgsProcessing,
         QgsProcessingModelAlgorithm,
-        QgsProcessingModelChildParameterSource as Source,
         QgsProcessingParameterEnum,
         QgsProcessingParameterFeatureSource,
         QgsProcessingParameterField,
         QgsProcessingParameterNumber,
         QgsProcessingParameterRasterLayer,
     )
+    from qgis.core import QgsProcessingModelChildParameterSource as Source
 
     model = QgsProcessingModelAlgorithm(
         "Readings to observed gravity, reduce, grid, contour and report", "Relief Gravity", "reliefgravity"
@@ -427,9 +427,9 @@ def build_styles(folder: Path) -> tuple[Path, Path]:
     import numpy as np
     import processing
     from osgeo import ogr, osr
+    from qgis.core import QgsRasterLayer, QgsVectorLayer
 
     from relief_gravity.plugin.styling import write_style_files
-    from qgis.core import QgsRasterLayer, QgsVectorLayer
 
     rng = np.random.default_rng(2024)
     x = 500_000.0 + rng.uniform(0, 8000, 150)

@@ -27,8 +27,8 @@ from dataclasses import dataclass
 import numpy as np
 import numpy.typing as npt
 
-from ._errors import TerrainCancelled
 from ._coverage import truncation_estimate
+from ._errors import TerrainCancelled
 from ._evaluate import Batch, Physics, evaluate_level
 from ._grid import ElevationGrid
 from ._innermost import innermost

@@ -12,8 +12,8 @@ stays bounded by the block arrays themselves.
 
 from __future__ import annotations
 
-from dataclasses import dataclass, field
 from collections.abc import Callable
+from dataclasses import dataclass, field
 
 import numpy as np
 

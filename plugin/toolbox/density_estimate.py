@@ -40,10 +40,10 @@ from ...algorithms.density import (
     split_consistency,
     unit_bouguer_term,
 )
-from ..terrain_run import EXACT, compute_terrain, place_stations
-from .base import StationAlgorithm, is_unset
 from ..heights import check_dem_values, prepare_heights
 from ..raster_io import raster_path
+from ..terrain_run import EXACT, compute_terrain, place_stations
+from .base import StationAlgorithm, is_unset
 from .bouguer_reduction import HEIGHT_FORMULAS, NORMAL_FORMULAS, gravity_unit_names, observed_gravity_mgal
 from .field_checks import check_numeric_fields
 
@@ -381,7 +381,7 @@ class DensityEstimateAlgorithm(StationAlgorithm):
         low, high, gap = split_consistency(faa, unit, x, y, trend)
         cautions = density_cautions(float(np.std(relief)), (fit.high - fit.low) / 2.0, shared, low, high, gap)
         for code, sentence in cautions:
-            feedback.pushWarning("{} [{}]".format(self.tr(sentence), code))
+            feedback.pushWarning(f"{self.tr(sentence)} [{code}]")
         if not cautions:
             feedback.pushInfo(self.tr("Relief {:.0f} m (standard deviation after the regional term); low and high stations agree.").format(float(np.std(relief))))
 

@@ -44,7 +44,7 @@ def station_xy():
     return xs, ys
 
 
-@pytest.fixture()
+@pytest.fixture
 def plane_stations(tmp_path, station_xy, write_points):
     xs, ys = station_xy
     values = list(plane(xs, ys))

@@ -14,8 +14,13 @@ import numpy as np
 import pytest
 
 from relief_gravity.algorithms.constants import GRAVITATIONAL_CONSTANT, MEAN_EARTH_RADIUS
-from relief_gravity.algorithms.terrain import ElevationGrid, prism_gravity, terrain_correction
-from relief_gravity.algorithms.terrain import bilinear_setup, sample_bilinear
+from relief_gravity.algorithms.terrain import (
+    ElevationGrid,
+    bilinear_setup,
+    prism_gravity,
+    sample_bilinear,
+    terrain_correction,
+)
 from relief_gravity.algorithms.terrain._evaluate import Physics
 from relief_gravity.algorithms.terrain._innermost import innermost
 

@@ -7,8 +7,7 @@ import numpy as np
 import pytest
 
 from relief_gravity.algorithms.constants import GRAVITATIONAL_CONSTANT
-from relief_gravity.algorithms.terrain import prism_gravity
-from relief_gravity.algorithms.terrain import _prism
+from relief_gravity.algorithms.terrain import _prism, prism_gravity
 
 CUBE = (-500.0, 500.0, -500.0, 500.0, -1000.0, 0.0)
 
