@@ -228,7 +228,8 @@ def _revision() -> str:
 def _run_json(cmd: list[str], timeout: float | None = None) -> dict:
     proc = subprocess.run(cmd, capture_output=True, text=True, timeout=timeout, cwd=str(REPO_ROOT))
     if proc.returncode != 0:
-        raise RuntimeError(f"{cmd[0]} failed ({proc.returncode}):\n{proc.stderr[-3000:]}")
+        msg = f"{cmd[0]} failed ({proc.returncode}):\n{proc.stderr[-3000:]}"
+        raise RuntimeError(msg)
     return json.loads(proc.stdout.strip().splitlines()[-1])
 
 

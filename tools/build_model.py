@@ -70,7 +70,8 @@ def _child(algorithm_id, child_id, description, sources, x, y):
 
     algorithm = QgsApplication.processingRegistry().algorithmById(algorithm_id)
     if algorithm is None:
-        raise RuntimeError(f"{algorithm_id} is not registered; is the plugin loaded?")
+        msg = f"{algorithm_id} is not registered; is the plugin loaded?"
+        raise RuntimeError(msg)
     child = QgsProcessingModelChildAlgorithm(algorithm_id)
     child.setChildId(child_id)
     child.setDescription(description)

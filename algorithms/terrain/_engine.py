@@ -170,19 +170,23 @@ def terrain_correction(
     if model is None:
         model = TerrainModel(**model_options)  # type: ignore[arg-type]
     elif model_options:
-        raise ValueError(f"give either a model or model options, not both: {sorted(model_options)}")
+        msg = f"give either a model or model options, not both: {sorted(model_options)}"
+        raise ValueError(msg)
     xs = np.atleast_1d(np.asarray(x, dtype=float))
     ys = np.atleast_1d(np.asarray(y, dtype=float))
     hs = np.atleast_1d(np.asarray(station_height, dtype=float))
     n = xs.size
     if ys.size != n or hs.size != n:
-        raise ValueError(f"x, y and station_height must have the same length, got {xs.size}, {ys.size}, {hs.size}")
+        msg = f"x, y and station_height must have the same length, got {xs.size}, {ys.size}, {hs.size}"
+        raise ValueError(msg)
     model.check_stations(n)
     if regional is not None and regional.geographic != fine.geographic:
-        raise ValueError("fine and regional grids must share one CRS (both geographic or both projected)")
+        msg = "fine and regional grids must share one CRS (both geographic or both projected)"
+        raise ValueError(msg)
     n_workers = workers if workers is not None else min(2, os.cpu_count() or 1)
     if n_workers < 1:
-        raise ValueError(f"workers must be >= 1, got {workers}")
+        msg = f"workers must be >= 1, got {workers}"
+        raise ValueError(msg)
     physics = Physics(1.0, model.engine_water_density, model.inner_radius, model.outer_radius, model.curvature)
     field_tc = model.engine_innermost(n)
 
@@ -220,7 +224,8 @@ def terrain_correction(
 
     def check() -> None:
         if is_cancelled is not None and is_cancelled():
-            raise TerrainCancelled("terrain correction cancelled")
+            msg = "terrain correction cancelled"
+            raise TerrainCancelled(msg)
 
     disc = math.pi * model.outer_radius**2
     inner_disc = math.pi * model.inner_radius**2
