@@ -235,19 +235,36 @@ def terrain_correction(
         setup = setup_share * len(tile)
         n_grids = 1 if regional is None else 2
 
-        def level_done(frac: float, g: int = 0) -> None:
+        # Loop values are bound as defaults (same values: plan_grid calls level_done before `done` moves on).
+        def level_done(
+            frac: float, g: int = 0, *, done: float = done, setup: float = setup, n_grids: int = n_grids
+        ) -> None:
             report((done + setup * (g + frac) / n_grids) / (total_work * (1 + setup_share)))
 
         plans = [plan_grid(fine, tx, ty, model.outer_radius, True, None, is_cancelled, level_done)]
         if regional is not None:
-            plans.append(plan_grid(regional, tx, ty, model.outer_radius, False, exclude, is_cancelled, lambda f: level_done(f, 1)))
+            plans.append(
+                plan_grid(
+                    regional, tx, ty, model.outer_radius, False, exclude, is_cancelled, lambda f: level_done(f, 1)
+                )
+            )
         done += setup
         level0 = plans[0].stats[0]
         window = np.where(level0.weight > 0, level0.mean, np.nan)
         origin = (level0.block_row0, level0.block_col0)
         base_r, base_c, _, _ = bilinear_setup(fine, tx, ty)
 
-        def one_batch(ch: range) -> tuple[np.ndarray, ...]:
+        # Loop values are bound as defaults; every call ends inside this iteration (the pool is shut down below).
+        def one_batch(
+            ch: range,
+            *,
+            tile: np.ndarray = tile,
+            base_r: np.ndarray = base_r,
+            base_c: np.ndarray = base_c,
+            plans: list = plans,
+            window: np.ndarray = window,
+            origin: tuple[int, int] = origin,
+        ) -> tuple[np.ndarray, ...]:
             loc = np.arange(ch.start, ch.stop)
             gi = tile[loc]
             bt = Batch(loc, xs[gi], ys[gi], hs[gi], base_r[loc], base_c[loc])
@@ -323,7 +340,9 @@ def terrain_correction(
     tc_inner = tc_inner * factor
     tc_outer = tc_outer * factor
     covered = np.where(todo, coverage, np.nan)
-    truncation = truncation_estimate(covered, edge_mean, edge_square, model.outer_radius, physics.density, model.curvature)
+    truncation = truncation_estimate(
+        covered, edge_mean, edge_square, model.outer_radius, physics.density, model.curvature
+    )
     return TerrainResult(
         tc_inner=tc_inner,
         tc_outer=tc_outer,
@@ -338,8 +357,10 @@ def terrain_correction(
 
 
 def _bilinear(grid: ElevationGrid, x: float, y: float) -> float:
-    """One bilinear height; kept only until tests/algorithms/terrain/test_hammer.py
-    (owned by the ring-and-sector work) calls :func:`sample_bilinear` itself.
+    """One bilinear height.
+
+    Kept only until tests/algorithms/terrain/test_hammer.py (owned by the
+    ring-and-sector work) calls :func:`sample_bilinear` itself.
 
     Examples
     --------
@@ -350,8 +371,10 @@ def _bilinear(grid: ElevationGrid, x: float, y: float) -> float:
 
 
 def _inside(grid: ElevationGrid, x: np.ndarray, y: np.ndarray) -> np.ndarray:
-    """Half-open extent test; kept only until ``_hammer.py`` (owned by the
-    ring-and-sector work) uses :func:`inside_extent`.
+    """Half-open extent test.
+
+    Kept only until ``_hammer.py`` (owned by the ring-and-sector work) uses
+    :func:`inside_extent`.
 
     Examples
     --------
