@@ -386,4 +386,5 @@ def merge_blocks(
     col_off = np.where(ok, col_sum / safe, 0.0)
     row_cov = np.where(ok, row_h / safe - row_off * mean, 0.0)
     col_cov = np.where(ok, col_h / safe - col_off * mean, 0.0)
-    return BlockLevel(factor, block_row0, block_col0, sum_w / (m * m), mean, variance, row_off, col_off, row_cov, col_cov)
+    weight = sum_w / (m * m)
+    return BlockLevel(factor, block_row0, block_col0, weight, mean, variance, row_off, col_off, row_cov, col_cov)
