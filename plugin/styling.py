@@ -291,6 +291,7 @@ class RasterStylePostProcessor(QgsProcessingLayerPostProcessorInterface):
         self.abstract = abstract
 
     def postProcessLayer(self, layer, context, feedback):  # noqa: N802 - QGIS API
+        """Style the output once Processing has loaded it (QGIS API override); an invalid layer is left alone."""
         if layer is not None and layer.isValid():
             style_anomaly_raster(layer, self.title, self.abstract)
 
@@ -303,6 +304,7 @@ class ContourStylePostProcessor(QgsProcessingLayerPostProcessorInterface):
         self.name = name
 
     def postProcessLayer(self, layer, context, feedback):  # noqa: N802 - QGIS API
+        """Style the output once Processing has loaded it (QGIS API override); an invalid layer is left alone."""
         if layer is not None and layer.isValid():
             style_contours(layer, self.name)
 
