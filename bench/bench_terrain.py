@@ -263,7 +263,7 @@ def _processing_run(scn, x, y, h) -> dict:
         layer = src.CreateLayer("stations", srs, ogr.wkbPoint)
         layer.CreateField(ogr.FieldDefn("h", ogr.OFTReal))
         layer.StartTransaction()
-        for xi, yi, hi in zip(x, y, h):
+        for xi, yi, hi in zip(x, y, h, strict=True):
             feature = ogr.Feature(layer.GetLayerDefn())
             feature.SetField("h", float(hi))
             point = ogr.Geometry(ogr.wkbPoint)

@@ -446,7 +446,7 @@ def build_styles(folder: Path) -> tuple[Path, Path]:
     ds = ogr.GetDriverByName("GPKG").CreateDataSource(str(work / "stations.gpkg"))
     layer = ds.CreateLayer("stations", srs, ogr.wkbPoint)
     layer.CreateField(ogr.FieldDefn("cba", ogr.OFTReal))
-    for xi, yi, vi in zip(x, y, cba):
+    for xi, yi, vi in zip(x, y, cba, strict=True):
         feature = ogr.Feature(layer.GetLayerDefn())
         point = ogr.Geometry(ogr.wkbPoint)
         point.AddPoint_2D(float(xi), float(yi))

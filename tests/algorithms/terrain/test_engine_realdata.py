@@ -217,7 +217,7 @@ def spherical_far_reference(z, gt, lon, lat, h, r_min, r_max):
     nodes, weights = np.polynomial.legendre.leggauss(8)
     total = np.zeros(omega.shape)
     cp = cos_psi[m]
-    for t, w in zip(nodes, weights):
+    for t, w in zip(nodes, weights, strict=True):
         r = 0.5 * (r1 + r2) + 0.5 * (r2 - r1) * t
         ell = np.sqrt(rp * rp + r * r - 2 * rp * r * cp)
         total += w * 0.5 * (r2 - r1) * r * r * (rp - r * cp) / ell**3
