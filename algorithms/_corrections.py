@@ -13,6 +13,7 @@ import warnings
 import numpy as np
 import numpy.typing as npt
 
+from ._normal_gravity import check_latitude
 from .constants import (
     BOUGUER_CAP_RADIUS,
     DEFAULT_REDUCTION_DENSITY,
@@ -21,7 +22,6 @@ from .constants import (
     PLAUSIBLE_DENSITY,
     SI_TO_MGAL,
 )
-from ._normal_gravity import check_latitude
 
 #: Hinze et al. (2005) second-order height correction coefficients
 #: (mGal/m, mGal/m, mGal/m^2), docs/reduction.md section 3
@@ -99,7 +99,8 @@ def height_correction(
         # spoil a correction that does not depend on it.
         h_full, _ = np.broadcast_arrays(h, check_latitude(latitude_deg))
         return FREE_AIR_GRADIENT * h_full
-    raise ValueError(f"unknown height correction method {method!r}; expected one of {_HEIGHT_METHODS}")
+    msg = f"unknown height correction method {method!r}; expected one of {_HEIGHT_METHODS}"
+    raise ValueError(msg)
 
 
 def atmospheric_correction(height_m: npt.ArrayLike) -> np.ndarray:
@@ -366,7 +367,8 @@ def density_to_kg_per_m3(value: npt.ArrayLike, unit: str = "kg/m3") -> np.ndarra
         return values.copy()
     if key in ("g/cm3", "g/cc", "gcm-3"):
         return values * 1000.0
-    raise ValueError(f"unknown density unit {unit!r}; expected 'kg/m3' or 'g/cm3'")
+    msg = f"unknown density unit {unit!r}; expected 'kg/m3' or 'g/cm3'"
+    raise ValueError(msg)
 
 
 def check_density(values: npt.ArrayLike, allow_nan: bool = False) -> np.ndarray:
@@ -409,12 +411,14 @@ def check_density(values: npt.ArrayLike, allow_nan: bool = False) -> np.ndarray:
     rho = np.asarray(values, dtype=np.float64)
     nan = np.isnan(rho)
     if nan.any() and not allow_nan:
-        raise ValueError(f"density must be a positive number of kg/m^3; got NaN at {int(nan.sum())} position(s)")
+        msg = f"density must be a positive number of kg/m^3; got NaN at {int(nan.sum())} position(s)"
+        raise ValueError(msg)
     with np.errstate(invalid="ignore"):
         bad = ~nan & ~((rho > 0.0) & np.isfinite(rho))
     if bad.any():
         shown = ", ".join(repr(float(v)) for v in rho[bad].ravel()[:5])
-        raise ValueError(f"density must be a positive number of kg/m^3; got {shown}")
+        msg = f"density must be a positive number of kg/m^3; got {shown}"
+        raise ValueError(msg)
     low, high = PLAUSIBLE_DENSITY
     with np.errstate(invalid="ignore"):
         outside = ~nan & ((rho < low) | (rho > high))

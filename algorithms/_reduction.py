@@ -10,8 +10,6 @@ Sign conventions (DEVELOPERS.md):
 
 from __future__ import annotations
 
-from typing import Dict, Optional
-
 import numpy as np
 import numpy.typing as npt
 
@@ -151,7 +149,8 @@ def complete_bouguer_anomaly(sba: npt.ArrayLike, tc_total: npt.ArrayLike) -> np.
 def _choice(value: str, allowed: tuple, what: str) -> str:
     key = str(value).strip().lower()
     if key not in allowed:
-        raise ValueError(f"unknown {what} {value!r}; expected one of {allowed}")
+        msg = f"unknown {what} {value!r}; expected one of {allowed}"
+        raise ValueError(msg)
     return key
 
 
@@ -160,7 +159,7 @@ def reduce_gravity(
     latitude: npt.ArrayLike,
     height: npt.ArrayLike,
     density: npt.ArrayLike = DEFAULT_REDUCTION_DENSITY,
-    terrain_correction: Optional[npt.ArrayLike] = None,
+    terrain_correction: npt.ArrayLike | None = None,
     normal_formula: str = "grs80",
     height_formula: str = "second_order",
     atmospheric: bool = True,
@@ -168,7 +167,7 @@ def reduce_gravity(
     normal_at_height: bool = False,
     *,
     gravitational_constant: float = GRAVITATIONAL_CONSTANT,
-) -> Dict[str, np.ndarray]:
+) -> dict[str, np.ndarray]:
     """Reduce observed gravity to free-air, simple and complete Bouguer anomalies.
 
     Parameters
@@ -250,9 +249,10 @@ def reduce_gravity(
     normal_key = _choice(normal_formula, _NORMAL_FORMULAS, "normal gravity formula")
     height_key = _choice(height_formula, _HEIGHT_FORMULAS, "height correction formula")
     if normal_at_height and normal_key == "1967":
-        raise ValueError(
+        msg = (
             "normal_at_height needs an ellipsoid (grs80 or wgs84); the 1967 formula is a series on the ellipsoid only"
         )
+        raise ValueError(msg)
 
     g_obs = np.asarray(observed, dtype=np.float64)
     lat = check_latitude(latitude)

@@ -73,7 +73,7 @@ class Ellipsoid:
 
     @property
     def semiminor_axis(self) -> float:
-        """b = a (1 - f), in m."""
+        """Semi-minor axis b = a (1 - f), in m."""
         return self.semimajor_axis * (1.0 - self.flattening)
 
     @property
@@ -89,7 +89,7 @@ class Ellipsoid:
 
     @property
     def somigliana_k(self) -> float:
-        """k = b gamma_p / (a gamma_e) - 1 of Somigliana's formula."""
+        """Constant k = b gamma_p / (a gamma_e) - 1 of Somigliana's formula."""
         return (self.semiminor_axis * self.gravity_pole) / (self.semimajor_axis * self.gravity_equator) - 1.0
 
 

@@ -23,8 +23,8 @@ Examples
 
 from __future__ import annotations
 
+from collections.abc import Iterable
 from dataclasses import dataclass
-from typing import Iterable, List
 
 INFO = "info"
 WARNING = "warning"
@@ -51,10 +51,13 @@ class FlagCode:
     meaning: str
 
     def __post_init__(self) -> None:
+        """Reject an unknown severity or a code that is not one short lowercase word (ValueError)."""
         if self.severity not in SEVERITIES:
-            raise ValueError(f"severity must be one of {SEVERITIES}, got {self.severity!r}")
+            msg = f"severity must be one of {SEVERITIES}, got {self.severity!r}"
+            raise ValueError(msg)
         if not self.code or self.code != self.code.strip().lower() or ";" in self.code or " " in self.code:
-            raise ValueError(f"flag codes are short lowercase words without spaces or ';', got {self.code!r}")
+            msg = f"flag codes are short lowercase words without spaces or ';', got {self.code!r}"
+            raise ValueError(msg)
 
 
 def _entries(*rows: tuple) -> dict:
@@ -76,11 +79,27 @@ VOCABULARY = {
     ),
     # --- station inputs: datums, units, geometry (issue 8) ------------------
     **_entries(
-        ("multipart_distinct", NOT_COMPUTED, "The station is a multi-part point whose parts lie apart: its position is ambiguous."),
-        ("gravity_implausible", NOT_COMPUTED, "Observed gravity outside Earth's range (975000-984000 mGal) after units: no anomaly computed."),
+        (
+            "multipart_distinct",
+            NOT_COMPUTED,
+            "The station is a multi-part point whose parts lie apart: its position is ambiguous.",
+        ),
+        (
+            "gravity_implausible",
+            NOT_COMPUTED,
+            "Observed gravity outside Earth's range (975000-984000 mGal) after units: no anomaly computed.",
+        ),
         ("density_bad", NOT_COMPUTED, "Density outside 500-5000 kg/m3: no Bouguer anomaly computed for this station."),
-        ("height_dem_mismatch", WARNING, "Station height disagrees with the DEM by more than the local relief explains (see dem_diff)."),
-        ("geoid_missing", NOT_COMPUTED, "No geoid height at the station: its heights cannot be converted between datums."),
+        (
+            "height_dem_mismatch",
+            WARNING,
+            "Station height disagrees with the DEM by more than the local relief explains (see dem_diff).",
+        ),
+        (
+            "geoid_missing",
+            NOT_COMPUTED,
+            "No geoid height at the station: its heights cannot be converted between datums.",
+        ),
         ("no_tc", NOT_COMPUTED, "No terrain correction for this station: no complete Bouguer anomaly."),
     ),
     # --- terrain correction -------------------------------------------------
@@ -89,8 +108,16 @@ VOCABULARY = {
         ("no_dem_at_station", NOT_COMPUTED, "The elevation raster has no data at the station: no terrain correction."),
         ("tc_partial", WARNING, "The elevation rasters do not cover the whole correction area (see tc_cover)."),
         ("tc_no_data_zones", WARNING, "Some ring-and-sector compartments had no elevation data and count as flat."),
-        ("tc_gap_inner", WARNING, "The elevation rasters lack data over part of the inner zone (see the inner coverage)."),
-        ("tc_density_reference", INFO, "With water, the terrain correction uses the reference (median) density, not this station's."),
+        (
+            "tc_gap_inner",
+            WARNING,
+            "The elevation rasters lack data over part of the inner zone (see the inner coverage).",
+        ),
+        (
+            "tc_density_reference",
+            INFO,
+            "With water, the terrain correction uses the reference (median) density, not this station's.",
+        ),
     ),
     # --- terrain correction: ring-and-sector (Hammer 1939) ------------------
     **_entries(
@@ -107,7 +134,11 @@ VOCABULARY = {
     ),
     # --- regional-residual separation ---------------------------------------
     **_entries(
-        ("outside_grid", NOT_COMPUTED, "The station lies outside the anomaly raster or next to blank cells: no regional or residual value."),
+        (
+            "outside_grid",
+            NOT_COMPUTED,
+            "The station lies outside the anomaly raster or next to blank cells: no regional or residual value.",
+        ),
     ),
     # --- readings and observed gravity --------------------------------------
     **_entries(
@@ -116,7 +147,11 @@ VOCABULARY = {
         ("duplicate_reading", WARNING, "Same station and time as an earlier row: this copy is left out."),
         ("time_backwards", WARNING, "The time is earlier than a previous row of the same loop: check it."),
         ("no_instrument_height", INFO, "No instrument height given for this reading: 0 m used."),
-        ("no_tide_position", NOT_COMPUTED, "The station has no usable position for the tide: its readings are left out."),
+        (
+            "no_tide_position",
+            NOT_COMPUTED,
+            "The station has no usable position for the tide: its readings are left out.",
+        ),
         ("reading_outlier", WARNING, "The reading's residual exceeds 3 standard errors."),
         ("reading_left_out", WARNING, "The reading was left out of the final adjustment (outlier second pass)."),
         ("loop_single_base", WARNING, "The loop occupies its base once only: no closure, drift not from the base."),
@@ -129,7 +164,7 @@ VOCABULARY = {
 }
 
 
-def split_codes(text: str | None) -> List[str]:
+def split_codes(text: str | None) -> list[str]:
     """Codes of a ``qc_flag`` value, in order, without blanks.
 
     Parameters
@@ -171,7 +206,7 @@ def merge_codes(existing: str | None, new: Iterable[str]) -> str:
     >>> merge_codes(None, [])
     ''
     """
-    seen: List[str] = []
+    seen: list[str] = []
     for code in [*split_codes(existing), *new]:
         if code not in seen:
             seen.append(code)

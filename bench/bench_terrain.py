@@ -66,7 +66,7 @@ if "relief_gravity" not in sys.modules:
     sys.modules["relief_gravity"] = _mod
     _spec.loader.exec_module(_mod)
 """
-exec(REGISTER)  # noqa: S102 - the same few lines the workers run
+exec(REGISTER)  # the same few lines the workers run
 
 #: Peak resident memory of the calling process in bytes: VmHWM belongs to the
 #: process's own address space, so unlike ru_maxrss it does not carry over
@@ -228,7 +228,8 @@ def _revision() -> str:
 def _run_json(cmd: list[str], timeout: float | None = None) -> dict:
     proc = subprocess.run(cmd, capture_output=True, text=True, timeout=timeout, cwd=str(REPO_ROOT))
     if proc.returncode != 0:
-        raise RuntimeError(f"{cmd[0]} failed ({proc.returncode}):\n{proc.stderr[-3000:]}")
+        msg = f"{cmd[0]} failed ({proc.returncode}):\n{proc.stderr[-3000:]}"
+        raise RuntimeError(msg)
     return json.loads(proc.stdout.strip().splitlines()[-1])
 
 
@@ -262,7 +263,7 @@ def _processing_run(scn, x, y, h) -> dict:
         layer = src.CreateLayer("stations", srs, ogr.wkbPoint)
         layer.CreateField(ogr.FieldDefn("h", ogr.OFTReal))
         layer.StartTransaction()
-        for xi, yi, hi in zip(x, y, h):
+        for xi, yi, hi in zip(x, y, h, strict=True):
             feature = ogr.Feature(layer.GetLayerDefn())
             feature.SetField("h", float(hi))
             point = ogr.Geometry(ogr.wkbPoint)
@@ -418,7 +419,7 @@ def main(argv: list[str] | None = None) -> int:
         try:
             results["engine"] = _engine_accuracy(out, scn, xa, ya, ha, own, within, beyond, ref_outer,
                                                  terrain_correction, ElevationGrid)
-        except Exception as exc:  # noqa: BLE001 - the engine is work in progress; report, go on
+        except Exception as exc:  # broad on purpose: the engine is work in progress; report, go on
             out(f"\n[engine accuracy] failed: {type(exc).__name__}: {exc}; engine figures skipped")
             terrain_correction = None
     dd = disc["flat"] - disc["bilinear_half"]
@@ -484,7 +485,7 @@ def main(argv: list[str] | None = None) -> int:
                     f"{args.processing / processing_run['total']:.1f} stations/s start-up included "
                     f"(CPU: algorithm {processing_run['cpu_run']:.1f} s, whole process "
                     f"{processing_run['cpu_total']:.1f} s); {processing_run['computed']:,} computed")
-            except Exception as exc:  # noqa: BLE001 - report and go on
+            except Exception as exc:  # broad on purpose: report and go on
                 out(f"  failed: {type(exc).__name__}: {exc}")
                 processing_run = None
         big = runs[n_large]

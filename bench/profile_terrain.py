@@ -51,8 +51,7 @@ def main(argv: list[str] | None = None) -> int:
     parser.add_argument("--stations", type=int, default=1000, help="stations profiled (default 1,000)")
     args = parser.parse_args(argv)
     _register()
-    from relief_gravity.algorithms.terrain import ElevationGrid, terrain_correction
-    from relief_gravity.algorithms.terrain import _evaluate
+    from relief_gravity.algorithms.terrain import ElevationGrid, _evaluate, terrain_correction
     from relief_gravity.algorithms.terrain._kernels import column_kernel
     from relief_gravity.bench import terrain_scenario
 

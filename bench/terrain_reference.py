@@ -189,7 +189,7 @@ class Reference:
     def compute(self, x, y, h, regional_sub: int | None = None) -> ReferenceResult:
         """Reference parts for stations ``x, y`` (fine CRS, m), heights ``h`` (m)."""
         k = self.regional_sub if regional_sub is None else regional_sub
-        rows = [self._one(float(a), float(b), float(c), k) for a, b, c in zip(x, y, h)]
+        rows = [self._one(float(a), float(b), float(c), k) for a, b, c in zip(x, y, h, strict=True)]
         arr = np.array(rows, dtype=float).reshape(-1, 5)
         return ReferenceResult(beyond=arr[:, 0], within=arr[:, 1], fine_beyond=arr[:, 2],
                                regional=arr[:, 3], outer=arr[:, 4])
@@ -315,7 +315,7 @@ def station_square_models(scenario: Scenario, x, y, h, *, density: float = 2670.
     half = 0.5 * s.fine_cell
     rect = (-half, half, -half, half)
     out = {"flat": [], "bilinear": [], "bilinear_half": []}
-    for xs, ys, hs in zip(np.asarray(x, float), np.asarray(y, float), np.asarray(h, float)):
+    for xs, ys, hs in zip(np.asarray(x, float), np.asarray(y, float), np.asarray(h, float), strict=True):
         cx, cy, hx, hy, top = _flat_pieces(s, xs, ys, rect)
         out["flat"].append(_tc_of_columns(cx, cy, hx, hy, top - hs, density))
         out["bilinear"].append(_bilinear_tc(s, xs, ys, hs, rect, sub_size, 1.0, None, density))
@@ -337,7 +337,7 @@ def innermost_models(scenario: Scenario, x, y, h, radius: float, *, density: flo
     s = scenario
     half = 0.5 * s.fine_cell
     rect = (-radius, radius, -radius, radius)
-    for xs, ys, hs in zip(np.asarray(x, float), np.asarray(y, float), np.asarray(h, float)):
+    for xs, ys, hs in zip(np.asarray(x, float), np.asarray(y, float), np.asarray(h, float), strict=True):
         # Fine cells that can touch the disc.
         c0 = int(np.floor((xs - radius - s.fine_west) / s.fine_cell)) - 1
         c1 = int(np.floor((xs + radius - s.fine_west) / s.fine_cell)) + 2

@@ -39,8 +39,8 @@ their area inside it.
 
 from __future__ import annotations
 
+from collections.abc import Callable
 from dataclasses import dataclass
-from typing import Callable, Optional
 
 import numpy as np
 import numpy.typing as npt
@@ -121,7 +121,7 @@ class PrismSet:
         return float(np.sum(self.density * volume))
 
     @staticmethod
-    def concatenate(*sets: "PrismSet") -> "PrismSet":
+    def concatenate(*sets: PrismSet) -> PrismSet:
         fields = ("west", "east", "south", "north", "bottom", "top", "density")
         return PrismSet(*(np.concatenate([np.asarray(getattr(s, f), float) for s in sets]) for f in fields))
 
@@ -314,7 +314,7 @@ def terrain_attraction(
     northing: npt.ArrayLike,
     station_height: npt.ArrayLike,
     fine: HeightGrid,
-    regional: Optional[HeightGrid] = None,
+    regional: HeightGrid | None = None,
     *,
     density: float = DEFAULT_REDUCTION_DENSITY,
     outer_radius: float = BOUGUER_CAP_RADIUS,
@@ -322,7 +322,7 @@ def terrain_attraction(
     regional_prism_radius: float = 30000.0,
     earth_radius: float = MEAN_EARTH_RADIUS,
     bilinear_cells: int = 2,
-    progress: Optional[Callable[[int, int], None]] = None,
+    progress: Callable[[int, int], None] | None = None,
 ) -> np.ndarray:
     """Downward attraction (mGal) of all topographic masses within ``outer_radius``.
 

@@ -275,7 +275,7 @@ def road_stations(rng, spacing=400.0, jitter=15.0):
         x = np.interp(at, chain, pts[:, 0]) + rng.normal(0.0, jitter, at.size)
         y = np.interp(at, chain, pts[:, 1]) + rng.normal(0.0, jitter, at.size)
         inside = (np.abs(x) < SURVEY_HALF) & (np.abs(y) < SURVEY_HALF)
-        for k, (xi, yi) in enumerate(zip(x[inside], y[inside])):
+        for k, (xi, yi) in enumerate(zip(x[inside], y[inside], strict=True)):
             ids.append(f"{road}{k + 1:03d}")
             xs.append(xi)
             ys.append(yi)
@@ -365,7 +365,7 @@ def write_stations(path, ids, x, y, fields):
 def latitudes(x, y):
     """Geodetic latitude (degrees) of UTM 32N positions, through OSR."""
     transform = osr.CoordinateTransformation(_srs(EPSG), _srs(4326))
-    return np.array([transform.TransformPoint(float(a), float(b))[1] for a, b in zip(x, y)])
+    return np.array([transform.TransformPoint(float(a), float(b))[1] for a, b in zip(x, y, strict=True)])
 
 
 # --- main ----------------------------------------------------------------------------

@@ -83,7 +83,7 @@ def loop_misclosures(path):
             for f in QgsVectorLayer(str(path), "readings", "ogr").getFeatures() if f["g_read"] not in (None, NULL)]
     loops, ids = sorted({r[0] for r in rows}), sorted({r[1] for r in rows})
     closure = loop_closures(*([ids.index(r[1]) for r in rows], [loops.index(r[0]) for r in rows]), [r[2] for r in rows], [r[3] for r in rows])
-    return dict(zip(loops, closure.misclosure))
+    return dict(zip(loops, closure.misclosure, strict=True))
 
 
 def main(argv: list[str]) -> int:

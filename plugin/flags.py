@@ -47,9 +47,15 @@ def _notes() -> dict:
         "no_dem_at_station": _tr("The elevation raster has no data at the station: no terrain correction."),
         "tc_partial": _tr("The elevation rasters do not cover the whole correction area (see tc_cover)."),
         "tc_no_data_zones": _tr("Some ring-and-sector compartments had no elevation data and count as flat."),
-        "tc_regional_fill": _tr("Ring-and-sector: the regional raster gave heights where the fine raster has no data inside its extent."),
-        "tc_no_slope": _tr("Ring-and-sector: no elevation data at the station, so the zones finer than a DEM cell count as flat."),
-        "outside_grid": _tr("The station lies outside the anomaly raster or next to blank cells: no regional or residual value."),
+        "tc_regional_fill": _tr(
+            "Ring-and-sector: the regional raster gave heights where the fine raster has no data inside its extent."
+        ),
+        "tc_no_slope": _tr(
+            "Ring-and-sector: no elevation data at the station, so the zones finer than a DEM cell count as flat."
+        ),
+        "outside_grid": _tr(
+            "The station lies outside the anomaly raster or next to blank cells: no regional or residual value."
+        ),
         "unknown_station": _tr("The reading names a station that is not in the station layer: left out."),
         "no_reading": _tr("The reading is empty or not a number: left out."),
         "duplicate_reading": _tr("Same station and time as an earlier row: this copy is left out."),
@@ -65,7 +71,9 @@ def _notes() -> dict:
         "single_reading": _tr("One reading only: no check on this station's value."),
         "known_station": _tr("A station of known gravity (a tie of the network)."),
         "tc_gap_inner": _tr("The elevation rasters lack data over part of the inner zone (see the inner coverage)."),
-        "tc_density_reference": _tr("With water, the terrain correction uses the reference (median) density, not this station's."),
+        "tc_density_reference": _tr(
+            "With water, the terrain correction uses the reference (median) density, not this station's."
+        ),
     }
 
 

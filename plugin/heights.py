@@ -29,6 +29,13 @@ def _tr(text: str) -> str:
 
 
 def height_datum_names() -> list[str]:
+    """Translated names of the station height datums, in the order of the HEIGHT_DATUM choice.
+
+    Returns
+    -------
+    list of str
+        Ellipsoidal, orthometric above EGM96, orthometric with a geoid height from a field or raster.
+    """
     return [
         _tr("Ellipsoidal heights (e.g. from GNSS)"),
         _tr("Orthometric heights above the EGM96 geoid"),
@@ -37,6 +44,13 @@ def height_datum_names() -> list[str]:
 
 
 def dem_datum_names() -> list[str]:
+    """Translated names of the DEM height datums, in the order of the DEM_DATUM choice.
+
+    Returns
+    -------
+    list of str
+        EGM96 geoid, ellipsoid, same datum as the station heights.
+    """
     return [
         _tr("EGM96 geoid (most global DEMs)"),
         _tr("Ellipsoid"),
@@ -191,8 +205,10 @@ def local_relief(raster, x, y) -> np.ndarray:
 
 
 def flag_mismatches(table, dem_diff, heights: Heights, placed, height_datum, dem_datum, feedback) -> int:
-    """Flag stations whose height disagrees with the DEM beyond the local relief;
-    say in the log which datum setting is likely wrong. Returns the count."""
+    """Flag stations whose height disagrees with the DEM beyond the local relief.
+
+    Says in the log which datum setting is likely wrong. Returns the count.
+    """
     diff = np.asarray(dem_diff, dtype=float)
     tolerance = datums.mismatch_tolerance(local_relief(placed.raster, placed.x, placed.y))
     off = np.isfinite(diff) & (np.abs(diff) > tolerance)

@@ -57,6 +57,7 @@ class StationTable:
     flags: list = field(default_factory=list)
 
     def __len__(self) -> int:
+        """Number of stations (features) in the table."""
         return len(self.features)
 
     def flag(self, index: int, reason: str) -> None:
@@ -66,6 +67,15 @@ class StationTable:
             self.flags[index].append(code)
 
     def flag_where(self, mask: np.ndarray, reason: str) -> None:
+        """Add a flag code to every station where ``mask`` is true.
+
+        Parameters
+        ----------
+        mask : numpy.ndarray of bool
+            One value per station.
+        reason : str
+            A flag code, or a reason given as text (mapped to its code as in :meth:`flag`).
+        """
         for index in np.flatnonzero(mask):
             self.flag(int(index), reason)
 
@@ -76,8 +86,10 @@ class StationTable:
                 self.flag(index, reason.strip())
 
     def field_values(self, name: str | None, scale: float = 1.0, missing_code: str = "") -> np.ndarray:
-        """Numeric attribute as a float array (NaN where NULL or not a number),
-        flagged ``missing_code`` where missing."""
+        """Numeric attribute as a float array (NaN where NULL or not a number).
+
+        Stations where it is missing are flagged ``missing_code``.
+        """
         if not name:
             return np.full(len(self), np.nan)
         values = np.array([as_float(f[name]) for f in self.features], dtype=float) * scale
@@ -183,8 +195,10 @@ SAME_POINT = 0.01
 
 
 def _station_point(geometry):
-    """(x, y, distinct) of a station geometry: NaN for none; ``distinct`` when
-    a multi-part point has parts farther apart than ``SAME_POINT``."""
+    """(x, y, distinct) of a station geometry, NaN for none.
+
+    ``distinct`` is true when a multi-part point has parts farther apart than ``SAME_POINT``.
+    """
     if geometry is None or geometry.isNull() or geometry.isEmpty():
         return math.nan, math.nan, False
     if not geometry.isMultipart():
@@ -347,7 +361,7 @@ def write_stations(sink, table: StationTable, fields: QgsFields, indices: dict, 
         for name, values in columns.items():
             value = float(values[i])
             attributes[indices[name]] = value if math.isfinite(value) else None
-        for name, index in kept:
+        for _name, index in kept:
             value = as_float(attributes[index])
             attributes[index] = value if math.isfinite(value) else None
         if "qc_flag" in indices:

@@ -76,9 +76,9 @@ CONTOUR_INTERVAL_EXPRESSION = (
 #: True for an index contour: its value is a whole multiple of INDEX_EVERY
 #: intervals (every level is one when the layer has a single level).
 INDEX_CONTOUR_EXPRESSION = (
-    "with_variable('rg_step', {every} * ({interval}), "
+    f"with_variable('rg_step', {INDEX_EVERY} * ({CONTOUR_INTERVAL_EXPRESSION}), "
     "@rg_step <= 0 or abs(\"value\" / @rg_step - round(\"value\" / @rg_step)) < 1e-6)"
-).format(every=INDEX_EVERY, interval=CONTOUR_INTERVAL_EXPRESSION)
+)
 
 
 def _tr(text: str) -> str:
@@ -291,6 +291,7 @@ class RasterStylePostProcessor(QgsProcessingLayerPostProcessorInterface):
         self.abstract = abstract
 
     def postProcessLayer(self, layer, context, feedback):  # noqa: N802 - QGIS API
+        """Style the output once Processing has loaded it (QGIS API override); an invalid layer is left alone."""
         if layer is not None and layer.isValid():
             style_anomaly_raster(layer, self.title, self.abstract)
 
@@ -303,6 +304,7 @@ class ContourStylePostProcessor(QgsProcessingLayerPostProcessorInterface):
         self.name = name
 
     def postProcessLayer(self, layer, context, feedback):  # noqa: N802 - QGIS API
+        """Style the output once Processing has loaded it (QGIS API override); an invalid layer is left alone."""
         if layer is not None and layer.isValid():
             style_contours(layer, self.name)
 

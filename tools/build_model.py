@@ -70,7 +70,8 @@ def _child(algorithm_id, child_id, description, sources, x, y):
 
     algorithm = QgsApplication.processingRegistry().algorithmById(algorithm_id)
     if algorithm is None:
-        raise RuntimeError(f"{algorithm_id} is not registered; is the plugin loaded?")
+        msg = f"{algorithm_id} is not registered; is the plugin loaded?"
+        raise RuntimeError(msg)
     child = QgsProcessingModelChildAlgorithm(algorithm_id)
     child.setChildId(child_id)
     child.setDescription(description)
@@ -234,12 +235,12 @@ def _stations_model(name, description):
     from qgis.core import (
         QgsProcessing,
         QgsProcessingModelAlgorithm,
-        QgsProcessingModelChildParameterSource as Source,
-        QgsProcessingParameterField,
         QgsProcessingParameterFeatureSource,
+        QgsProcessingParameterField,
         QgsProcessingParameterNumber,
         QgsProcessingParameterRasterLayer,
     )
+    from qgis.core import QgsProcessingModelChildParameterSource as Source
 
     model = QgsProcessingModelAlgorithm(name, "Relief Gravity", "reliefgravity")
     model.setHelpContent(
@@ -299,8 +300,8 @@ REGIONAL, RESIDUAL = "regional", "residual"
 
 def build_separation_model():
     """Stations with observed gravity -> reduce -> grid -> regional-residual."""
+    from qgis.core import QgsProcessingModelChildParameterSource as Source
     from qgis.core import (
-        QgsProcessingModelChildParameterSource as Source,
         QgsProcessingParameterEnum,
         QgsProcessingParameterNumber,
     )
@@ -353,13 +354,13 @@ def build_readings_model():
     from qgis.core import (
         QgsProcessing,
         QgsProcessingModelAlgorithm,
-        QgsProcessingModelChildParameterSource as Source,
         QgsProcessingParameterEnum,
         QgsProcessingParameterFeatureSource,
         QgsProcessingParameterField,
         QgsProcessingParameterNumber,
         QgsProcessingParameterRasterLayer,
     )
+    from qgis.core import QgsProcessingModelChildParameterSource as Source
 
     model = QgsProcessingModelAlgorithm(
         "Readings to observed gravity, reduce, grid, contour and report", "Relief Gravity", "reliefgravity"
@@ -427,9 +428,9 @@ def build_styles(folder: Path) -> tuple[Path, Path]:
     import numpy as np
     import processing
     from osgeo import ogr, osr
+    from qgis.core import QgsRasterLayer, QgsVectorLayer
 
     from relief_gravity.plugin.styling import write_style_files
-    from qgis.core import QgsRasterLayer, QgsVectorLayer
 
     rng = np.random.default_rng(2024)
     x = 500_000.0 + rng.uniform(0, 8000, 150)
@@ -445,7 +446,7 @@ def build_styles(folder: Path) -> tuple[Path, Path]:
     ds = ogr.GetDriverByName("GPKG").CreateDataSource(str(work / "stations.gpkg"))
     layer = ds.CreateLayer("stations", srs, ogr.wkbPoint)
     layer.CreateField(ogr.FieldDefn("cba", ogr.OFTReal))
-    for xi, yi, vi in zip(x, y, cba):
+    for xi, yi, vi in zip(x, y, cba, strict=True):
         feature = ogr.Feature(layer.GetLayerDefn())
         point = ogr.Geometry(ogr.wkbPoint)
         point.AddPoint_2D(float(xi), float(yi))

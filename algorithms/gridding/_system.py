@@ -103,7 +103,10 @@ def _ghost_map(n_rows: int, n_cols: int, boundary_tension: float) -> sp.csr_matr
     for axis_rows, size, along in ((True, ny, nx), (False, nx, ny)):
         idx = np.arange(size)
         for side in (0, 1):
-            def node(k: np.ndarray, depth: int) -> np.ndarray:
+            # Called only within this iteration; the loop values are bound as defaults all the same.
+            def node(
+                k: np.ndarray, depth: int, side: int = side, along: int = along, axis_rows: bool = axis_rows
+            ) -> np.ndarray:
                 # depth counts inward from the edge: -2, -1 are ghosts, 0 the edge node.
                 pos = depth if side == 0 else along - 1 - depth
                 return ext(k, np.full_like(k, pos)) if axis_rows else ext(np.full_like(k, pos), k)
@@ -306,7 +309,6 @@ def _system_from_template(
     t_row, t_col, t_val = small.row[by_row], small.col[by_row], small.data[by_row]
     t_di = t_col // side - t_row // side
     t_dj = t_col % side - t_row % side
-    starts = np.searchsorted(t_row, np.arange(side * side + 1))
 
     def kind(index: np.ndarray, size: int) -> np.ndarray:
         out = np.where(index < _TEMPLATE_HALF, index, _TEMPLATE_HALF)

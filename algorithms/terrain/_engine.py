@@ -27,8 +27,8 @@ from dataclasses import dataclass
 import numpy as np
 import numpy.typing as npt
 
-from ._errors import TerrainCancelled
 from ._coverage import truncation_estimate
+from ._errors import TerrainCancelled
 from ._evaluate import Batch, Physics, evaluate_level
 from ._grid import ElevationGrid
 from ._innermost import innermost
@@ -170,19 +170,23 @@ def terrain_correction(
     if model is None:
         model = TerrainModel(**model_options)  # type: ignore[arg-type]
     elif model_options:
-        raise ValueError(f"give either a model or model options, not both: {sorted(model_options)}")
+        msg = f"give either a model or model options, not both: {sorted(model_options)}"
+        raise ValueError(msg)
     xs = np.atleast_1d(np.asarray(x, dtype=float))
     ys = np.atleast_1d(np.asarray(y, dtype=float))
     hs = np.atleast_1d(np.asarray(station_height, dtype=float))
     n = xs.size
     if ys.size != n or hs.size != n:
-        raise ValueError(f"x, y and station_height must have the same length, got {xs.size}, {ys.size}, {hs.size}")
+        msg = f"x, y and station_height must have the same length, got {xs.size}, {ys.size}, {hs.size}"
+        raise ValueError(msg)
     model.check_stations(n)
     if regional is not None and regional.geographic != fine.geographic:
-        raise ValueError("fine and regional grids must share one CRS (both geographic or both projected)")
+        msg = "fine and regional grids must share one CRS (both geographic or both projected)"
+        raise ValueError(msg)
     n_workers = workers if workers is not None else min(2, os.cpu_count() or 1)
     if n_workers < 1:
-        raise ValueError(f"workers must be >= 1, got {workers}")
+        msg = f"workers must be >= 1, got {workers}"
+        raise ValueError(msg)
     physics = Physics(1.0, model.engine_water_density, model.inner_radius, model.outer_radius, model.curvature)
     field_tc = model.engine_innermost(n)
 
@@ -220,7 +224,8 @@ def terrain_correction(
 
     def check() -> None:
         if is_cancelled is not None and is_cancelled():
-            raise TerrainCancelled("terrain correction cancelled")
+            msg = "terrain correction cancelled"
+            raise TerrainCancelled(msg)
 
     disc = math.pi * model.outer_radius**2
     inner_disc = math.pi * model.inner_radius**2
@@ -230,19 +235,36 @@ def terrain_correction(
         setup = setup_share * len(tile)
         n_grids = 1 if regional is None else 2
 
-        def level_done(frac: float, g: int = 0) -> None:
+        # Loop values are bound as defaults (same values: plan_grid calls level_done before `done` moves on).
+        def level_done(
+            frac: float, g: int = 0, *, done: float = done, setup: float = setup, n_grids: int = n_grids
+        ) -> None:
             report((done + setup * (g + frac) / n_grids) / (total_work * (1 + setup_share)))
 
         plans = [plan_grid(fine, tx, ty, model.outer_radius, True, None, is_cancelled, level_done)]
         if regional is not None:
-            plans.append(plan_grid(regional, tx, ty, model.outer_radius, False, exclude, is_cancelled, lambda f: level_done(f, 1)))
+            plans.append(
+                plan_grid(
+                    regional, tx, ty, model.outer_radius, False, exclude, is_cancelled, lambda f: level_done(f, 1)
+                )
+            )
         done += setup
         level0 = plans[0].stats[0]
         window = np.where(level0.weight > 0, level0.mean, np.nan)
         origin = (level0.block_row0, level0.block_col0)
         base_r, base_c, _, _ = bilinear_setup(fine, tx, ty)
 
-        def one_batch(ch: range) -> tuple[np.ndarray, ...]:
+        # Loop values are bound as defaults; every call ends inside this iteration (the pool is shut down below).
+        def one_batch(
+            ch: range,
+            *,
+            tile: np.ndarray = tile,
+            base_r: np.ndarray = base_r,
+            base_c: np.ndarray = base_c,
+            plans: list = plans,
+            window: np.ndarray = window,
+            origin: tuple[int, int] = origin,
+        ) -> tuple[np.ndarray, ...]:
             loc = np.arange(ch.start, ch.stop)
             gi = tile[loc]
             bt = Batch(loc, xs[gi], ys[gi], hs[gi], base_r[loc], base_c[loc])
@@ -318,7 +340,9 @@ def terrain_correction(
     tc_inner = tc_inner * factor
     tc_outer = tc_outer * factor
     covered = np.where(todo, coverage, np.nan)
-    truncation = truncation_estimate(covered, edge_mean, edge_square, model.outer_radius, physics.density, model.curvature)
+    truncation = truncation_estimate(
+        covered, edge_mean, edge_square, model.outer_radius, physics.density, model.curvature
+    )
     return TerrainResult(
         tc_inner=tc_inner,
         tc_outer=tc_outer,
@@ -333,8 +357,10 @@ def terrain_correction(
 
 
 def _bilinear(grid: ElevationGrid, x: float, y: float) -> float:
-    """One bilinear height; kept only until tests/algorithms/terrain/test_hammer.py
-    (owned by the ring-and-sector work) calls :func:`sample_bilinear` itself.
+    """One bilinear height.
+
+    Kept only until tests/algorithms/terrain/test_hammer.py (owned by the
+    ring-and-sector work) calls :func:`sample_bilinear` itself.
 
     Examples
     --------
@@ -345,8 +371,10 @@ def _bilinear(grid: ElevationGrid, x: float, y: float) -> float:
 
 
 def _inside(grid: ElevationGrid, x: np.ndarray, y: np.ndarray) -> np.ndarray:
-    """Half-open extent test; kept only until ``_hammer.py`` (owned by the
-    ring-and-sector work) uses :func:`inside_extent`.
+    """Half-open extent test.
+
+    Kept only until ``_hammer.py`` (owned by the ring-and-sector work) uses
+    :func:`inside_extent`.
 
     Examples
     --------

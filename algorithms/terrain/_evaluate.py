@@ -167,13 +167,25 @@ def prism_terms(dx, dy, hx, hy, rel, drop, heights, physics: Physics) -> np.ndar
     if physics.water_density is not None:
         wet = rel + heights < 0.0
         if np.any(wet):
-            gw = prism_gravity(0.0, 0.0, 0.0, dx[wet] - hx[wet], dx[wet] + hx[wet], dy[wet] - hy[wet], dy[wet] + hy[wet],
-                               rel[wet] - drop[wet], -heights[wet] - drop[wet], physics.water_density)
+            gw = prism_gravity(
+                0.0,
+                0.0,
+                0.0,
+                dx[wet] - hx[wet],
+                dx[wet] + hx[wet],
+                dy[wet] - hy[wet],
+                dy[wet] + hy[wet],
+                rel[wet] - drop[wet],
+                -heights[wet] - drop[wet],
+                physics.water_density,
+            )
             g[wet] -= gw
     return g
 
 
-def column_terms(dx, dy, s2, relief, mean, area, side_x, side_y, variance, heights, physics: Physics, cov=(None, None)) -> np.ndarray:
+def column_terms(
+    dx, dy, s2, relief, mean, area, side_x, side_y, variance, heights, physics: Physics, cov=(None, None)
+) -> np.ndarray:
     """Column terrain effect (mGal) of blocks, water included (1-D arrays).
 
     Examples
@@ -194,7 +206,8 @@ def column_terms(dx, dy, s2, relief, mean, area, side_x, side_y, variance, heigh
             d = drop[w] if np.ndim(drop) else drop
             sx, sy = np.broadcast_to(side_x, dx.shape)[w], np.broadcast_to(side_y, dx.shape)[w]
             v = (dx[w], dy[w])
-            layer = column_terrain_effect(*v, relief[w], d, sx, sy, area[w]) - column_terrain_effect(*v, -heights[w], d, sx, sy, area[w])
+            top = column_terrain_effect(*v, relief[w], d, sx, sy, area[w])
+            layer = top - column_terrain_effect(*v, -heights[w], d, sx, sy, area[w])
             tc[w] -= physics.water_density * scale * layer
     return tc
 
@@ -336,7 +349,8 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
         valid &= ~(near_r[:, :, None] & near_c[:, None, :])
     # Gather only the blocks of the rings that have data.
     index_type = np.int32 if n_br * n_bc < 2**31 else np.int64
-    dense = (np.minimum(ri, n_br - 1).astype(index_type) * n_bc)[:, :, None] + np.minimum(ci, n_bc - 1).astype(index_type)[:, None, :]
+    row_part = (np.minimum(ri, n_br - 1).astype(index_type) * n_bc)[:, :, None]
+    dense = row_part + np.minimum(ci, n_bc - 1).astype(index_type)[:, None, :]
     ar0, ar1 = int(r_lo.min()) - lvl.block_row0, int((r_lo + nr).max()) - lvl.block_row0
     ac0, ac1 = int(c_lo.min()) - lvl.block_col0, int((c_lo + nc).max()) - lvl.block_col0
     ar1, ac1 = min(ar1, n_br), min(ac1, n_bc)
@@ -351,7 +365,9 @@ def evaluate_level(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     # (geographic): each term is good to about 1e-6 of itself, far below the
     # model's own error, at half the cost.
     if grid.geographic:
-        dx, dy = (d.astype(np.float32) for d in ground_offsets(grid, bt.x[owner], bt.y[owner], tab.x[flat], tab.y[flat]))
+        dx, dy = (
+            d.astype(np.float32) for d in ground_offsets(grid, bt.x[owner], bt.y[owner], tab.x[flat], tab.y[flat])
+        )
     else:
         dx = tab.east[flat] - (bt.x - tab.origin[0]).astype(np.float32)[owner]
         dy = tab.north[flat] - (bt.y - tab.origin[1]).astype(np.float32)[owner]

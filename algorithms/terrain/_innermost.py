@@ -95,7 +95,13 @@ def plane_terrain_effect(
     sec = np.sqrt(1.0 + tan_t * tan_t)
     # 1 - cos(theta) without cancellation for gentle slopes.
     one_minus_cos = tan_t * tan_t / (sec * (sec + 1.0))
-    out = GRAVITATIONAL_CONSTANT * density * SI_TO_MGAL * (2.0 * math.pi / sectors) * np.sum(reach * one_minus_cos, axis=-1)
+    out = (
+        GRAVITATIONAL_CONSTANT
+        * density
+        * SI_TO_MGAL
+        * (2.0 * math.pi / sectors)
+        * np.sum(reach * one_minus_cos, axis=-1)
+    )
     return float(out) if out.ndim == 0 else out
 
 
@@ -224,8 +230,16 @@ def innermost(
         bx = np.concatenate(boxes)
         rl = np.concatenate(rel)
         ow = np.concatenate(owner)
-        g = prism_terms(0.5 * (bx[:, 0] + bx[:, 1]), 0.5 * (bx[:, 2] + bx[:, 3]), 0.5 * (bx[:, 1] - bx[:, 0]),
-                        0.5 * (bx[:, 3] - bx[:, 2]), rl, np.zeros(rl.shape), height[ow], physics)
+        g = prism_terms(
+            0.5 * (bx[:, 0] + bx[:, 1]),
+            0.5 * (bx[:, 2] + bx[:, 3]),
+            0.5 * (bx[:, 1] - bx[:, 0]),
+            0.5 * (bx[:, 3] - bx[:, 2]),
+            rl,
+            np.zeros(rl.shape),
+            height[ow],
+            physics,
+        )
         rest = np.bincount(ow, weights=g, minlength=x.size)
         area = np.bincount(ow, weights=(bx[:, 1] - bx[:, 0]) * (bx[:, 3] - bx[:, 2]), minlength=x.size)
     return square, rest, area, cw * ch

@@ -79,7 +79,9 @@ def line_mass_gravity(
     depth_top = zp - np.asarray(top, dtype=float)
     depth_bottom = zp - np.asarray(bottom, dtype=float)
     kernel = inverse_distance_difference(dx * dx + dy * dy, depth_top, depth_bottom)
-    return GRAVITATIONAL_CONSTANT * np.asarray(density, dtype=float) * np.asarray(area, dtype=float) * kernel * SI_TO_MGAL
+    return (
+        GRAVITATIONAL_CONSTANT * np.asarray(density, dtype=float) * np.asarray(area, dtype=float) * kernel * SI_TO_MGAL
+    )
 
 
 def column_terrain_effect(
@@ -153,7 +155,9 @@ def column_terrain_effect(
     return column_kernel(dx * dx + dy * dy, dx, dy, relief, drop, side_x, side_y, area, variance)
 
 
-def column_kernel(s2, dx, dy, relief, drop, side_x, side_y, area, variance=0.0, cov_east=None, cov_north=None) -> np.ndarray:
+def column_kernel(
+    s2, dx, dy, relief, drop, side_x, side_y, area, variance=0.0, cov_east=None, cov_north=None
+) -> np.ndarray:
     r""":func:`column_terrain_effect` with the squared distance ``s2`` given.
 
     The engine's inner loop: ``s2 = dx^2 + dy^2`` is already known there, and

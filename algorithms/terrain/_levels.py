@@ -12,8 +12,8 @@ stays bounded by the block arrays themselves.
 
 from __future__ import annotations
 
-from dataclasses import dataclass, field
 from collections.abc import Callable
+from dataclasses import dataclass, field
 
 import numpy as np
 
@@ -92,7 +92,8 @@ class BlockLevel:
         r0, c0 = brow0 - self.block_row0, bcol0 - self.block_col0
         r1, c1 = brow1 - self.block_row0, bcol1 - self.block_col0
         if r0 < 0 or c0 < 0 or r1 > self.weight.shape[0] or c1 > self.weight.shape[1]:
-            raise IndexError("requested blocks outside the stored window")
+            msg = "requested blocks outside the stored window"
+            raise IndexError(msg)
         sl = (slice(r0, r1), slice(c0, c1))
         return (self.weight[sl], self.mean[sl], self.variance[sl], self.row_offset[sl], self.col_offset[sl])
 
@@ -193,7 +194,8 @@ def block_statistics(
         acc = np.zeros((7, gc1 - gc0))
         for s0 in range(r0, r1, rows_per_read):
             if is_cancelled is not None and is_cancelled():
-                raise TerrainCancelled("terrain correction cancelled")
+                msg = "terrain correction cancelled"
+                raise TerrainCancelled(msg)
             s1 = min(s0 + rows_per_read, r1)
             data = grid.read_window(s0, gc0, s1 - s0, gc1 - gc0)
             w = np.isfinite(data).astype(float)
@@ -261,7 +263,8 @@ def _cell_statistics(
         ox, cxo = _outside_fraction(xw, xw + grid.cell_x, exclude[0], exclude[1])
     for s0 in range(0, n_rows, step):
         if is_cancelled is not None and is_cancelled():
-            raise TerrainCancelled("terrain correction cancelled")
+            msg = "terrain correction cancelled"
+            raise TerrainCancelled(msg)
         s1 = min(s0 + step, n_rows)
         data = grid.read_window(row0 + s0, col0, s1 - s0, n_cols)
         w = np.isfinite(data).astype(float)
@@ -383,4 +386,5 @@ def merge_blocks(
     col_off = np.where(ok, col_sum / safe, 0.0)
     row_cov = np.where(ok, row_h / safe - row_off * mean, 0.0)
     col_cov = np.where(ok, col_h / safe - col_off * mean, 0.0)
-    return BlockLevel(factor, block_row0, block_col0, sum_w / (m * m), mean, variance, row_off, col_off, row_cov, col_cov)
+    weight = sum_w / (m * m)
+    return BlockLevel(factor, block_row0, block_col0, weight, mean, variance, row_off, col_off, row_cov, col_cov)

@@ -88,28 +88,35 @@ class TerrainModel:
         inner = _number(self.inner_radius, "inner_radius")
         outer = _number(self.outer_radius, "outer_radius")
         if not inner >= 0:
-            raise ValueError(f"inner_radius must be a number >= 0 m, got {self.inner_radius!r}")
+            msg = f"inner_radius must be a number >= 0 m, got {self.inner_radius!r}"
+            raise ValueError(msg)
         if not (outer > 0 and math.isfinite(outer)):
-            raise ValueError(f"outer_radius must be a finite number > 0 m, got {self.outer_radius!r}")
+            msg = f"outer_radius must be a finite number > 0 m, got {self.outer_radius!r}"
+            raise ValueError(msg)
         if inner > outer:
-            raise ValueError(f"inner_radius ({inner} m) must not exceed outer_radius ({outer} m)")
+            msg = f"inner_radius ({inner} m) must not exceed outer_radius ({outer} m)"
+            raise ValueError(msg)
         object.__setattr__(self, "inner_radius", inner)
         object.__setattr__(self, "outer_radius", outer)
         object.__setattr__(self, "density", _density(self.density))
         if self.water_density is not None:
             water = _number(self.water_density, "water_density")
             if not (water >= 0 and math.isfinite(water)):
-                raise ValueError(f"water_density must be a finite number >= 0 kg/m^3, got {self.water_density!r}")
+                msg = f"water_density must be a finite number >= 0 kg/m^3, got {self.water_density!r}"
+                raise ValueError(msg)
             object.__setattr__(self, "water_density", water)
         if not isinstance(self.curvature, (bool, np.bool_)):
-            raise ValueError(f"curvature must be True or False, got {self.curvature!r}")
+            msg = f"curvature must be True or False, got {self.curvature!r}"
+            raise ValueError(msg)
         object.__setattr__(self, "curvature", bool(self.curvature))
         if self.innermost_tc is not None:
             values = np.atleast_1d(np.asarray(self.innermost_tc, dtype=float))
             if values.ndim != 1:
-                raise ValueError(f"innermost_tc must be one value per station, got shape {values.shape}")
+                msg = f"innermost_tc must be one value per station, got shape {values.shape}"
+                raise ValueError(msg)
             if np.any(np.isinf(values)):
-                raise ValueError("innermost_tc holds an infinite value")
+                msg = "innermost_tc holds an infinite value"
+                raise ValueError(msg)
             values.flags.writeable = False
             object.__setattr__(self, "innermost_tc", values)
 
@@ -185,9 +192,11 @@ class TerrainModel:
         ValueError: innermost_tc must have one value per station (3), got 2
         """
         if self.per_station_density and self.density.size != n:
-            raise ValueError(f"density must be one value or one per station ({n}), got {self.density.size}")
+            msg = f"density must be one value or one per station ({n}), got {self.density.size}"
+            raise ValueError(msg)
         if self.innermost_tc is not None and self.innermost_tc.size != n:
-            raise ValueError(f"innermost_tc must have one value per station ({n}), got {self.innermost_tc.size}")
+            msg = f"innermost_tc must have one value per station ({n}), got {self.innermost_tc.size}"
+            raise ValueError(msg)
 
     def for_stations(self, index: npt.ArrayLike) -> TerrainModel:
         """The same model for a subset of the stations (a chunk of a run).
@@ -228,9 +237,11 @@ def _number(value: object, name: str) -> float:
     try:
         out = float(value)  # type: ignore[arg-type]
     except (TypeError, ValueError):
-        raise ValueError(f"{name} must be a number, got {value!r}") from None
+        msg = f"{name} must be a number, got {value!r}"
+        raise ValueError(msg) from None
     if math.isnan(out):
-        raise ValueError(f"{name} must be a number, got {value!r}")
+        msg = f"{name} must be a number, got {value!r}"
+        raise ValueError(msg)
     return out
 
 
@@ -239,14 +250,17 @@ def _density(value: object) -> float | np.ndarray:
     if array is None or array.ndim == 0:
         d = _number(value if array is None else array.item(), "density")
         if not (d > 0 and math.isfinite(d)):
-            raise ValueError(f"density must be a finite number > 0 kg/m^3, got {value!r}")
+            msg = f"density must be a finite number > 0 kg/m^3, got {value!r}"
+            raise ValueError(msg)
         return d
     if array.ndim != 1:
-        raise ValueError(f"density must be one value or one per station, got shape {array.shape}")
+        msg = f"density must be one value or one per station, got shape {array.shape}"
+        raise ValueError(msg)
     finite = array[np.isfinite(array)]
     if np.any(np.isinf(array)) or np.any(finite <= 0):
         bad = array[np.isinf(array) | (np.isfinite(array) & (array <= 0))][0]
-        raise ValueError(f"every station density must be > 0 kg/m^3 (or NaN for none), got {bad!r}")
+        msg = f"every station density must be > 0 kg/m^3 (or NaN for none), got {bad!r}"
+        raise ValueError(msg)
     array = array.copy()
     array.flags.writeable = False
     return array

@@ -410,7 +410,8 @@ def plan_grid(
             lvl = block_statistics(grid, cr0, cc0, cr1 - cr0, cc1 - cc0, b, exclude, is_cancelled)
         stats.append(lvl)
         if is_cancelled is not None and is_cancelled():
-            raise TerrainCancelled("terrain correction cancelled")
+            msg = "terrain correction cancelled"
+            raise TerrainCancelled(msg)
         if level_done is not None:
             level_done((idx + 1) / len(levels))
     if ranges[0] != level0:

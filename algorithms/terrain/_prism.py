@@ -69,7 +69,9 @@ def _closed_form(xs, ys, zs) -> np.ndarray:
     # Index 0 is the smaller coordinate; with z positive downward the vertex
     # (x2, y2, z2) takes the minus sign in this arrangement of Nagy's sum.
     sign = np.array([1.0, -1.0])
-    signs = (sign[:, None, None] * sign[None, :, None] * sign[None, None, :]).reshape((2, 2, 2) + (1,) * (values.ndim - 3))
+    signs = (sign[:, None, None] * sign[None, :, None] * sign[None, None, :]).reshape(
+        (2, 2, 2) + (1,) * (values.ndim - 3)
+    )
     return (values * signs).sum(axis=(0, 1, 2))
 
 

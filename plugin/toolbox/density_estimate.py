@@ -40,10 +40,10 @@ from ...algorithms.density import (
     split_consistency,
     unit_bouguer_term,
 )
-from ..terrain_run import EXACT, compute_terrain, place_stations
-from .base import StationAlgorithm, is_unset
 from ..heights import check_dem_values, prepare_heights
 from ..raster_io import raster_path
+from ..terrain_run import EXACT, compute_terrain, place_stations
+from .base import StationAlgorithm, is_unset
 from .bouguer_reduction import HEIGHT_FORMULAS, NORMAL_FORMULAS, gravity_unit_names, observed_gravity_mgal
 from .field_checks import check_numeric_fields
 
@@ -146,59 +146,90 @@ class DensityEstimateAlgorithm(StationAlgorithm):
         self.addParameter(QgsProcessingParameterRasterLayer(self.DEM, self.tr("Elevation raster (DEM, metres)")))
         self.addParameter(
             QgsProcessingParameterEnum(
-                self.METHOD, self.tr("Method"),
-                options=[self.tr("Parasnis (1952) regression"), self.tr("Nettleton (1939) least correlation with topography")],
+                self.METHOD,
+                self.tr("Method"),
+                options=[
+                    self.tr("Parasnis (1952) regression"),
+                    self.tr("Nettleton (1939) least correlation with topography"),
+                ],
                 defaultValue=PARASNIS,
             )
         )
         self.addParameter(
             QgsProcessingParameterEnum(
-                self.REGIONAL_TREND, self.tr("Regional term fitted with the density"),
-                options=[self.tr("None (constant)"), self.tr("Planar"), self.tr("Quadratic")], defaultValue=1,
+                self.REGIONAL_TREND,
+                self.tr("Regional term fitted with the density"),
+                options=[self.tr("None (constant)"), self.tr("Planar"), self.tr("Quadratic")],
+                defaultValue=1,
             )
         )
         self.addParameter(
             QgsProcessingParameterFeatureSource(
-                self.PROFILES, self.tr("Profile lines (Nettleton; empty = whole survey)"),
-                [QgsProcessing.TypeVectorLine], optional=True,
+                self.PROFILES,
+                self.tr("Profile lines (Nettleton; empty = whole survey)"),
+                [QgsProcessing.TypeVectorLine],
+                optional=True,
             )
         )
         self.addParameter(
             QgsProcessingParameterDistance(
-                self.BUFFER, self.tr("Buffer around the profile lines"), defaultValue=250.0,
-                parentParameterName=self.INPUT, minValue=0.0,
+                self.BUFFER,
+                self.tr("Buffer around the profile lines"),
+                defaultValue=250.0,
+                parentParameterName=self.INPUT,
+                minValue=0.0,
             )
         )
         self.addParameter(
             QgsProcessingParameterEnum(
-                self.NORMAL_GRAVITY, self.tr("Normal gravity"),
-                options=[self.tr("GRS80 (Somigliana closed form)"), self.tr("WGS84 (Somigliana closed form)"),
-                         self.tr("1967 formula (legacy databases)")],
+                self.NORMAL_GRAVITY,
+                self.tr("Normal gravity"),
+                options=[
+                    self.tr("GRS80 (Somigliana closed form)"),
+                    self.tr("WGS84 (Somigliana closed form)"),
+                    self.tr("1967 formula (legacy databases)"),
+                ],
                 defaultValue=0,
             )
         )
         self.addParameter(
             QgsProcessingParameterEnum(
-                self.HEIGHT_CORRECTION, self.tr("Height (free-air) correction"),
-                options=[self.tr("Second order, latitude dependent (Hinze et al. 2005)"), self.tr("First order, 0.3086 mGal/m")],
+                self.HEIGHT_CORRECTION,
+                self.tr("Height (free-air) correction"),
+                options=[
+                    self.tr("Second order, latitude dependent (Hinze et al. 2005)"),
+                    self.tr("First order, 0.3086 mGal/m"),
+                ],
                 defaultValue=0,
             )
         )
-        self.addParameter(QgsProcessingParameterBoolean(self.ATMOSPHERIC, self.tr("Apply the atmospheric correction"), defaultValue=True))
         self.addParameter(
             QgsProcessingParameterBoolean(
-                self.CURVATURE, self.tr("Spherical cap to 166.7 km (add the curvature correction to the slab)"), defaultValue=True
+                self.ATMOSPHERIC, self.tr("Apply the atmospheric correction"), defaultValue=True
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterBoolean(
+                self.CURVATURE,
+                self.tr("Spherical cap to 166.7 km (add the curvature correction to the slab)"),
+                defaultValue=True,
             )
         )
         self.add_zone_parameters(advanced=True)
         self.addParameter(
             QgsProcessingParameterFileDestination(
-                self.PLOT, self.tr("Figure of the estimate"), self.tr("PNG files (*.png)"), optional=True, createByDefault=True
+                self.PLOT,
+                self.tr("Figure of the estimate"),
+                self.tr("PNG files (*.png)"),
+                optional=True,
+                createByDefault=True,
             )
         )
         self.addOutput(QgsProcessingOutputNumber(self.DENSITY, self.tr("Estimated density (kg/m³)")))
         self.addOutput(QgsProcessingOutputNumber(self.DENSITY_LOW, self.tr("Lower bound of the 95 % interval (kg/m³)")))
-        self.addOutput(QgsProcessingOutputNumber(self.DENSITY_HIGH, self.tr("Upper bound of the 95 % interval (kg/m³)")))
+        self.addOutput(
+            QgsProcessingOutputNumber(self.DENSITY_HIGH, self.tr("Upper bound of the 95 % interval (kg/m³)"))
+        )
         self.addOutput(QgsProcessingOutputNumber(self.STATIONS_USED, self.tr("Stations used")))
 
     def checkParameterValues(self, parameters, context):  # noqa: N802 - QGIS API
@@ -207,7 +238,10 @@ class DensityEstimateAlgorithm(StationAlgorithm):
             return ok, message
         source = self.parameterAsSource(parameters, self.INPUT, context)
         problem = check_numeric_fields(
-            self, source, parameters, context,
+            self,
+            source,
+            parameters,
+            context,
             {self.GRAVITY_FIELD: self.tr("observed gravity"), self.HEIGHT_FIELD: self.tr("station height")},
         )
         if problem:
@@ -220,7 +254,9 @@ class DensityEstimateAlgorithm(StationAlgorithm):
             ).format(inner, outer)
         has_profiles = not is_unset(parameters.get(self.PROFILES))
         if has_profiles and self.parameterAsEnum(parameters, self.METHOD, context) != NETTLETON:
-            return False, self.tr("Profile lines are used by Nettleton's method only: choose it, or leave the profiles empty.")
+            return False, self.tr(
+                "Profile lines are used by Nettleton's method only: choose it, or leave the profiles empty."
+            )
         if has_profiles and not self.parameterAsDouble(parameters, self.BUFFER, context) > 0:
             return False, self.tr("The buffer around the profile lines must be more than 0.")
         return True, ""
@@ -256,15 +292,22 @@ class DensityEstimateAlgorithm(StationAlgorithm):
         curvature = self.parameterAsBoolean(parameters, self.CURVATURE, context)
         steps.setCurrentStep(1)
         tc_unit = terrain_per_unit_density(
-            table, prepared.in_dem_datum, placed, regional,
+            table,
+            prepared.in_dem_datum,
+            placed,
+            regional,
             self.parameterAsDouble(parameters, self.INNER_RADIUS, context),
-            self.parameterAsDouble(parameters, self.OUTER_RADIUS, context), context, steps,
+            self.parameterAsDouble(parameters, self.OUTER_RADIUS, context),
+            context,
+            steps,
         )
         steps.setCurrentStep(2)
         with warnings.catch_warnings(record=True):
             warnings.simplefilter("always")
             faa = reduce_gravity(
-                observed, table.latitude, heights,
+                observed,
+                table.latitude,
+                heights,
                 normal_formula=NORMAL_FORMULAS[self.parameterAsEnum(parameters, self.NORMAL_GRAVITY, context)],
                 height_formula=HEIGHT_FORMULAS[self.parameterAsEnum(parameters, self.HEIGHT_CORRECTION, context)],
                 atmospheric=self.parameterAsBoolean(parameters, self.ATMOSPHERIC, context),
@@ -281,9 +324,9 @@ class DensityEstimateAlgorithm(StationAlgorithm):
         left_out = len(table) - int(usable.sum())
         if left_out:
             feedback.pushInfo(
-                self.tr("{} of {} stations left out (no anomaly, no terrain correction or outside the profile buffers).").format(
-                    left_out, len(table)
-                )
+                self.tr(
+                    "{} of {} stations left out (no anomaly, no terrain correction or outside the profile buffers)."
+                ).format(left_out, len(table))
             )
         idx = np.flatnonzero(usable)
         g = groups[idx] if groups is not None else None
@@ -292,14 +335,14 @@ class DensityEstimateAlgorithm(StationAlgorithm):
         try:
             if method == PARASNIS:
                 fit = parasnis_density(faa[idx], unit[idx], x[idx], y[idx], trend)
-                how = self.tr("Parasnis regression, {} regional term; Student-t interval, {} degrees of freedom").format(
-                    trend, fit.degrees_of_freedom
-                )
+                how = self.tr(
+                    "Parasnis regression, {} regional term; Student-t interval, {} degrees of freedom"
+                ).format(trend, fit.degrees_of_freedom)
             else:
                 fit = nettleton_density(faa[idx], unit[idx], heights[idx], x[idx], y[idx], groups=g, regional=trend)
-                how = self.tr("Nettleton correlation, {} regional term, {} group(s); bootstrap percentile interval, {} resamples").format(
-                    trend, fit.n_groups, fit.resamples
-                )
+                how = self.tr(
+                    "Nettleton correlation, {} regional term, {} group(s); bootstrap percentile interval, {} resamples"
+                ).format(trend, fit.n_groups, fit.resamples)
         except ValueError as error:
             raise QgsProcessingException(self.tr("No density can be estimated: {}").format(error)) from error
         self._report_cautions(feedback, faa[idx], unit[idx], heights[idx], x[idx], y[idx], g, trend, fit)
@@ -309,14 +352,29 @@ class DensityEstimateAlgorithm(StationAlgorithm):
             )
         )
         results = {
-            self.DENSITY: float(fit.density), self.DENSITY_LOW: float(fit.low),
-            self.DENSITY_HIGH: float(fit.high), self.STATIONS_USED: int(fit.n_stations),
+            self.DENSITY: float(fit.density),
+            self.DENSITY_LOW: float(fit.low),
+            self.DENSITY_HIGH: float(fit.high),
+            self.STATIONS_USED: int(fit.n_stations),
         }
-        plot_path = None if is_unset(parameters.get(self.PLOT)) else self.parameterAsFileOutput(parameters, self.PLOT, context)
+        plot_path = (
+            None if is_unset(parameters.get(self.PLOT)) else self.parameterAsFileOutput(parameters, self.PLOT, context)
+        )
         if plot_path:
             steps.setCurrentStep(2)
-            self._plot(plot_path, method, fit, faa[idx], unit[idx], heights[idx], x[idx], y[idx], g,
-                       None if distance is None else distance[idx], trend)
+            self._plot(
+                plot_path,
+                method,
+                fit,
+                faa[idx],
+                unit[idx],
+                heights[idx],
+                x[idx],
+                y[idx],
+                g,
+                None if distance is None else distance[idx],
+                trend,
+            )
             results[self.PLOT] = plot_path
         steps.setProgress(100)
         return results
@@ -364,7 +422,9 @@ class DensityEstimateAlgorithm(StationAlgorithm):
                 distance[i] = geometries[nearest].lineLocatePoint(point)
         counts = np.bincount(groups[groups >= 0], minlength=len(geometries))
         feedback.pushInfo(
-            self.tr("Stations within {:g} of each profile line: {}.").format(buffer, ", ".join(str(int(c)) for c in counts))
+            self.tr("Stations within {:g} of each profile line: {}.").format(
+                buffer, ", ".join(str(int(c)) for c in counts)
+            )
         )
         return groups, distance
 
@@ -373,7 +433,10 @@ class DensityEstimateAlgorithm(StationAlgorithm):
             relief = remove_regional(heights, regional_design(x, y, trend))
         else:
             relief = np.concatenate(
-                [remove_regional(heights[groups == k], regional_design(x[groups == k], y[groups == k], trend)) for k in np.unique(groups)]
+                [
+                    remove_regional(heights[groups == k], regional_design(x[groups == k], y[groups == k], trend))
+                    for k in np.unique(groups)
+                ]
             )
         shared = getattr(fit, "relief_shared", None)
         if shared is None:
@@ -381,9 +444,13 @@ class DensityEstimateAlgorithm(StationAlgorithm):
         low, high, gap = split_consistency(faa, unit, x, y, trend)
         cautions = density_cautions(float(np.std(relief)), (fit.high - fit.low) / 2.0, shared, low, high, gap)
         for code, sentence in cautions:
-            feedback.pushWarning("{} [{}]".format(self.tr(sentence), code))
+            feedback.pushWarning(f"{self.tr(sentence)} [{code}]")
         if not cautions:
-            feedback.pushInfo(self.tr("Relief {:.0f} m (standard deviation after the regional term); low and high stations agree.").format(float(np.std(relief))))
+            feedback.pushInfo(
+                self.tr(
+                    "Relief {:.0f} m (standard deviation after the regional term); low and high stations agree."
+                ).format(float(np.std(relief)))
+            )
 
     def _plot(self, path, method, fit, faa, unit, heights, x, y, groups, distance, trend):
         from ..density_plot import nettleton_plot, parasnis_plot
@@ -392,13 +459,23 @@ class DensityEstimateAlgorithm(StationAlgorithm):
             design = regional_design(x, y, trend)
             coefficients = np.linalg.lstsq(np.column_stack([unit, design]), faa, rcond=None)[0]
             faa_left = faa - design @ coefficients[1:]
-            parasnis_plot(path, unit, faa_left, fit, {
-                "stations": self.tr("stations"), "fit": self.tr("fit: {:.0f} kg/m³").format(fit.density),
-                "low": self.tr("95 % interval"), "high": "_",
-                "x": self.tr("Bouguer and terrain term per unit density (mGal per g/cm³)"),
-                "y": self.tr("Free-air anomaly minus regional term (mGal)"),
-                "title": self.tr("Parasnis: {:.0f} kg/m³ ({:.0f} to {:.0f})").format(fit.density, fit.low, fit.high),
-            })
+            parasnis_plot(
+                path,
+                unit,
+                faa_left,
+                fit,
+                {
+                    "stations": self.tr("stations"),
+                    "fit": self.tr("fit: {:.0f} kg/m³").format(fit.density),
+                    "low": self.tr("95 % interval"),
+                    "high": "_",
+                    "x": self.tr("Bouguer and terrain term per unit density (mGal per g/cm³)"),
+                    "y": self.tr("Free-air anomaly minus regional term (mGal)"),
+                    "title": self.tr("Parasnis: {:.0f} kg/m³ ({:.0f} to {:.0f})").format(
+                        fit.density, fit.low, fit.high
+                    ),
+                },
+            )
             return
         trials = np.arange(max(1000.0, fit.density - 800.0), fit.density + 800.0, 10.0)
         curve = correlation_curve(faa, unit, heights, x, y, trials, groups, trend)
@@ -406,21 +483,43 @@ class DensityEstimateAlgorithm(StationAlgorithm):
         shown = [fit.density - 2 * step, fit.density - step, fit.density, fit.density + step, fit.density + 2 * step]
         if groups is None:
             design = regional_design(x, y, trend)
-            profile = {"distance": None, "height": heights, "faa": remove_regional(faa, design),
-                       "unit": remove_regional(unit, design), "xlabel": self.tr("Station height (m)"),
-                       "title": self.tr("Bouguer anomaly against height")}
+            profile = {
+                "distance": None,
+                "height": heights,
+                "faa": remove_regional(faa, design),
+                "unit": remove_regional(unit, design),
+                "xlabel": self.tr("Station height (m)"),
+                "title": self.tr("Bouguer anomaly against height"),
+            }
         else:
             biggest = np.bincount(groups).argmax()
             rows = groups == biggest
             design = regional_design(x[rows], y[rows], trend)
-            profile = {"distance": distance[rows], "height": heights[rows], "faa": remove_regional(faa[rows], design),
-                       "unit": remove_regional(unit[rows], design), "xlabel": self.tr("Distance along the profile (m)"),
-                       "title": self.tr("Profile {} ({} stations)").format(int(biggest) + 1, int(rows.sum()))}
+            profile = {
+                "distance": distance[rows],
+                "height": heights[rows],
+                "faa": remove_regional(faa[rows], design),
+                "unit": remove_regional(unit[rows], design),
+                "xlabel": self.tr("Distance along the profile (m)"),
+                "title": self.tr("Profile {} ({} stations)").format(int(biggest) + 1, int(rows.sum())),
+            }
         profile["trials"] = shown
-        nettleton_plot(path, trials, curve, fit, profile, {
-            "interval": self.tr("95 % interval"), "estimate": self.tr("estimate {:.0f} kg/m³").format(fit.density),
-            "density": self.tr("Trial density (kg/m³)"), "correlation": self.tr("Correlation with height"),
-            "title_left": self.tr("Nettleton: {:.0f} kg/m³ ({:.0f} to {:.0f})").format(fit.density, fit.low, fit.high),
-            "at": self.tr("{:.0f} kg/m³"), "anomaly": self.tr("Bouguer anomaly minus regional, centred (mGal)"),
-            "height": self.tr("Height (m)"),
-        })
+        nettleton_plot(
+            path,
+            trials,
+            curve,
+            fit,
+            profile,
+            {
+                "interval": self.tr("95 % interval"),
+                "estimate": self.tr("estimate {:.0f} kg/m³").format(fit.density),
+                "density": self.tr("Trial density (kg/m³)"),
+                "correlation": self.tr("Correlation with height"),
+                "title_left": self.tr("Nettleton: {:.0f} kg/m³ ({:.0f} to {:.0f})").format(
+                    fit.density, fit.low, fit.high
+                ),
+                "at": self.tr("{:.0f} kg/m³"),
+                "anomaly": self.tr("Bouguer anomaly minus regional, centred (mGal)"),
+                "height": self.tr("Height (m)"),
+            },
+        )

@@ -36,7 +36,7 @@ HEIGHT_CASES = [
 
 
 def test_hinze_height_correction_matches_reference_table():
-    lat, h, expected = map(np.array, zip(*HEIGHT_CASES))
+    lat, h, expected = map(np.array, zip(*HEIGHT_CASES, strict=True))
     # Table to 1e-4 mGal.
     assert_allclose(height_correction(lat, h), expected, rtol=0, atol=6e-5)
 
@@ -99,7 +99,7 @@ def test_atmospheric_correction_close_to_iag_table():
 
 
 @pytest.mark.parametrize(
-    "big_g, per_gcc, per_2670",
+    ("big_g", "per_gcc", "per_2670"),
     # docs/reduction.md section 5 [C]: 2 pi G 1000 and 2 pi G 2670, mGal per metre.
     [
         (6.670e-11, 0.041909, 0.111897),

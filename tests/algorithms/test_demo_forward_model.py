@@ -204,11 +204,14 @@ def test_bundled_files_agree_with_the_model():
     ds = ogr.Open(str(paths[2]))
     layer = ds.GetLayerByName("stations")
     rows = [
-        (f.GetGeometryRef().GetX(), f.GetGeometryRef().GetY())
-        + tuple(f[name] for name in ("elev_m", "body_mgal", "terrain_mgal", "obs_grav"))
+        (
+            f.GetGeometryRef().GetX(),
+            f.GetGeometryRef().GetY(),
+            *(f[name] for name in ("elev_m", "body_mgal", "terrain_mgal", "obs_grav")),
+        )
         for f in layer
     ]
-    x, y, elev, body, terrain, obs = (np.array(c) for c in zip(*rows))
+    x, y, elev, body, terrain, obs = (np.array(c) for c in zip(*rows, strict=True))
     assert 300 <= x.size <= 400
     npt.assert_allclose(elev, fm.bilinear_height(fine, x, y), atol=5e-4)
     bodies = fm.PrismSet.concatenate(ms.sediment_fill(), ms.ostrel_intrusion())

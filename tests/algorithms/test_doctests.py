@@ -9,7 +9,6 @@ import pytest
 
 import relief_gravity.algorithms as algorithms
 
-
 IMPORT_ERRORS = []
 
 

@@ -133,7 +133,7 @@ def test_scalar_inputs_give_zero_dimensional_arrays():
 
 
 @pytest.mark.parametrize(
-    "column, affected",
+    ("column", "affected"),
     [
         ("observed", {"faa", "sba", "cba"}),
         ("latitude", {"normal_g", "height_corr", "faa", "sba", "cba"}),

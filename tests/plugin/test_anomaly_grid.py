@@ -44,7 +44,7 @@ def station_xy():
     return xs, ys
 
 
-@pytest.fixture()
+@pytest.fixture
 def plane_stations(tmp_path, station_xy, write_points):
     xs, ys = station_xy
     values = list(plane(xs, ys))
@@ -215,7 +215,7 @@ def test_fewer_than_three_values_refused(provider, tmp_path, write_points):
         tmp_path / "few.gpkg", [500_000.0, 500_100.0, 500_200.0, 500_300.0],
         [5_000_000.0, 5_000_300.0, 5_000_100.0, 5_000_200.0], {"cba": [1.0, None, 2.0, None]},
     )
-    with pytest.raises(QgsProcessingException, match="Only 2 station.*at least 3 are needed"):
+    with pytest.raises(QgsProcessingException, match=r"Only 2 station.*at least 3 are needed"):
         processing.run(
             "reliefgravity:anomalygrid",
             {"INPUT": path, "FIELD": "cba", "OUTPUT": str(tmp_path / "few.tif")},
@@ -265,9 +265,11 @@ def test_cancel_stops_before_writing(provider, plane_stations, tmp_path):
     try:
         result = algorithm.processAlgorithm(parameters, context, feedback)
     except QgsProcessingException as error:
-        assert "Cancelled" in str(error)
+        raised = str(error)
     else:
+        raised = None
         assert result == {}
+    assert raised is None or "Cancelled" in raised
     assert not out.exists()
 
 

@@ -221,7 +221,7 @@ def test_raster_without_overlap_is_refused(provider, make_points, station_rows, 
 
 
 def test_heights_sampled_from_dem_are_flagged(provider, stations_gpkg, hill_dem):
-    dem_path, (west, north, cell, heights) = hill_dem
+    dem_path, (_west, _north, _cell, _heights) = hill_dem
     result = _run({"INPUT": str(stations_gpkg), "GRAVITY_FIELD": "g_obs", "DEM": str(dem_path), "TC_FIELD": "tc_given"})
     layer = result["OUTPUT"]
     flags = _values(layer, "qc_flag")

@@ -9,7 +9,6 @@ import sys
 import zipfile
 from pathlib import Path
 
-
 ROOT = Path(__file__).resolve().parents[2]
 
 # Required metadata keys: QGIS plugin cookbook, plugins.rst (see docs/processing-practice.md).

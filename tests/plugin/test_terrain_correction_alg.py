@@ -7,7 +7,6 @@ import numpy as np
 import pytest
 
 
-
 def _run(params, feedback=None):
     import processing
 

@@ -7,7 +7,7 @@ import numpy as np
 import numpy.testing as npt
 import pytest
 
-from relief_gravity.algorithms.gridding import GridGeometry, GriddingCancelled, minimum_curvature
+from relief_gravity.algorithms.gridding import GriddingCancelled, GridGeometry, minimum_curvature
 from relief_gravity.algorithms.gridding._solver import Multigrid, gmres
 
 #: 200 x 200 nodes: above DIRECT_SOLVE_MAX_NODES, so the iterative path runs.

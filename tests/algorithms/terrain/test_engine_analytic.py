@@ -45,7 +45,7 @@ def test_zero_relief_gives_zero_references_6_case_9(curvature):
 
 
 @pytest.mark.parametrize(
-    "a, h, L, cell, expected",
+    ("a", "h", "L", "cell", "expected"),
     [
         (100.0, 50.0, 5000.0, 10.0, 1.175474),  # docs/terrain.md section 11, case 7
         (50.0, 10.0, 2000.0, 10.0, 0.097461),  # docs/terrain.md section 11, case 7
@@ -95,7 +95,7 @@ def test_cone_apex_references_6_case_4():
     assert abs(errors[1]) < 0.75 * abs(errors[0])
 
 
-@pytest.mark.parametrize("theta_deg, expected", [(10.0, 0.85541), (20.0, 3.45501)])
+@pytest.mark.parametrize(("theta_deg", "expected"), [(10.0, 0.85541), (20.0, 3.45501)])
 def test_inclined_plane_references_6_case_5(theta_deg, expected):
     # TC of an infinite plane of slope theta to R = 1 km:
     # G rho R [2 pi - 4 cos(theta) K(sin^2 theta)] (docs/terrain.md section 11, case 5).
@@ -112,7 +112,7 @@ def test_inclined_plane_references_6_case_5(theta_deg, expected):
 
 
 @pytest.mark.parametrize(
-    "L, expected",
+    ("L", "expected"),
     # docs/terrain.md section 11, case 8: block x = d..L, y = +-L, 0..100 m above, d = 100 m
     [(5000.0, 1.51396)],
 )
@@ -127,7 +127,7 @@ def test_two_dimensional_step_references_6_case_8(L, expected):
 
 
 @pytest.mark.parametrize(
-    "distance, expected",
+    ("distance", "expected"),
     # docs/terrain.md section 6 table [C/L: harmonica prism lowered by s^2/2R]:
     # downward g_z of a 1 km x 1 km x 500 m column on the station's sphere;
     # the terrain correction is -g_z.

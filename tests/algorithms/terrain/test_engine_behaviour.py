@@ -3,6 +3,7 @@
 
 from __future__ import annotations
 
+import itertools
 import math
 
 import numpy as np
@@ -20,7 +21,7 @@ def hilly(n=200, cell=30.0, west=0.0, north=6000.0, seed=5):
 
 
 def test_coverage_when_the_dem_does_not_reach_outer_radius():
-    z, grid = hilly()
+    _z, grid = hilly()
     r = terrain_correction([3000.0], [3000.0], [640.0], grid, outer_radius=20000.0)
     # The 6 km x 6 km DEM covers 36 km^2 of the 1257 km^2 disc.
     assert r.coverage[0] == pytest.approx(36e6 / (math.pi * 20000.0**2), rel=0.01)
@@ -56,7 +57,7 @@ def test_nodata_hole_reduces_coverage_and_is_left_out():
 
 
 def test_station_outside_no_height_and_nodata_station():
-    z, grid = hilly()
+    z, _grid = hilly()
     holed = z.copy()
     holed[95:105, 95:105] = np.nan
     grid_h = ElevationGrid.from_array(holed, 0.0, 6000.0, 30.0, 30.0)
@@ -70,7 +71,7 @@ def test_station_outside_no_height_and_nodata_station():
 
 
 def test_height_difference_and_field_innermost_value():
-    z, grid = hilly()
+    _z, grid = hilly()
     r = terrain_correction([3010.0, 3010.0], [2990.0, 2990.0], [700.0, 700.0], grid, outer_radius=3000.0, innermost_tc=[np.nan, 0.25])
     assert r.height_difference[0] == pytest.approx(700.0 - r.dem_height[0])
     assert 400.0 < r.dem_height[0] < 800.0
@@ -102,11 +103,11 @@ def test_water_filled_cells():
 
 
 def test_progress_and_cancel():
-    z, grid = hilly()
+    _z, grid = hilly()
     seen = []
     x = np.linspace(500, 5500, 40)
     terrain_correction(x, x, np.full(40, 600.0), grid, outer_radius=3000.0, progress=seen.append)
-    assert seen[-1] == 1.0 and all(0 <= a <= b <= 1 for a, b in zip(seen, seen[1:]))
+    assert seen[-1] == 1.0 and all(0 <= a <= b <= 1 for a, b in itertools.pairwise(seen))
     calls = []
 
     def cancel():
@@ -118,7 +119,7 @@ def test_progress_and_cancel():
 
 
 def test_threads_do_not_change_results():
-    z, grid = hilly()
+    _z, grid = hilly()
     x = np.linspace(500, 5500, 70)
     a = terrain_correction(x, x[::-1], np.full(70, 600.0), grid, outer_radius=4000.0, workers=1)
     b = terrain_correction(x, x[::-1], np.full(70, 600.0), grid, outer_radius=4000.0, workers=2)
@@ -127,8 +128,8 @@ def test_threads_do_not_change_results():
 
 @pytest.mark.parametrize("bad", [dict(inner_radius=5000.0, outer_radius=1000.0), dict(density=0.0), dict(workers=0)])
 def test_impossible_parameters(bad):
-    z, grid = hilly()
-    with pytest.raises(ValueError):
+    _z, grid = hilly()
+    with pytest.raises(ValueError, match="must"):
         terrain_correction([100.0], [100.0], [600.0], grid, **bad)
 
 
@@ -162,7 +163,7 @@ def test_full_coverage_reads_one_at_every_radius(radius):
     assert result.flags == [[], [], [], []]
 
 
-@pytest.mark.parametrize("x, y", [(2000.0, 20_000.0), (2050.0, 17_330.0), (2010.0, 25_555.0)])
+@pytest.mark.parametrize(("x", "y"), [(2000.0, 20_000.0), (2050.0, 17_330.0), (2010.0, 25_555.0)])
 def test_coverage_near_an_edge_is_the_disc_fraction_inside(x, y):
     # Analytic: a disc of radius R whose centre is d from a straight edge has
     # 1 - (R^2 acos(d/R) - d sqrt(R^2 - d^2)) / (pi R^2) of its area inside.

@@ -14,8 +14,13 @@ import numpy as np
 import pytest
 
 from relief_gravity.algorithms.constants import GRAVITATIONAL_CONSTANT, MEAN_EARTH_RADIUS
-from relief_gravity.algorithms.terrain import ElevationGrid, prism_gravity, terrain_correction
-from relief_gravity.algorithms.terrain import bilinear_setup, sample_bilinear
+from relief_gravity.algorithms.terrain import (
+    ElevationGrid,
+    bilinear_setup,
+    prism_gravity,
+    sample_bilinear,
+    terrain_correction,
+)
 from relief_gravity.algorithms.terrain._evaluate import Physics
 from relief_gravity.algorithms.terrain._innermost import innermost
 
@@ -212,7 +217,7 @@ def spherical_far_reference(z, gt, lon, lat, h, r_min, r_max):
     nodes, weights = np.polynomial.legendre.leggauss(8)
     total = np.zeros(omega.shape)
     cp = cos_psi[m]
-    for t, w in zip(nodes, weights):
+    for t, w in zip(nodes, weights, strict=True):
         r = 0.5 * (r1 + r2) + 0.5 * (r2 - r1) * t
         ell = np.sqrt(rp * rp + r * r - 2 * rp * r * cp)
         total += w * 0.5 * (r2 - r1) * r * r * (rp - r * cp) / ell**3

@@ -22,7 +22,7 @@ SCALE = GRAVITATIONAL_CONSTANT * 2670.0 * 1e5
 
 
 @pytest.mark.parametrize(
-    "ratio, expected",
+    ("ratio", "expected"),
     # docs/terrain.md section 5 [C]: line mass vs exact prism, 100 m cell, relief 50 m
     [(10, -0.0037), (20, -0.0009), (50, -0.00015)],
 )
@@ -83,7 +83,7 @@ def test_inverse_distance_difference_keeps_digits():
 
 
 @pytest.mark.parametrize(
-    "theta, expected",
+    ("theta", "expected"),
     # docs/terrain.md section 11, case 5 [C]: infinite inclined plane, TC to R = 1 km
     [(5.0, 0.21334), (10.0, 0.85541), (20.0, 3.45501), (30.0, 7.90467)],
 )

@@ -18,7 +18,7 @@ def test_defaults_are_the_standard():
 
 
 @pytest.mark.parametrize(
-    "kwargs, words",
+    ("kwargs", "words"),
     [
         (dict(inner_radius=-1.0), "inner_radius must be a number >= 0"),
         (dict(inner_radius=float("nan")), "inner_radius must be a number"),
@@ -48,9 +48,9 @@ def test_model_is_frozen_and_its_arrays_read_only():
     m = TerrainModel(density=[2600.0, 2700.0], innermost_tc=[0.1, np.nan])
     with pytest.raises(AttributeError):
         m.density = 2670.0  # type: ignore[misc]
-    with pytest.raises(ValueError):
+    with pytest.raises(ValueError, match="read-only"):
         m.density[0] = 1.0
-    with pytest.raises(ValueError):
+    with pytest.raises(ValueError, match="read-only"):
         m.innermost_tc[0] = 1.0
 
 

@@ -7,14 +7,13 @@ import numpy as np
 import pytest
 
 from relief_gravity.algorithms.constants import GRAVITATIONAL_CONSTANT
-from relief_gravity.algorithms.terrain import prism_gravity
-from relief_gravity.algorithms.terrain import _prism
+from relief_gravity.algorithms.terrain import _prism, prism_gravity
 
 CUBE = (-500.0, 500.0, -500.0, 500.0, -1000.0, 0.0)
 
 
 @pytest.mark.parametrize(
-    "station, expected",
+    ("station", "expected"),
     [
         # docs/terrain.md section 4 [C: own Nagy formula = choclo], rho 2670, G 6.6743e-11
         ((0.0, 0.0, 0.0), 46.277686),  # centre of the top face
@@ -36,7 +35,7 @@ def test_cube_point_mass_limit_references_5_2():
 
 
 @pytest.mark.parametrize(
-    "side, expected",
+    ("side", "expected"),
     # docs/terrain.md section 4: 100 m thick square slab, station at the centre of its top
     [(1e3, 10.19706), (1e4, 11.09608), (1e5, 11.18680), (1e6, 11.19587)],
 )
@@ -107,7 +106,7 @@ def _nagy_mp(xs, ys, zs, mp):
 
 
 @pytest.mark.parametrize(
-    "distance, size, bottom, top",
+    ("distance", "size", "bottom", "top"),
     [(5e4, 100.0, -3.0, 7.0), (1.5e5, 1000.0, 0.0, 20.0), (3e4, 30.0, 10.0, 1500.0), (2e3, 30.0, -1.0, 0.5)],
 )
 def test_far_prisms_keep_their_digits_vs_mpmath(distance, size, bottom, top):
