@@ -3,7 +3,7 @@
 
 from __future__ import annotations
 
-from dataclasses import dataclass
+from dataclasses import dataclass, replace
 
 import numpy as np
 from qgis.core import QgsCoordinateReferenceSystem, QgsProcessingException
@@ -70,17 +70,28 @@ def compute_terrain(
     context,
     feedback,
     zones: str = "BCDEFGHIJKLM",
+    polygons=None,
 ) -> dict:
     """Terrain correction of every station, in mGal, with flag codes added to ``table``.
 
     Opens the regional raster, builds the terrain model and calls the engine;
     density handling and innermost values are the model's
     (``algorithms/terrain/_model.py``). ``zones`` (ring-and-sector only):
-    contiguous Hammer zone letters or a range such as "B-M".
+    contiguous Hammer zone letters or a range such as "B-M". ``polygons``
+    (``density_layer.DensityPolygons``): densities per DEM cell from a
+    geology layer (exact engine only; docs/geology-densities.md).
     """
     from ..algorithms.terrain import TerrainCancelled, TerrainModel, hammer_terrain_correction, terrain_correction
 
     fine, x, y = placed.raster, placed.x, placed.y
+    if polygons is not None and method == RING_SECTOR:
+        raise QgsProcessingException(
+            _tr(
+                "Densities from a geology layer need the exact engine: the ring-and-sector method has one "
+                "density per station. Choose the exact engine or leave DENSITY_LAYER empty."
+            )
+        )
+    regional = None
     regional_grid = None
     if regional_layer is not None:
         regional = open_elevation(regional_layer)
@@ -128,16 +139,33 @@ def compute_terrain(
                 result["tc_total"] = result["tc_total"] + extra
             return result
             # --- end ring-and-sector ---
-        engine = terrain_correction(
-            x,
-            y,
-            heights,
-            fine.elevation_grid(),
-            regional_grid,
-            model,
-            progress=progress,
-            is_cancelled=feedback.isCanceled,
-        )
+        if polygons is not None:
+            from ..algorithms.terrain._geology import terrain_correction_by_units
+            from .density_layer import density_units, station_densities
+
+            engine = terrain_correction_by_units(
+                x,
+                y,
+                heights,
+                fine.elevation_grid(),
+                regional_grid,
+                density_units(polygons, fine, regional),
+                replace(model, density=float(polygons.densities[0])),
+                station_density=station_densities(polygons, x, y),
+                progress=progress,
+                is_cancelled=feedback.isCanceled,
+            )
+        else:
+            engine = terrain_correction(
+                x,
+                y,
+                heights,
+                fine.elevation_grid(),
+                regional_grid,
+                model,
+                progress=progress,
+                is_cancelled=feedback.isCanceled,
+            )
     except TerrainCancelled as error:
         raise QgsProcessingException(_tr("Cancelled by the user.")) from error
     table.flag_each([";".join(codes) for codes in engine.flags])

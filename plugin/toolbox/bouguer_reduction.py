@@ -28,6 +28,9 @@ from ...algorithms.plausibility import (
     gravity_out_of_range,
     gravity_to_mgal,
 )
+from ..density_layer import add_parameters as add_density_layer_parameters
+from ..density_layer import read_parameters as read_density_layer
+from ..density_layer import station_densities
 from ..heights import (
     DEM_DATUM_KEYS,
     HEIGHT_DATUM_KEYS,
@@ -39,11 +42,11 @@ from ..heights import (
 )
 from ..raster_io import raster_path
 from ..stations import write_stations
+from ..terrain_run import EXACT, compute_terrain, place_stations
 from ..uncertainty_run import add_parameters as add_uncertainty_parameters
 from ..uncertainty_run import check_parameters as check_uncertainty_parameters
 from ..uncertainty_run import uncertainty_columns, uncertainty_settings
-from ..terrain_run import EXACT, compute_terrain, place_stations
-from .base import StationAlgorithm, density_sentence
+from .base import StationAlgorithm, density_sentence, is_unset
 from .field_checks import check_numeric_fields
 
 NORMAL_FORMULAS = ("grs80", "wgs84", "1967")
@@ -269,6 +272,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
         )
         self.add_zone_parameters(advanced=True)
         add_uncertainty_parameters(self)
+        add_density_layer_parameters(self)
         legacy = QgsProcessingParameterBoolean(
             self.ORTHOMETRIC_REDUCTION,
             self.tr("Reduce with orthometric heights (legacy practice; the standard uses ellipsoidal heights)"),
@@ -343,6 +347,11 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             check_dem_values(placed.raster.path, self.tr("elevation raster"))
         if regional is not None and placed is not None and not tc_field:
             check_dem_values(raster_path(regional), self.tr("regional elevation raster"))
+        polygons = self._density_polygons(parameters, context, source, table, placed, feedback)
+        if polygons is not None:
+            # The slab and curvature take the density of the polygon under each station.
+            at = (placed.x, placed.y) if placed is not None else (table.x, table.y)
+            density = station_densities(polygons, *at)
         heights = prepare_heights(
             table,
             self.raw_station_heights(parameters, context, table),
@@ -379,6 +388,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
                 method=EXACT,
                 context=context,
                 feedback=steps,
+                polygons=polygons,
             )
             tc_total = terrain["tc_total"]
             engine_columns = {
@@ -468,6 +478,23 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             self.STATIONS_FLAGGED: flagged,
         }
         return results, settings
+
+    def _density_polygons(self, parameters, context, source, table, placed, feedback):
+        """Geology polygons of DENSITY_LAYER in the DEM's CRS (the stations' without a DEM), or None."""
+        from qgis.core import QgsCoordinateReferenceSystem
+
+        if is_unset(parameters.get("DENSITY_LAYER")):
+            return None
+        if self.first_field(parameters, self.DENSITY_FIELD, context):
+            raise QgsProcessingException(
+                self.tr(
+                    "Give densities either per station (DENSITY_FIELD) or from a geology layer (DENSITY_LAYER), "
+                    "not both."
+                )
+            )
+        crs = QgsCoordinateReferenceSystem.fromWkt(placed.raster.crs_wkt) if placed is not None else source.sourceCrs()
+        default = self.parameterAsDouble(parameters, self.DENSITY, context)
+        return read_density_layer(self, parameters, context, default, crs, feedback)
 
     def _uncertainty(self, parameters, context, table, placed, heights, reduction_heights, density, reduced,
                      truncation, inner, options):

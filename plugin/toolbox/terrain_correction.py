@@ -5,6 +5,7 @@ from __future__ import annotations
 
 import numpy as np
 from qgis.core import (
+    QgsCoordinateReferenceSystem,
     QgsProcessing,
     QgsProcessingException,
     QgsProcessingOutputNumber,
@@ -19,6 +20,8 @@ from qgis.core import (
 )
 from qgis.PyQt.QtCore import QVariant
 
+from ..density_layer import add_parameters as add_density_layer_parameters
+from ..density_layer import read_parameters as read_density_layer
 from ..heights import (
     DEM_DATUM_KEYS,
     HEIGHT_DATUM_KEYS,
@@ -31,8 +34,8 @@ from ..heights import (
 from ..raster_io import raster_path
 from ..stations import write_stations
 from ..terrain_run import EXACT, RING_SECTOR, compute_terrain, place_stations
-from .bouguer_reduction import ENGINE_EXTRA_FIELDS
 from .base import StationAlgorithm, is_unset
+from .bouguer_reduction import ENGINE_EXTRA_FIELDS
 from .field_checks import check_numeric_fields
 
 HAMMER_ZONE_LETTERS = "BCDEFGHIJKLM"
@@ -111,6 +114,7 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         self.add_datum_parameters()
         self.add_zone_parameters(advanced=False)
         self.add_density_parameter()
+        add_density_layer_parameters(self)
         self.addParameter(
             QgsProcessingParameterField(
                 self.INNERMOST_TC_FIELD,
@@ -262,6 +266,9 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         )
         method = self.parameterAsEnum(parameters, self.METHOD, context)
         density = self.parameterAsDouble(parameters, self.DENSITY, context)
+        polygons = read_density_layer(
+            self, parameters, context, density, QgsCoordinateReferenceSystem.fromWkt(placed.raster.crs_wkt), feedback
+        )
         problem = self._zone_problem(parameters, context)
         if problem:
             raise QgsProcessingException(problem)
@@ -284,6 +291,7 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
             context=context,
             feedback=steps,
             zones="".join(z.letter for z in zones),
+            polygons=polygons,
         )
         if method == RING_SECTOR:
             self._push_reach(zones, result.get("plane_zones", ""), steps)

@@ -1,0 +1,97 @@
+# SPDX-License-Identifier: GPL-2.0-or-later
+"""DENSITY_LAYER through processing.run: geology densities in the reduction and the terrain correction.
+
+The science is checked in tests/algorithms/terrain/test_geology.py (prisms,
+one unit = constant density); here the wiring: the slab takes the polygon's
+density, a layer covering everything at the default density changes nothing,
+and the refusals.
+"""
+
+from __future__ import annotations
+
+import numpy as np
+import pytest
+
+from relief_gravity.algorithms.constants import GRAVITATIONAL_CONSTANT, SI_TO_MGAL
+
+
+def _polygons(path, rings, densities, epsg=32632):
+    """A GeoPackage of polygons (list of (west, south, east, north)) with a 'rho' field."""
+    from osgeo import ogr, osr
+
+    srs = osr.SpatialReference()
+    srs.ImportFromEPSG(epsg)
+    ds = ogr.GetDriverByName("GPKG").CreateDataSource(str(path))
+    layer = ds.CreateLayer("geology", srs, ogr.wkbPolygon)
+    layer.CreateField(ogr.FieldDefn("rho", ogr.OFTReal))
+    for (w, s, e, n), rho in zip(rings, densities, strict=True):
+        feature = ogr.Feature(layer.GetLayerDefn())
+        feature.SetField("rho", rho)
+        feature.SetGeometry(ogr.CreateGeometryFromWkt(f"POLYGON(({w} {s},{e} {s},{e} {n},{w} {n},{w} {s}))"))
+        layer.CreateFeature(feature)
+    ds = None
+    return path
+
+
+def _values(layer, name):
+    return np.array([f[name] for f in layer.getFeatures()], dtype=float)
+
+
+def _run(algorithm, params):
+    import processing
+    from qgis.core import QgsProcessingContext
+
+    base = {"OUTPUT": "TEMPORARY_OUTPUT", "DEM_DATUM": 1, "HEIGHT_FIELD": "elev"}
+    base.update(params)
+    return processing.run("reliefgravity:" + algorithm, base, context=QgsProcessingContext())
+
+
+def test_one_polygon_at_the_default_density_changes_nothing(provider, stations_gpkg, hill_dem, tmp_path):
+    path, _ = hill_dem
+    everything = _polygons(tmp_path / "all.gpkg", [(480_000, 4_980_000, 520_000, 5_020_000)], [2670.0])
+    plain = _run("bouguerreduction", {"INPUT": str(stations_gpkg), "GRAVITY_FIELD": "g_obs", "DEM": str(path)})["OUTPUT"]
+    layered = _run("bouguerreduction", {"INPUT": str(stations_gpkg), "GRAVITY_FIELD": "g_obs", "DEM": str(path),
+                                        "DENSITY_LAYER": str(everything), "DENSITY_LAYER_FIELD": "rho"})["OUTPUT"]
+    for name in ("slab_corr", "tc_total", "cba"):
+        np.testing.assert_allclose(_values(layered, name), _values(plain, name), rtol=0, atol=1e-9, err_msg=name)
+
+
+def test_slab_and_terrain_take_the_polygon_densities(provider, stations_gpkg, hill_dem, tmp_path):
+    path, _ = hill_dem
+    # Light fill (2000 kg/m3, given in g/cm3) over the western half, default 2670 elsewhere.
+    west = _polygons(tmp_path / "west.gpkg", [(480_000, 4_980_000, 499_750, 5_020_000)], [2.0])
+    layer = _run("bouguerreduction", {"INPUT": str(stations_gpkg), "GRAVITY_FIELD": "g_obs", "DEM": str(path),
+                                      "DENSITY_LAYER": str(west), "DENSITY_LAYER_FIELD": "rho"})["OUTPUT"]
+    x = np.array([f.geometry().asPoint().x() for f in layer.getFeatures()])
+    h = _values(layer, "elev")
+    rho = np.where(x < 499_750, 2000.0, 2670.0)
+    # The slab is 2 pi G rho h at each station's own polygon density.
+    np.testing.assert_allclose(_values(layer, "slab_corr"), 2 * np.pi * GRAVITATIONAL_CONSTANT * rho * h * SI_TO_MGAL, rtol=1e-9)
+    plain = _run("terraincorrection", {"INPUT": str(stations_gpkg), "DEM": str(path)})["OUTPUT"]
+    geology = _run("terraincorrection", {"INPUT": str(stations_gpkg), "DEM": str(path),
+                                        "DENSITY_LAYER": str(west), "DENSITY_LAYER_FIELD": "rho"})["OUTPUT"]
+    ratio = _values(geology, "tc_total") / _values(plain, "tc_total")
+    # Lighter ground to the west lowers every correction, never raises it; a
+    # station far east of the contact sees (almost) only the default density.
+    assert np.all(ratio <= 1.0 + 1e-9)
+    assert ratio[np.argmin(x)] < 0.9 and ratio[np.argmax(x)] > 0.95
+
+
+def test_density_field_and_layer_together_are_refused(provider, stations_gpkg, hill_dem, tmp_path):
+    from qgis.core import QgsProcessingException
+
+    path, _ = hill_dem
+    west = _polygons(tmp_path / "w.gpkg", [(480_000, 4_980_000, 499_500, 5_020_000)], [2000.0])
+    with pytest.raises(QgsProcessingException, match="not both"):
+        _run("bouguerreduction", {"INPUT": str(stations_gpkg), "GRAVITY_FIELD": "g_obs", "DEM": str(path),
+                                  "DENSITY_FIELD": "rho", "DENSITY_LAYER": str(west), "DENSITY_LAYER_FIELD": "rho"})
+
+
+def test_ring_and_sector_with_a_geology_layer_is_refused(provider, stations_gpkg, hill_dem, tmp_path):
+    from qgis.core import QgsProcessingException
+
+    path, _ = hill_dem
+    west = _polygons(tmp_path / "w2.gpkg", [(480_000, 4_980_000, 499_500, 5_020_000)], [2000.0])
+    with pytest.raises(QgsProcessingException, match="exact engine"):
+        _run("terraincorrection", {"INPUT": str(stations_gpkg), "DEM": str(path), "METHOD": 1,
+                                   "DENSITY_LAYER": str(west), "DENSITY_LAYER_FIELD": "rho"})
