@@ -81,7 +81,8 @@ def compute_terrain(
     (``density_layer.DensityPolygons``): densities per DEM cell from a
     geology layer (exact engine only; docs/geology-densities.md).
     """
-    from ..algorithms.terrain import TerrainCancelled, TerrainModel, hammer_terrain_correction, terrain_correction
+    from ..algorithms.terrain import TerrainCancelled, TerrainModel, hammer_terrain_correction
+    from ..algorithms.terrain._fallback import terrain_correction_with_fallback
 
     fine, x, y = placed.raster, placed.x, placed.y
     if polygons is not None and method == RING_SECTOR:
@@ -156,7 +157,8 @@ def compute_terrain(
                 is_cancelled=feedback.isCanceled,
             )
         else:
-            engine = terrain_correction(
+            # Where the fine DEM has no data the regional one serves, flagged.
+            engine = terrain_correction_with_fallback(
                 x,
                 y,
                 heights,
