@@ -25,7 +25,6 @@ import importlib.util
 import os
 import sys
 import time
-from dataclasses import replace
 from pathlib import Path
 
 REPO_ROOT = Path(__file__).resolve().parent.parent

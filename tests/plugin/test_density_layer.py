@@ -79,7 +79,7 @@ def _layer(path):
     return layer
 
 
-@pytest.fixture()
+@pytest.fixture
 def dem(tmp_path, dem_writer):
     from relief_gravity.plugin.raster_io import ElevationRaster
 
@@ -105,7 +105,7 @@ def _expected_units():
     X, Y = np.meshgrid(cx, cy)
 
     def inside(box):
-        return (X > box[0]) & (X < box[1]) & (Y > box[2]) & (Y < box[3])
+        return (box[0] < X) & (box[1] > X) & (box[2] < Y) & (box[3] > Y)
 
     out = np.zeros((ROWS, COLS), dtype=int)
     out[inside(WEST_BLOCK)] = 1

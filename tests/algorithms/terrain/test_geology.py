@@ -18,7 +18,13 @@ import pytest
 
 from relief_gravity.algorithms import reduce_gravity
 from relief_gravity.algorithms.constants import GRAVITATIONAL_CONSTANT, SI_TO_MGAL
-from relief_gravity.algorithms.terrain import ElevationGrid, TerrainCancelled, TerrainModel, prism_gravity, terrain_correction
+from relief_gravity.algorithms.terrain import (
+    ElevationGrid,
+    TerrainCancelled,
+    TerrainModel,
+    prism_gravity,
+    terrain_correction,
+)
 from relief_gravity.algorithms.terrain._geology import (
     DensityUnits,
     density_table_to_kg_m3,
@@ -61,8 +67,8 @@ def test_two_flat_topped_blocks_against_analytic_prisms():
     # excess 50-150 m above the station.
     a = (-150.0, 150.0, -100.0, 100.0)
     b = (160.0, 400.0, -300.0, 200.0)
-    in_a = (X > a[0]) & (X < a[1]) & (Y > a[2]) & (Y < a[3])
-    in_b = (X > b[0]) & (X < b[1]) & (Y > b[2]) & (Y < b[3])
+    in_a = (a[0] < X) & (a[1] > X) & (a[2] < Y) & (a[3] > Y)
+    in_b = (b[0] < X) & (b[1] > X) & (b[2] < Y) & (b[3] > Y)
     heights = np.where(in_a, 50.0, np.where(in_b, 150.0, 0.0))
     units = DensityUnits([2670.0, 2000.0, 3000.0], np.where(in_a, 1, np.where(in_b, 2, 0)))
     r = terrain_correction_by_units([0.0], [0.0], [50.0], grid_of(heights), None, units, FLAT)
@@ -125,7 +131,7 @@ def test_field_innermost_values_pass_through_unchanged():
 def split_case(boundary_x):
     """Smooth relief; unit 1 (2200) east of ``boundary_x``, default 2670 west of it."""
     heights = smooth_relief()
-    east = X > boundary_x
+    east = boundary_x < X
     return heights, DensityUnits([2670.0, 2200.0], east.astype(int)), np.where(east, 2200.0, 2670.0)
 
 
