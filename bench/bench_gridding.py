@@ -71,7 +71,7 @@ def synthetic_field(x: np.ndarray, y: np.ndarray, side: float) -> np.ndarray:
     Returns
     -------
     numpy.ndarray
-        Field value at each position (the units of the ``BODIES`` amplitudes).
+        Field value at each position, mGal.
     """
     out = np.zeros_like(x, dtype=float)
     for x0, y0, amp, width in BODIES:
