@@ -10,6 +10,7 @@ every cell counts whole.
 
 from __future__ import annotations
 
+import itertools
 import math
 from dataclasses import replace
 
@@ -212,7 +213,7 @@ def test_progress_and_cancel():
     heights, units, _ = split_case(200.0)
     seen = []
     terrain_correction_by_units([0.0], [0.0], [450.0], grid_of(heights), None, units, FLAT, progress=seen.append)
-    assert seen[-1] == 1.0 and all(0.0 <= a <= b <= 1.0 for a, b in zip(seen, seen[1:]))
+    assert seen[-1] == 1.0 and all(0.0 <= a <= b <= 1.0 for a, b in itertools.pairwise(seen))
     with pytest.raises(TerrainCancelled):
         terrain_correction_by_units([0.0], [0.0], [450.0], grid_of(heights), None, units, FLAT, is_cancelled=lambda: True)
 
@@ -244,7 +245,7 @@ def test_bad_inputs_give_sentences():
 
 
 @pytest.mark.parametrize(
-    "values, expected, unit",
+    ("values", "expected", "unit"),
     [([2.67, 2.2], [2670.0, 2200.0], "g/cm3"), ([2670, 1900], [2670.0, 1900.0], "kg/m3"), ([0.5, 5.0], [500.0, 5000.0], "g/cm3")],
 )
 def test_density_table_units(values, expected, unit):
@@ -253,7 +254,7 @@ def test_density_table_units(values, expected, unit):
 
 
 @pytest.mark.parametrize(
-    "values, message",
+    ("values", "message"),
     [([2670.0, 26.7], "26.7 is not in 500-5000 kg/m"), ([2.67, 26.7], "26.7 is not in 0.5-5 g/cm"),
      ([26.7], "neither"), ([np.nan], "no polygon"), ([2670000.0], "neither")],
 )
