@@ -96,7 +96,8 @@ def compute_terrain(
     regional_grid = None
     if regional_layer is not None:
         regional = open_elevation(regional_layer)
-        if not QgsCoordinateReferenceSystem.fromWkt(regional.crs_wkt) == QgsCoordinateReferenceSystem.fromWkt(fine.crs_wkt):
+        regional_crs = QgsCoordinateReferenceSystem.fromWkt(regional.crs_wkt)
+        if regional_crs != QgsCoordinateReferenceSystem.fromWkt(fine.crs_wkt):
             feedback.pushInfo(_tr("Reprojecting the regional elevation raster to the CRS of the fine one."))
             regional = warp_to(regional, fine.crs_wkt)
         regional_grid = regional.elevation_grid()
@@ -130,7 +131,9 @@ def compute_terrain(
             table.flag_each(hammer.flags)
             # Linear in density: from the reference density to each station's.
             scale = model.density_factors(n) / model.reference_density
-            result = {key: np.array(getattr(hammer, key), dtype=float) * scale for key in ("tc_inner", "tc_outer", "tc_total")}
+            result = {
+                key: np.array(getattr(hammer, key), dtype=float) * scale for key in ("tc_inner", "tc_outer", "tc_total")
+            }
             result["zones"] = {k: np.asarray(v, dtype=float) * scale for k, v in hammer.zones.items()}
             result["plane_zones"] = hammer.plane_zones
             if innermost_tc is not None:
