@@ -176,6 +176,8 @@ def main(argv: list[str]) -> int:
             "HEIGHT_DATUM": 0,
             "DEM_DATUM": 1,
             "DENSITY": 2670.0,
+            # The engine's own error, against a refined evaluation (tc_numerr).
+            "ENGINE_CHECK": True,
             "OUTPUT": str(reduced_path),
         },
         feedback=feedback,
@@ -246,6 +248,10 @@ def main(argv: list[str]) -> int:
     print(f"  density from the data       : {density['DENSITY']:.0f} kg/m3 (95 % {density['DENSITY_LOW']:.0f}"
           f" to {density['DENSITY_HIGH']:.0f}; Parasnis, planar regional); the demo was built with 2670"
           "; biased high because the light basin fill and the dense intrusion follow the relief")
+    cba_sigma = attribute_array(layer, "cba_sigma")
+    numerr = attribute_array(layer, "tc_numerr")
+    print(f"  uncertainty of cba (mGal)   : median {np.nanmedian(cba_sigma):.3f}, largest {np.nanmax(cba_sigma):.3f}"
+          f" (1 sigma; the engine's own error at most {np.nanmax(numerr):.1e})")
     print(f"  outputs in {output}:")
     for path in (observed_path, readings_path, reduced_path, grid_path, contour_path, png_path,
                  output / "density_fit.png", output / "cba_residual_map.png"):

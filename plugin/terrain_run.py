@@ -71,6 +71,7 @@ def compute_terrain(
     feedback,
     zones: str = "BCDEFGHIJKLM",
     polygons=None,
+    numerical_check: bool = False,
 ) -> dict:
     """Terrain correction of every station, in mGal, with flag codes added to ``table``.
 
@@ -80,9 +81,11 @@ def compute_terrain(
     contiguous Hammer zone letters or a range such as "B-M". ``polygons``
     (``density_layer.DensityPolygons``): densities per DEM cell from a
     geology layer (exact engine only; docs/geology-densities.md).
+    ``numerical_check``: also estimate the engine's own error per station
+    against a refined evaluation (``tc_numerr``; about four times the work).
     """
     from ..algorithms.terrain import TerrainCancelled, TerrainModel, hammer_terrain_correction
-    from ..algorithms.terrain._fallback import terrain_correction_with_fallback
+    from ..algorithms.terrain._fallback import numerical_error, terrain_correction_with_fallback
 
     fine, x, y = placed.raster, placed.x, placed.y
     if polygons is not None and method == RING_SECTOR:
@@ -173,6 +176,21 @@ def compute_terrain(
             )
     except TerrainCancelled as error:
         raise QgsProcessingException(_tr("Cancelled by the user.")) from error
+    numerr = None
+    if numerical_check and polygons is None:
+        feedback.pushInfo(_tr("Estimating the engine's own error against a refined evaluation (tc_numerr)."))
+        try:
+            numerr = numerical_error(
+                x, y, heights, fine.elevation_grid(), regional_grid, model, engine, is_cancelled=feedback.isCanceled
+            )
+        except TerrainCancelled as error:
+            raise QgsProcessingException(_tr("Cancelled by the user.")) from error
+        feedback.pushInfo(
+            _tr("Engine error against the refined evaluation: median {:.2g}, largest {:.2g} mGal.").format(
+                float(np.nanmedian(numerr)) if np.isfinite(numerr).any() else float("nan"),
+                float(np.nanmax(numerr)) if np.isfinite(numerr).any() else float("nan"),
+            )
+        )
     table.flag_each([";".join(codes) for codes in engine.flags])
     truncation = np.asarray(engine.truncation, dtype=float)
     if np.any(truncation > 0):
@@ -192,6 +210,7 @@ def compute_terrain(
         "coverage": engine.coverage,
         "coverage_inner": engine.coverage_inner,
         "tc_trunc": truncation,
+        **({"tc_numerr": numerr} if numerr is not None else {}),
     }
 
 

@@ -241,11 +241,14 @@ def terrain_correction(
         ) -> None:
             report((done + setup * (g + frac) / n_grids) / (total_work * (1 + setup_share)))
 
-        plans = [plan_grid(fine, tx, ty, model.outer_radius, True, None, is_cancelled, level_done)]
+        plans = [
+            plan_grid(fine, tx, ty, model.outer_radius, True, None, is_cancelled, level_done, model.refinement)
+        ]
         if regional is not None:
             plans.append(
                 plan_grid(
-                    regional, tx, ty, model.outer_radius, False, exclude, is_cancelled, lambda f: level_done(f, 1)
+                    regional, tx, ty, model.outer_radius, False, exclude, is_cancelled, lambda f: level_done(f, 1),
+                    model.refinement,
                 )
             )
         done += setup

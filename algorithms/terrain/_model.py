@@ -57,6 +57,10 @@ class TerrainModel:
         Field-estimated correction (mGal) of each station's innermost square,
         at the station's own density; NaN where none. Where given it replaces
         the engine's sloping-plane model of that square.
+    refinement : float
+        Factor (1-8) on the distances, in block sides, at which the engine
+        coarsens the terrain (1, the default, is the benchmarked setting; 2
+        is a refined evaluation used to estimate the engine's own error).
 
     Raises
     ------
@@ -83,6 +87,7 @@ class TerrainModel:
     outer_radius: float = BOUGUER_CAP_RADIUS
     curvature: bool = True
     innermost_tc: np.ndarray | None = None
+    refinement: float = 1.0
 
     def __post_init__(self) -> None:
         inner = _number(self.inner_radius, "inner_radius")
@@ -96,6 +101,11 @@ class TerrainModel:
         if inner > outer:
             msg = f"inner_radius ({inner} m) must not exceed outer_radius ({outer} m)"
             raise ValueError(msg)
+        refinement = _number(self.refinement, "refinement")
+        if not 1.0 <= refinement <= 8.0:
+            msg = f"refinement must be a number from 1 to 8, got {self.refinement!r}"
+            raise ValueError(msg)
+        object.__setattr__(self, "refinement", refinement)
         object.__setattr__(self, "inner_radius", inner)
         object.__setattr__(self, "outer_radius", outer)
         object.__setattr__(self, "density", _density(self.density))

@@ -118,7 +118,7 @@ def tile_metrics(grid: ElevationGrid, y_lo: float, y_hi: float, reach: float) ->
     return Metrics(cy, cx_far, max(cy, cx_near))
 
 
-def level_radii(metrics: Metrics, outer_radius: float) -> list[tuple[int, float]]:
+def level_radii(metrics: Metrics, outer_radius: float, refinement: float = 1.0) -> list[tuple[int, float]]:
     """Level numbers k and half-widths H_k (m) of the nested squares.
 
     Parameters
@@ -127,6 +127,10 @@ def level_radii(metrics: Metrics, outer_radius: float) -> list[tuple[int, float]
         Cell sizes of the grid.
     outer_radius : float
         Where the correction stops (m).
+    refinement : float
+        Factor on ``BLOCK_RATIO`` (and the full-resolution square): 2 puts
+        every ring twice as far out in block sides, a refined evaluation of
+        the same DEM used to estimate the engine's own numerical error.
 
     Returns
     -------
@@ -140,14 +144,15 @@ def level_radii(metrics: Metrics, outer_radius: float) -> list[tuple[int, float]
     [(0, 780.0), (1, 1560.0), (2, 3120.0)]
     """
     c = metrics.c_max
-    h = max(FULL_RESOLUTION_CELLS * c, PRISM_RATIO * c)
+    ratio = BLOCK_RATIO * refinement
+    h = max(FULL_RESOLUTION_CELLS * refinement * c, PRISM_RATIO * c)
     if h >= outer_radius:
         return [(0, outer_radius + c)]
     levels = [(0, h)]
     k = 0
     while h < outer_radius:
         k += 1
-        nxt = max(h, BLOCK_RATIO * 2.0 ** (k + 1) * c)
+        nxt = max(h, ratio * 2.0 ** (k + 1) * c)
         if nxt >= outer_radius:
             levels.append((k, outer_radius + 2.0**k * c))
             break
@@ -336,6 +341,7 @@ def plan_grid(
     exclude: Rectangle | None,
     is_cancelled: Callable[[], bool] | None,
     level_done: Callable[[float], None] | None = None,
+    refinement: float = 1.0,
 ) -> GridPlan:
     """Plan one grid for the stations of a tile and build its block statistics.
 
@@ -355,6 +361,8 @@ def plan_grid(
         Polled while block statistics are built.
     level_done : callable, optional
         Called with the fraction of levels built.
+    refinement : float
+        See :func:`level_radii`.
 
     Returns
     -------
@@ -368,7 +376,7 @@ def plan_grid(
     ([0, 1], [24])
     """
     metrics = tile_metrics(grid, float(np.min(y)), float(np.max(y)), outer_radius)
-    levels = level_radii(metrics, outer_radius)
+    levels = level_radii(metrics, outer_radius, refinement)
     row, col = station_cells(grid, x, y)
     windows = []
     ranges = []

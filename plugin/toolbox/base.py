@@ -112,6 +112,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
     #: 2 936 ft (Hammer 1939, table 1), where national databases split inner
     #: and outer corrections (see docs/datums.md for the sources checked).
     DEFAULT_INNER_RADIUS = 895.0
+    ENGINE_CHECK = "ENGINE_CHECK"
 
     def add_stations_parameter(self) -> None:
         from qgis.core import QgsProcessing, QgsProcessingParameterFeatureSource
@@ -219,6 +220,18 @@ class StationAlgorithm(ReliefGravityAlgorithm):
             )
         )
 
+    def add_engine_check_parameter(self) -> None:
+        """ENGINE_CHECK: also write tc_numerr, the engine's error against a refined evaluation."""
+        from qgis.core import QgsProcessingParameterBoolean, QgsProcessingParameterDefinition
+
+        check = QgsProcessingParameterBoolean(
+            self.ENGINE_CHECK,
+            _tr("Estimate the engine's own error against a refined evaluation (tc_numerr; about 4x the time)"),
+            defaultValue=False,
+        )
+        check.setFlags(check.flags() | QgsProcessingParameterDefinition.FlagAdvanced)
+        self.addParameter(check)
+
     def add_zone_parameters(self, advanced: bool) -> None:
         """Regional raster and zone radii (advanced in the reduction dialog)."""
         from qgis.core import (
@@ -245,6 +258,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
             if advanced:
                 definition.setFlags(definition.flags() | QgsProcessingParameterDefinition.FlagAdvanced)
             self.addParameter(definition)
+
 
     def check_density_and_radii(self, parameters, context) -> str:
         """Sentence describing an impossible density or radius pair, or ''."""

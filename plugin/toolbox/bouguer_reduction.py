@@ -58,7 +58,7 @@ _TC_TOTAL_AT = REDUCTION_FIELDS.index("tc_total")
 RESULT_FIELDS = (*REDUCTION_FIELDS[:_TC_TOTAL_AT], "tc_inner", "tc_outer", *REDUCTION_FIELDS[_TC_TOTAL_AT:])
 
 #: Further per-station results the terrain runner may return (written when present).
-ENGINE_EXTRA_FIELDS = ("tc_trunc",)
+ENGINE_EXTRA_FIELDS = ("tc_trunc", "tc_numerr")
 
 
 def _tr(text: str) -> str:
@@ -274,6 +274,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             )
         )
         self.add_zone_parameters(advanced=True)
+        self.add_engine_check_parameter()
         add_uncertainty_parameters(self)
         add_density_layer_parameters(self)
         legacy = QgsProcessingParameterBoolean(
@@ -392,6 +393,7 @@ class BouguerReductionAlgorithm(StationAlgorithm):
                 context=context,
                 feedback=steps,
                 polygons=polygons,
+                numerical_check=self.parameterAsBoolean(parameters, self.ENGINE_CHECK, context),
             )
             tc_total = terrain["tc_total"]
             engine_columns = {

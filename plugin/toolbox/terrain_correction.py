@@ -113,6 +113,7 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         self.addParameter(QgsProcessingParameterRasterLayer(self.DEM, self.tr("Elevation raster (DEM, metres)")))
         self.add_datum_parameters()
         self.add_zone_parameters(advanced=False)
+        self.add_engine_check_parameter()
         self.add_density_parameter()
         add_density_layer_parameters(self)
         self.addParameter(
@@ -295,6 +296,7 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
             feedback=steps,
             zones="".join(z.letter for z in zones),
             polygons=polygons,
+            numerical_check=self.parameterAsBoolean(parameters, self.ENGINE_CHECK, context),
         )
         if method == RING_SECTOR:
             self._push_reach(zones, result.get("plane_zones", ""), steps)

@@ -120,3 +120,13 @@ def test_a_fine_dem_covering_half_the_survey_falls_back_on_the_regional(provider
     assert np.all(np.isfinite(_values(layer, "cba")))
     for xi, flag in zip(x, flags, strict=True):
         assert ("tc_regional_only" in flag) == (xi > west + 60 * cell), (xi, flag)
+
+
+def test_engine_check_writes_the_engines_own_error(provider, stations_gpkg, hill_dem):
+    path, _ = hill_dem
+    plain = _run({"INPUT": str(stations_gpkg), "DEM": str(path)})["OUTPUT"]
+    assert "tc_numerr" not in plain.fields().names()
+    checked = _run({"INPUT": str(stations_gpkg), "DEM": str(path), "ENGINE_CHECK": True})["OUTPUT"]
+    numerr = _values(checked, "tc_numerr")
+    assert np.all(np.isfinite(numerr)) and np.all(numerr < 0.01)
+    np.testing.assert_array_equal(_values(checked, "tc_total"), _values(plain, "tc_total"))
