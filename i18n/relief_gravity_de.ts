@@ -6,7 +6,7 @@
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="466" />
       <source>; {:.1f} GB available now</source>
-      <translation type="unfinished" />
+      <translation>; derzeit {:.1f} GB verfügbar</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="114" />
@@ -16,12 +16,12 @@
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="480" />
       <source>A contour interval of {:g} mGal over values from {:.3f} to {:.3f} mGal gives {:,} levels (limit {:,}). Choose a larger interval, e.g. {:g} mGal, or leave it empty.</source>
-      <translation type="unfinished" />
+      <translation>Ein Isolinienabstand von {:g} mGal bei Werten von {:.3f} bis {:.3f} mGal ergibt {:,} Stufen (Grenze {:,}). Wählen Sie einen größeren Abstand, z. B. {:g} mGal, oder lassen Sie das Feld leer.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="455" />
       <source>A grid of {} x {} = {:,} cells of {:g} {} would need about {:.1f} GB of memory (limit {:,} cells{}). Choose a larger pixel size or a smaller extent.</source>
-      <translation type="unfinished" />
+      <translation>Ein Raster von {} x {} = {:,} Zellen zu {:g} {} bräuchte etwa {:.1f} GB Speicher (Grenze {:,} Zellen{}). Wählen Sie eine größere Pixelgröße oder eine kleinere Ausdehnung.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="151" />
@@ -31,7 +31,7 @@
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="405" />
       <source>Anomaly field {} of {} stations, gridded by minimum curvature with tension {} on {} {} cells; values in mGal; cells farther than {:.6g} {} from a station are NoData (0 = no blanking).</source>
-      <translation type="unfinished" />
+      <translation>Anomaliefeld {} von {} Stationen, interpoliert mit minimaler Krümmung und Spannung {} auf {} {} Zellen; Werte in mGal; Zellen weiter als {:.6g} {} von einer Station entfernt sind NoData (0 = kein Ausblenden).</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="99" />
@@ -70,7 +70,7 @@
       <location filename="../plugin/toolbox/anomaly_grid.py" line="375" />
       <location filename="../plugin/toolbox/anomaly_grid.py" line="434" />
       <source>Cancelled by the user.</source>
-      <translation type="unfinished" />
+      <translation>Vom Benutzer abgebrochen.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="195" />
@@ -100,7 +100,7 @@
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="314" />
       <source>Every station has the same value in {} ({:g}): a constant field has no anomaly to grid or contour. Check that the field holds the anomaly.</source>
-      <translation type="unfinished" />
+      <translation>Alle Stationen haben denselben Wert in {} ({:g}): ein konstantes Feld enthält keine Anomalie zum Interpolieren oder für Isolinien. Prüfen Sie, ob das Feld die Anomalie enthält.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="145" />
@@ -155,12 +155,12 @@
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="390" />
       <source>The anomaly raster could not be written to {}: {}</source>
-      <translation type="unfinished" />
+      <translation>Das Anomalieraster konnte nicht nach {} geschrieben werden: {}</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="232" />
       <source>The stations are in a geographic CRS ({}), in degrees; gridding needs distances in metres. Reproject the station layer to a projected CRS (for example the local UTM zone) with Vector &gt; Data Management Tools &gt; Reproject Layer, then grid the copy.</source>
-      <translation type="unfinished" />
+      <translation>Die Stationen liegen in einem geographischen KBS ({}) in Grad vor; die Interpolation braucht Abstände in Metern. Projizieren Sie den Stationslayer in ein projiziertes KBS (zum Beispiel die örtliche UTM-Zone) um, mit Vektor &gt; Datenmanagement-Werkzeuge &gt; Layer reprojizieren, und interpolieren Sie dann die Kopie.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="370" />
@@ -177,13 +177,13 @@
       <location filename="../plugin/toolbox/anomaly_grid.py" line="250" />
       <location filename="../plugin/toolbox/anomaly_grid.py" line="254" />
       <source>anomaly raster</source>
-      <translation type="unfinished" />
+      <translation>Anomalieraster</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="252" />
       <location filename="../plugin/toolbox/anomaly_grid.py" line="256" />
       <source>contour layer</source>
-      <translation type="unfinished" />
+      <translation>Isolinienlayer</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="111" />
@@ -193,7 +193,7 @@
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="253" />
       <source>station layer</source>
-      <translation type="unfinished" />
+      <translation>Stationslayer</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/anomaly_grid.py" line="442" />
@@ -222,7 +222,7 @@
     <message>
       <location filename="../plugin/map_layout.py" line="159" />
       <source>Anomaly map</source>
-      <translation type="unfinished" />
+      <translation>Anomaliekarte</translation>
     </message>
     <message>
       <location filename="../plugin/map_layout.py" line="276" />
@@ -239,7 +239,7 @@
     <message>
       <location filename="../plugin/map_layout.py" line="182" />
       <source>Coordinates: {} ({}), {}</source>
-      <translation type="unfinished" />
+      <translation>Koordinaten: {} ({}), {}</translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="55" />
@@ -254,17 +254,17 @@
     <message>
       <location filename="../plugin/map_layout.py" line="58" />
       <source>Interpretation aid only: check against the survey's own ties. Drilling, groundwater and engineering decisions follow local codes and licensed practice.</source>
-      <translation type="unfinished" />
+      <translation>Nur als Interpretationshilfe: an den Anschlussmessungen der Vermessung prüfen. Entscheidungen über Bohrungen, Grundwasser und Bauvorhaben folgen örtlichen Vorschriften und zugelassener Fachpraxis.</translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="79" />
       <source>Reduction density {} kg/m³</source>
-      <translation type="unfinished" />
+      <translation>Reduktionsdichte {} kg/m³</translation>
     </message>
     <message>
       <location filename="../plugin/map_layout.py" line="66" />
       <source>Reduction density … kg/m³ · standard … · contour interval … mGal · … stations · </source>
-      <translation type="unfinished" />
+      <translation>Reduktionsdichte … kg/m³ · Standard … · Isolinienabstand … mGal · … Stationen · </translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="150" />
@@ -274,7 +274,7 @@
     <message>
       <location filename="../plugin/render.py" line="83" />
       <source>contour interval {} mGal (index contours every {} mGal, labelled)</source>
-      <translation type="unfinished" />
+      <translation>Isolinienabstand {} mGal (Zähllinien alle {} mGal, beschriftet)</translation>
     </message>
     <message>
       <location filename="../plugin/map_layout.py" line="196" />
@@ -289,37 +289,37 @@
     <message>
       <location filename="../plugin/render.py" line="89" />
       <source>map drawn {}</source>
-      <translation type="unfinished" />
+      <translation>Karte erstellt {}</translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="87" />
       <source>no contours</source>
-      <translation type="unfinished" />
+      <translation>keine Isolinien</translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="89" />
       <source>reduced {}</source>
-      <translation type="unfinished" />
+      <translation>reduziert {}</translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="81" />
       <source>reduction density not recorded</source>
-      <translation type="unfinished" />
+      <translation>Reduktionsdichte nicht aufgezeichnet</translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="82" />
       <source>reduction standard not recorded</source>
-      <translation type="unfinished" />
+      <translation>Reduktionsstandard nicht aufgezeichnet</translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="88" />
       <source>stations not shown</source>
-      <translation type="unfinished" />
+      <translation>Stationen nicht dargestellt</translation>
     </message>
     <message>
       <location filename="../plugin/render.py" line="88" />
       <source>{} stations</source>
-      <translation type="unfinished" />
+      <translation>{} Stationen</translation>
     </message>
   </context>
   <context>
@@ -337,7 +337,7 @@
     <message>
       <location filename="../plugin/styling.py" line="260" />
       <source>Contour</source>
-      <translation type="unfinished" />
+      <translation>Isolinie</translation>
     </message>
     <message>
       <location filename="../plugin/styling.py" line="277" />
@@ -357,12 +357,12 @@
     <message>
       <location filename="../plugin/styling.py" line="259" />
       <source>Index contour</source>
-      <translation type="unfinished" />
+      <translation>Zähllinie</translation>
     </message>
     <message>
       <location filename="../plugin/styling.py" line="250" />
       <source>Index contours</source>
-      <translation type="unfinished" />
+      <translation>Zähllinien</translation>
     </message>
   </context>
   <context>
@@ -390,7 +390,7 @@
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="547" />
       <source>Check DENSITY_FIELD_UNITS (kg/m³ or g/cm³).</source>
-      <translation type="unfinished" />
+      <translation>Prüfen Sie DENSITY_FIELD_UNITS (kg/m³ oder g/cm³).</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="324" />
@@ -405,7 +405,7 @@
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="87" />
       <source>Every observed gravity value in {} is 0: the field holds no readings. Choose the field with observed (absolute) gravity.</source>
-      <translation type="unfinished" />
+      <translation>Alle Werte der gemessenen Schwere in {} sind 0: das Feld enthält keine Messwerte. Wählen Sie das Feld mit der gemessenen (absoluten) Schwere.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="270" />
@@ -425,12 +425,12 @@
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="72" />
       <source>Gal (1,000 mGal)</source>
-      <translation type="unfinished" />
+      <translation>Gal (1.000 mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="500" />
       <source>Give densities either per station (DENSITY_FIELD) or from a geology layer (DENSITY_LAYER), not both.</source>
-      <translation type="unfinished" />
+      <translation>Geben Sie Dichten entweder je Station (DENSITY_FIELD) oder aus einem Geologielayer (DENSITY_LAYER) an, nicht beides.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="247" />
@@ -455,22 +455,22 @@
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="92" />
       <source>Observed gravity in {} reads {:.6g} mGal (median) with GRAVITY_UNITS = '{}', far from Earth's 975,000-984,000 mGal. The values look like {}: set GRAVITY_UNITS to '{}'.</source>
-      <translation type="unfinished" />
+      <translation>Die gemessene Schwere in {} beträgt {:.6g} mGal (Median) bei GRAVITY_UNITS = '{}', weit entfernt von den 975.000-984.000 mGal der Erde. Die Werte sehen aus wie {}: setzen Sie GRAVITY_UNITS auf '{}'.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="103" />
       <source>Observed gravity in {} reads {:.6g} mGal (median), far from Earth's 975,000-984,000 mGal in any unit: relative meter readings or another quantity? The reduction needs absolute observed gravity.</source>
-      <translation type="unfinished" />
+      <translation>Die gemessene Schwere in {} beträgt {:.6g} mGal (Median), in jeder Einheit weit entfernt von den 975.000-984.000 mGal der Erde: relative Gravimeterablesungen oder eine andere Größe? Die Reduktion braucht die absolute gemessene Schwere.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="416" />
       <source>Orthometric reduction needs geoid heights: PROJ's EGM96 grid or a geoid field/raster.</source>
-      <translation type="unfinished" />
+      <translation>Die orthometrische Reduktion braucht Geoidhöhen: das EGM96-Gitter von PROJ oder ein Geoidhöhenfeld bzw. -raster.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="281" />
       <source>Reduce with orthometric heights (legacy practice; the standard uses ellipsoidal heights)</source>
-      <translation type="unfinished" />
+      <translation>Mit orthometrischen Höhen reduzieren (ältere Praxis; der Standard verwendet ellipsoidische Höhen)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="288" />
@@ -500,7 +500,7 @@
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="201" />
       <source>Station height field (empty = sample the elevation raster)</source>
-      <translation type="unfinished" />
+      <translation>Feld der Stationshöhe (leer = aus dem Höhenraster)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="292" />
@@ -515,7 +515,7 @@
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="195" />
       <source>Units of observed gravity</source>
-      <translation type="unfinished" />
+      <translation>Einheit der gemessenen Schwere</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="226" />
@@ -535,7 +535,7 @@
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="350" />
       <source>elevation raster</source>
-      <translation type="unfinished" />
+      <translation>Höhenraster</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="227" />
@@ -545,7 +545,7 @@
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="309" />
       <source>geoid height</source>
-      <translation type="unfinished" />
+      <translation>Geoidhöhe</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="142" />
@@ -560,12 +560,12 @@
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="72" />
       <source>m/s² (100,000 mGal)</source>
-      <translation type="unfinished" />
+      <translation>m/s² (100.000 mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="72" />
       <source>mGal</source>
-      <translation type="unfinished" />
+      <translation>mGal</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="305" />
@@ -575,7 +575,7 @@
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="352" />
       <source>regional elevation raster</source>
-      <translation type="unfinished" />
+      <translation>regionales Höhenraster</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="306" />
@@ -600,7 +600,7 @@
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="72" />
       <source>µm/s² (0.1 mGal)</source>
-      <translation type="unfinished" />
+      <translation>µm/s² (0,1 mGal)</translation>
     </message>
   </context>
   <context>
@@ -608,13 +608,13 @@
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="190" />
       <source>1967 formula (legacy databases)</source>
-      <translation type="unfinished" />
+      <translation>Formel von 1967 (ältere Datenbanken)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="470" />
       <location filename="../plugin/toolbox/density_estimate.py" line="514" />
       <source>95 % interval</source>
-      <translation type="unfinished" />
+      <translation>95-%-Intervall</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="102" />
@@ -624,317 +624,317 @@
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="208" />
       <source>Apply the atmospheric correction</source>
-      <translation type="unfinished" />
+      <translation>Atmosphärenkorrektion anbringen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="472" />
       <source>Bouguer and terrain term per unit density (mGal per g/cm³)</source>
-      <translation type="unfinished" />
+      <translation>Bouguer- und Geländeterm je Dichteeinheit (mGal je g/cm³)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="492" />
       <source>Bouguer anomaly against height</source>
-      <translation type="unfinished" />
+      <translation>Bouguer-Anomalie gegen Höhe</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="522" />
       <source>Bouguer anomaly minus regional, centred (mGal)</source>
-      <translation type="unfinished" />
+      <translation>Bouguer-Anomalie minus Regionalfeld, zentriert (mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="177" />
       <source>Buffer around the profile lines</source>
-      <translation type="unfinished" />
+      <translation>Puffer um die Profillinien</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="334" />
       <source>Cancelled by the user.</source>
-      <translation type="unfinished" />
+      <translation>Vom Benutzer abgebrochen.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="517" />
       <source>Correlation with height</source>
-      <translation type="unfinished" />
+      <translation>Korrelation mit der Höhe</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="350" />
       <source>Density {:.0f} kg/m³, 95 % interval {:.0f} to {:.0f} kg/m³ from {} stations ({}).</source>
-      <translation type="unfinished" />
+      <translation>Dichte {:.0f} kg/m³, 95-%-Intervall {:.0f} bis {:.0f} kg/m³ aus {} Stationen ({}).</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="503" />
       <source>Distance along the profile (m)</source>
-      <translation type="unfinished" />
+      <translation>Abstand entlang des Profils (m)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="146" />
       <source>Elevation raster (DEM, metres)</source>
-      <translation type="unfinished" />
+      <translation>Höhenraster (DGM, Meter)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="228" />
       <source>Estimated density (kg/m³)</source>
-      <translation type="unfinished" />
+      <translation>Geschätzte Dichte (kg/m³)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="96" />
       <source>Estimates the Bouguer reduction density from the stations, with a 95 % interval and a figure.</source>
-      <translation type="unfinished" />
+      <translation>Schätzt die Bouguer-Reduktionsdichte aus den Stationen, mit 95-%-Intervall und Abbildung.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="222" />
       <source>Figure of the estimate</source>
-      <translation type="unfinished" />
+      <translation>Abbildung der Schätzung</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="201" />
       <source>First order, 0.3086 mGal/m</source>
-      <translation type="unfinished" />
+      <translation>Erster Ordnung, 0,3086 mGal/m</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="473" />
       <source>Free-air anomaly minus regional term (mGal)</source>
-      <translation type="unfinished" />
+      <translation>Freiluftanomalie minus Regionalterm (mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="188" />
       <source>GRS80 (Somigliana closed form)</source>
-      <translation type="unfinished" />
+      <translation>GRS80 (geschlossene Formel nach Somigliana)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="198" />
       <source>Height (free-air) correction</source>
-      <translation type="unfinished" />
+      <translation>Höhenkorrektion (Freiluft)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="523" />
       <source>Height (m)</source>
-      <translation type="unfinished" />
+      <translation>Höhe (m)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="229" />
       <source>Lower bound of the 95 % interval (kg/m³)</source>
-      <translation type="unfinished" />
+      <translation>Untere Grenze des 95-%-Intervalls (kg/m³)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="150" />
       <source>Method</source>
-      <translation type="unfinished" />
+      <translation>Verfahren</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="153" />
       <source>Nettleton (1939) least correlation with topography</source>
-      <translation type="unfinished" />
+      <translation>Nettleton (1939), geringste Korrelation mit der Topographie</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="343" />
       <source>Nettleton correlation, {} regional term, {} group(s); bootstrap percentile interval, {} resamples</source>
-      <translation type="unfinished" />
+      <translation>Nettleton-Korrelation, Regionalterm {}, {} Gruppe(n); Bootstrap-Perzentilintervall, {} Stichproben</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="518" />
       <source>Nettleton: {:.0f} kg/m³ ({:.0f} to {:.0f})</source>
-      <translation type="unfinished" />
+      <translation>Nettleton: {:.0f} kg/m³ ({:.0f} bis {:.0f})</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="347" />
       <source>No density can be estimated: {}</source>
-      <translation type="unfinished" />
+      <translation>Es kann keine Dichte geschätzt werden: {}</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="162" />
       <source>None (constant)</source>
-      <translation type="unfinished" />
+      <translation>Keiner (konstant)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="186" />
       <source>Normal gravity</source>
-      <translation type="unfinished" />
+      <translation>Normalschwere</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="128" />
       <source>Observed gravity field (mGal)</source>
-      <translation type="unfinished" />
+      <translation>Feld der gemessenen Schwere (mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="223" />
       <source>PNG files (*.png)</source>
-      <translation type="unfinished" />
+      <translation>PNG-Dateien (*.png)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="152" />
       <source>Parasnis (1952) regression</source>
-      <translation type="unfinished" />
+      <translation>Parasnis (1952), Regression</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="338" />
       <source>Parasnis regression, {} regional term; Student-t interval, {} degrees of freedom</source>
-      <translation type="unfinished" />
+      <translation>Parasnis-Regression, Regionalterm {}; Student-t-Intervall, {} Freiheitsgrade</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="474" />
       <source>Parasnis: {:.0f} kg/m³ ({:.0f} to {:.0f})</source>
-      <translation type="unfinished" />
+      <translation>Parasnis: {:.0f} kg/m³ ({:.0f} bis {:.0f})</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="162" />
       <source>Planar</source>
-      <translation type="unfinished" />
+      <translation>Eben</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="399" />
       <source>Profile buffers need stations in a projected CRS (metres); reproject the station layer first.</source>
-      <translation type="unfinished" />
+      <translation>Profilpuffer brauchen Stationen in einem projizierten KBS (Meter); projizieren Sie den Stationslayer zuerst um.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="169" />
       <source>Profile lines (Nettleton; empty = whole survey)</source>
-      <translation type="unfinished" />
+      <translation>Profillinien (Nettleton; leer = ganze Vermessung)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="257" />
       <source>Profile lines are used by Nettleton's method only: choose it, or leave the profiles empty.</source>
-      <translation type="unfinished" />
+      <translation>Profillinien werden nur vom Nettleton-Verfahren verwendet: wählen Sie es oder lassen Sie die Profile leer.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="504" />
       <source>Profile {} ({} stations)</source>
-      <translation type="unfinished" />
+      <translation>Profil {} ({} Stationen)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="162" />
       <source>Quadratic</source>
-      <translation type="unfinished" />
+      <translation>Quadratisch</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="93" />
       <source>Reduction density from the data (Parasnis, Nettleton)</source>
-      <translation type="unfinished" />
+      <translation>Reduktionsdichte aus den Daten (Parasnis, Nettleton)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="161" />
       <source>Regional term fitted with the density</source>
-      <translation type="unfinished" />
+      <translation>Mit der Dichte angepasster Regionalterm</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="450" />
       <source>Relief {:.0f} m (standard deviation after the regional term); low and high stations agree.</source>
-      <translation type="unfinished" />
+      <translation>Relief {:.0f} m (Standardabweichung nach dem Regionalterm); tiefe und hohe Stationen stimmen überein.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="200" />
       <source>Second order, latitude dependent (Hinze et al. 2005)</source>
-      <translation type="unfinished" />
+      <translation>Zweiter Ordnung, breitenabhängig (Hinze et al. 2005)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="214" />
       <source>Spherical cap to 166.7 km (add the curvature correction to the slab)</source>
-      <translation type="unfinished" />
+      <translation>Kugelkappe bis 166,7 km (Krümmungskorrektion zur Platte)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="491" />
       <source>Station height (m)</source>
-      <translation type="unfinished" />
+      <translation>Stationshöhe (m)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="140" />
       <source>Station height field (above the ellipsoid; empty = sample the elevation raster)</source>
-      <translation type="unfinished" />
+      <translation>Feld der Stationshöhe (über dem Ellipsoid; leer = aus dem Höhenraster)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="233" />
       <source>Stations used</source>
-      <translation type="unfinished" />
+      <translation>Verwendete Stationen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="425" />
       <source>Stations within {:g} of each profile line: {}.</source>
-      <translation type="unfinished" />
+      <translation>Stationen innerhalb {:g} um jede Profillinie: {}.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="261" />
       <source>The buffer around the profile lines must be more than 0.</source>
-      <translation type="unfinished" />
+      <translation>Der Puffer um die Profillinien muss größer als 0 sein.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="252" />
       <source>The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m).</source>
-      <translation type="unfinished" />
+      <translation>Der Radius der Innenzone ({} m) muss positiv und kleiner als der Radius der Außenzone ({} m) sein.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="411" />
       <source>The profile layer has no line.</source>
-      <translation type="unfinished" />
+      <translation>Der Profillayer enthält keine Linie.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="516" />
       <source>Trial density (kg/m³)</source>
-      <translation type="unfinished" />
+      <translation>Versuchsdichte (kg/m³)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="134" />
       <source>Units of observed gravity</source>
-      <translation type="unfinished" />
+      <translation>Einheit der gemessenen Schwere</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="231" />
       <source>Upper bound of the 95 % interval (kg/m³)</source>
-      <translation type="unfinished" />
+      <translation>Obere Grenze des 95-%-Intervalls (kg/m³)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="189" />
       <source>WGS84 (Somigliana closed form)</source>
-      <translation type="unfinished" />
+      <translation>WGS84 (geschlossene Formel nach Somigliana)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="270" />
       <source>elevation raster</source>
-      <translation type="unfinished" />
+      <translation>Höhenraster</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="515" />
       <source>estimate {:.0f} kg/m³</source>
-      <translation type="unfinished" />
+      <translation>Schätzung {:.0f} kg/m³</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="469" />
       <source>fit: {:.0f} kg/m³</source>
-      <translation type="unfinished" />
+      <translation>Anpassung: {:.0f} kg/m³</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="99" />
       <source>gravity,density,bouguer,Parasnis,Nettleton,regression,correlation,bootstrap</source>
-      <translation type="unfinished" />
+      <translation>Schwere,Dichte,Bouguer,Parasnis,Nettleton,Regression,Korrelation,Bootstrap</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="245" />
       <source>observed gravity</source>
-      <translation type="unfinished" />
+      <translation>gemessene Schwere</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="273" />
       <source>regional elevation raster</source>
-      <translation type="unfinished" />
+      <translation>regionales Höhenraster</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="245" />
       <source>station height</source>
-      <translation type="unfinished" />
+      <translation>Stationshöhe</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="468" />
       <source>stations</source>
-      <translation type="unfinished" />
+      <translation>Stationen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="521" />
       <source>{:.0f} kg/m³</source>
-      <translation type="unfinished" />
+      <translation>{:.0f} kg/m³</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/density_estimate.py" line="327" />
       <source>{} of {} stations left out (no anomaly, no terrain correction or outside the profile buffers).</source>
-      <translation type="unfinished" />
+      <translation>{} von {} Stationen ausgelassen (keine Anomalie, keine Geländekorrektion oder außerhalb der Profilpuffer).</translation>
     </message>
   </context>
   <context>
@@ -942,62 +942,62 @@
     <message>
       <location filename="../plugin/density_layer.py" line="146" />
       <source>A polygon of DENSITY_LAYER cannot be reprojected to the DEM's CRS: {}</source>
-      <translation type="unfinished" />
+      <translation>Ein Polygon von DENSITY_LAYER kann nicht in das KBS des DGM umprojiziert werden: {}</translation>
     </message>
     <message>
       <location filename="../plugin/density_layer.py" line="133" />
       <source>DENSITY_LAYER has no coordinate reference system.</source>
-      <translation type="unfinished" />
+      <translation>DENSITY_LAYER hat kein Koordinatenbezugssystem.</translation>
     </message>
     <message>
       <location filename="../plugin/density_layer.py" line="129" />
       <source>DENSITY_LAYER has no field {}.</source>
-      <translation type="unfinished" />
+      <translation>DENSITY_LAYER hat kein Feld {}.</translation>
     </message>
     <message>
       <location filename="../plugin/density_layer.py" line="111" />
       <source>DENSITY_LAYER is set but DENSITY_LAYER_FIELD is not: choose the field holding each polygon's density.</source>
-      <translation type="unfinished" />
+      <translation>DENSITY_LAYER ist gesetzt, DENSITY_LAYER_FIELD aber nicht: wählen Sie das Feld mit der Dichte jedes Polygons.</translation>
     </message>
     <message>
       <location filename="../plugin/density_layer.py" line="126" />
       <source>DENSITY_LAYER must be a polygon layer.</source>
-      <translation type="unfinished" />
+      <translation>DENSITY_LAYER muss ein Polygonlayer sein.</translation>
     </message>
     <message>
       <location filename="../plugin/density_layer.py" line="65" />
       <source>Density field of the geology polygons (kg/m³ or g/cm³, detected)</source>
-      <translation type="unfinished" />
+      <translation>Dichtefeld der Geologiepolygone (kg/m³ oder g/cm³, wird erkannt)</translation>
     </message>
     <message>
       <location filename="../plugin/density_layer.py" line="57" />
       <source>Geology polygons with densities (optional; default density outside them)</source>
-      <translation type="unfinished" />
+      <translation>Geologiepolygone mit Dichten (optional; außerhalb gilt die Standarddichte)</translation>
     </message>
     <message>
       <location filename="../plugin/density_layer.py" line="185" />
       <source>Internal: the geology polygons are not in the CRS of the raster {}.</source>
-      <translation type="unfinished" />
+      <translation>Intern: die Geologiepolygone liegen nicht im KBS des Rasters {}.</translation>
     </message>
     <message>
       <location filename="../plugin/density_layer.py" line="154" />
       <source>No polygon of DENSITY_LAYER has a density in the field {}.</source>
-      <translation type="unfinished" />
+      <translation>Kein Polygon von DENSITY_LAYER hat eine Dichte im Feld {}.</translation>
     </message>
     <message>
       <location filename="../plugin/density_layer.py" line="160" />
       <source>The densities of DENSITY_LAYER ({}) cannot be read: {}. Give every polygon in kg/m³ (500-5000) or every polygon in g/cm³ (0.5-5).</source>
-      <translation type="unfinished" />
+      <translation>Die Dichten von DENSITY_LAYER ({}) können nicht gelesen werden: {}. Geben Sie alle Polygone in kg/m³ (500-5000) oder alle in g/cm³ (0,5-5) an.</translation>
     </message>
     <message>
       <location filename="../plugin/density_layer.py" line="131" />
       <source>The field {} of DENSITY_LAYER is not numeric.</source>
-      <translation type="unfinished" />
+      <translation>Das Feld {} von DENSITY_LAYER ist nicht numerisch.</translation>
     </message>
     <message>
       <location filename="../plugin/density_layer.py" line="167" />
       <source>{} polygon(s) of DENSITY_LAYER have no density or no geometry: the default density applies there.</source>
-      <translation type="unfinished" />
+      <translation>{} Polygon(e) von DENSITY_LAYER haben keine Dichte oder keine Geometrie: dort gilt die Standarddichte.</translation>
     </message>
   </context>
   <context>
@@ -1041,12 +1041,12 @@
     <message>
       <location filename="../plugin/geoid.py" line="80" />
       <source>The EGM96 geoid grid {} was not found in PROJ's search paths ({}). Install PROJ's grid data (Debian: proj-data), or give the geoid heights in a field or raster (HEIGHT_DATUM = orthometric with GEOID_FIELD or GEOID_RASTER), or set both datums to the ellipsoid.</source>
-      <translation type="unfinished" />
+      <translation>Das EGM96-Geoidgitter {} wurde in den Suchpfaden von PROJ ({}) nicht gefunden. Installieren Sie die Gitterdaten von PROJ (Debian: proj-data), geben Sie die Geoidhöhen in einem Feld oder Raster an (HEIGHT_DATUM = orthometrisch mit GEOID_FIELD oder GEOID_RASTER) oder setzen Sie beide Höhenbezüge auf das Ellipsoid.</translation>
     </message>
     <message>
       <location filename="../plugin/geoid.py" line="96" />
       <source>The geoid heights from {} reach {:.6g} m; geoid heights lie within ±{:g} m of the ellipsoid everywhere on Earth. Check that it holds geoid heights in metres.</source>
-      <translation type="unfinished" />
+      <translation>Die Geoidhöhen aus {} erreichen {:.6g} m; Geoidhöhen liegen überall auf der Erde innerhalb ±{:g} m um das Ellipsoid. Prüfen Sie, ob es Geoidhöhen in Metern enthält.</translation>
     </message>
   </context>
   <context>
@@ -1059,232 +1059,232 @@
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="137" />
       <source>Calibration table (fields counter, mgal, factor)</source>
-      <translation type="unfinished" />
+      <translation>Kalibriertabelle (Felder counter, mgal, factor)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="487" />
       <source>Could not write a reading to the readings output.</source>
-      <translation type="unfinished" />
+      <translation>Eine Ablesung konnte nicht in die Ausgabe der Ablesungen geschrieben werden.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="464" />
       <source>Could not write a station to the output layer.</source>
-      <translation type="unfinished" />
+      <translation>Eine Station konnte nicht in den Ausgabelayer geschrieben werden.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="392" />
       <source>Counter reading(s) outside the calibration table's range {} to {} in row(s) {} of the readings.</source>
-      <translation type="unfinished" />
+      <translation>Zählerablesung(en) außerhalb des Bereichs der Kalibriertabelle von {} bis {} in Zeile(n) {} der Ablesungen.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="134" />
       <source>Counter units (through the calibration table)</source>
-      <translation type="unfinished" />
+      <translation>Zählereinheiten (über die Kalibriertabelle)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="268" />
       <source>Counter units without a calibration table or scale factor: read as mGal.</source>
-      <translation type="unfinished" />
+      <translation>Zählereinheiten ohne Kalibriertabelle oder Maßstabsfaktor: als mGal gelesen.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="175" />
       <source>Drift and ties</source>
-      <translation type="unfinished" />
+      <translation>Drift und Anschlüsse</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="167" />
       <source>Earth tide</source>
-      <translation type="unfinished" />
+      <translation>Erdgezeiten</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="89" />
       <source>Field readings</source>
-      <translation type="unfinished" />
+      <translation>Feldablesungen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="171" />
       <source>Gravimetric factor (1 + h - 3k/2)</source>
-      <translation type="unfinished" />
+      <translation>Gravimetrischer Faktor (1 + h - 3k/2)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="153" />
       <source>Gravity stations</source>
-      <translation type="unfinished" />
+      <translation>Schwerestationen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="145" />
       <source>Instrument height field (m of the sensor above the mark)</source>
-      <translation type="unfinished" />
+      <translation>Feld der Instrumentenhöhe (m des Sensors über der Vermarkung)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="163" />
       <source>Known gravity field (absolute, mGal; empty where unknown)</source>
-      <translation type="unfinished" />
+      <translation>Feld der bekannten Schwere (absolut, mGal; leer, wo unbekannt)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="368" />
       <source>Known gravity {} is outside 970000-990000 mGal: it must be absolute gravity in mGal.</source>
-      <translation type="unfinished" />
+      <translation>Die bekannte Schwere {} liegt außerhalb 970000-990000 mGal: sie muss die absolute Schwere in mGal sein.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="203" />
       <source>Largest loop misclosure (mGal)</source>
-      <translation type="unfinished" />
+      <translation>Größter Schleifenschlussfehler (mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="189" />
       <source>Leave readings beyond 3 standard errors out of a second pass</source>
-      <translation type="unfinished" />
+      <translation>Ablesungen über 3 Standardfehlern in einem zweiten Durchgang auslassen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="178" />
       <source>Linear between base readings</source>
-      <translation type="unfinished" />
+      <translation>Linear zwischen Basisablesungen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="168" />
       <source>Longman (1959)</source>
-      <translation type="unfinished" />
+      <translation>Longman (1959)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="149" />
       <source>Loop field (empty: one loop per local calendar day)</source>
-      <translation type="unfinished" />
+      <translation>Schleifenfeld (leer: eine Schleife je örtlichem Kalendertag)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="414" />
       <source>Loop, base, base readings, hours, misclosure (mGal), drift (mGal/h):</source>
-      <translation type="unfinished" />
+      <translation>Schleife, Basis, Basisablesungen, Stunden, Schlussfehler (mGal), Drift (mGal/h):</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="202" />
       <source>Loops</source>
-      <translation type="unfinished" />
+      <translation>Schleifen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="185" />
       <source>Measured vertical gradient field (mGal/m, empty: 0.3086)</source>
-      <translation type="unfinished" />
+      <translation>Feld des gemessenen Vertikalgradienten (mGal/m, leer: 0,3086)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="120" />
       <source>Meter readings (table)</source>
-      <translation type="unfinished" />
+      <translation>Gravimeterablesungen (Tabelle)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="177" />
       <source>Network adjustment (least squares)</source>
-      <translation type="unfinished" />
+      <translation>Netzausgleichung (kleinste Quadrate)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="408" />
       <source>No reading is of a station of known gravity (or of a station tied to one): the network cannot be tied. Give the known gravity of at least one base station read in the loops.</source>
-      <translation type="unfinished" />
+      <translation>Keine Ablesung gehört zu einer Station bekannter Schwere (oder einer daran angeschlossenen Station): das Netz kann nicht angeschlossen werden. Geben Sie die bekannte Schwere mindestens einer in den Schleifen abgelesenen Basisstation an.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="361" />
       <source>No station has a known gravity in the field {}: at least one base of known gravity is needed.</source>
-      <translation type="unfinished" />
+      <translation>Keine Station hat eine bekannte Schwere im Feld {}: mindestens eine Basis bekannter Schwere wird benötigt.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="179" />
       <source>None</source>
-      <translation type="unfinished" />
+      <translation>Keine</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="168" />
       <source>None (readings already corrected)</source>
-      <translation type="unfinished" />
+      <translation>Keine (Ablesungen bereits korrigiert)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="83" />
       <source>Observed gravity from meter readings (tide, drift, base ties)</source>
-      <translation type="unfinished" />
+      <translation>Gemessene Schwere aus Gravimeterablesungen (Gezeiten, Drift, Basisanschlüsse)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="125" />
       <source>Reading field</source>
-      <translation type="unfinished" />
+      <translation>Feld der Ablesung</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="133" />
       <source>Reading units</source>
-      <translation type="unfinished" />
+      <translation>Einheit der Ablesungen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="200" />
       <source>Reduced readings</source>
-      <translation type="unfinished" />
+      <translation>Reduzierte Ablesungen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="141" />
       <source>Scale factor (mGal per unit, or a correction to the table)</source>
-      <translation type="unfinished" />
+      <translation>Maßstabsfaktor (mGal je Einheit oder eine Korrektur der Tabelle)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="159" />
       <source>Station height field (m, for the tide)</source>
-      <translation type="unfinished" />
+      <translation>Feld der Stationshöhe (m, für die Gezeiten)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="156" />
       <source>Station id field</source>
-      <translation type="unfinished" />
+      <translation>Feld der Stationskennung</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="123" />
       <source>Station id field of the readings</source>
-      <translation type="unfinished" />
+      <translation>Feld der Stationskennung in den Ablesungen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="197" />
       <source>Stations with observed gravity</source>
-      <translation type="unfinished" />
+      <translation>Stationen mit gemessener Schwere</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="211" />
       <source>The scale factor must be positive; got {}.</source>
-      <translation type="unfinished" />
+      <translation>Der Maßstabsfaktor muss positiv sein; erhalten: {}.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="353" />
       <source>The station id '{}' appears more than once in the station layer; ids must be unique.</source>
-      <translation type="unfinished" />
+      <translation>Die Stationskennung '{}' kommt im Stationslayer mehrfach vor; Kennungen müssen eindeutig sein.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="124" />
       <source>Time field (ISO 8601 text or date-time)</source>
-      <translation type="unfinished" />
+      <translation>Zeitfeld (ISO-8601-Text oder Datum/Zeit)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="92" />
       <source>Turns gravimeter readings into observed gravity at each station, with loop checks.</source>
-      <translation type="unfinished" />
+      <translation>Wandelt Gravimeterablesungen in die gemessene Schwere an jeder Station um, mit Schleifenkontrollen.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="129" />
       <source>UTC offset of times without one (hours, east positive)</source>
-      <translation type="unfinished" />
+      <translation>UTC-Versatz von Zeiten ohne Angabe (Stunden, Osten positiv)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="95" />
       <source>gravity,gravimeter,readings,earth tide,Longman,drift,loop,base station,tie,calibration</source>
-      <translation type="unfinished" />
+      <translation>Schwere,Gravimeter,Ablesungen,Erdgezeiten,Longman,Drift,Schleife,Basisstation,Anschluss,Kalibrierung</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="134" />
       <source>mGal</source>
-      <translation type="unfinished" />
+      <translation>mGal</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="255" />
       <source>{} reading(s) name stations not in the station layer (e.g. {}); they are left out.</source>
-      <translation type="unfinished" />
+      <translation>{} Ablesung(en) nennen Stationen, die nicht im Stationslayer sind (z. B. {}); sie werden ausgelassen.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/observed_gravity.py" line="330" />
       <source>{} readings in {} loops; {} stations with observed gravity; {} readings flagged; s0 = {:.4f} mGal.</source>
-      <translation type="unfinished" />
+      <translation>{} Ablesungen in {} Schleifen; {} Stationen mit gemessener Schwere; {} Ablesungen markiert; s0 = {:.4f} mGal.</translation>
     </message>
   </context>
   <context>
