@@ -1292,192 +1292,192 @@
     <message>
       <location filename="../plugin/flags.py" line="72" />
       <source>A station of known gravity (a tie of the network).</source>
-      <translation type="unfinished" />
+      <translation>Eine Station bekannter Schwere (ein Anschlusspunkt des Netzes).</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="32" />
       <source>Density missing for this station: the default density was used.</source>
-      <translation type="unfinished" />
+      <translation>Dichte für diese Station fehlt: die Standarddichte wurde verwendet.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="33" />
       <source>Density outside 1000-3500 kg/m3: check its units.</source>
-      <translation type="unfinished" />
+      <translation>Dichte außerhalb 1000-3500 kg/m3: prüfen Sie die Einheit.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="40" />
       <source>Density outside 500-5000 kg/m3: no Bouguer anomaly computed for this station.</source>
-      <translation type="unfinished" />
+      <translation>Dichte außerhalb 500-5000 kg/m3: für diese Station wurde keine Bouguer-Anomalie berechnet.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="30" />
       <source>Latitude out of range: the position cannot be located on Earth.</source>
-      <translation type="unfinished" />
+      <translation>Breite außerhalb des gültigen Bereichs: die Position lässt sich nicht auf der Erde verorten.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="77" />
       <source>No fine elevation data at the station: its terrain correction comes from the regional raster alone.</source>
-      <translation type="unfinished" />
+      <translation>Keine feinen Höhendaten an der Station: ihre Geländekorrektion stammt allein aus dem regionalen Raster.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="44" />
       <source>No geoid height at the station: its heights cannot be converted between datums.</source>
-      <translation type="unfinished" />
+      <translation>Keine Geoidhöhe an der Station: ihre Höhen können nicht zwischen Höhenbezugssystemen umgerechnet werden.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="63" />
       <source>No instrument height given for this reading: 0 m used.</source>
-      <translation type="unfinished" />
+      <translation>Keine Instrumentenhöhe für diese Ablesung angegeben: 0 m verwendet.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="27" />
       <source>No observed gravity: no anomaly computed.</source>
-      <translation type="unfinished" />
+      <translation>Keine gemessene Schwere: keine Anomalie berechnet.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="28" />
       <source>No station height: no anomaly computed.</source>
-      <translation type="unfinished" />
+      <translation>Keine Stationshöhe: keine Anomalie berechnet.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="45" />
       <source>No terrain correction for this station: no complete Bouguer anomaly.</source>
-      <translation type="unfinished" />
+      <translation>Keine Geländekorrektion für diese Station: keine vollständige Bouguer-Anomalie.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="70" />
       <source>No usable reading of this station: no observed gravity.</source>
-      <translation type="unfinished" />
+      <translation>Keine verwendbare Ablesung dieser Station: keine gemessene Schwere.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="69" />
       <source>Not connected through any loop to a station of known gravity.</source>
-      <translation type="unfinished" />
+      <translation>Über keine Schleife mit einer Station bekannter Schwere verbunden.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="37" />
       <source>Observed gravity outside Earth's range (975000-984000 mGal) after units: no anomaly computed.</source>
-      <translation type="unfinished" />
+      <translation>Gemessene Schwere außerhalb des Bereichs der Erde (975000-984000 mGal) nach Einheitenumrechnung: keine Anomalie berechnet.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="71" />
       <source>One reading only: no check on this station's value.</source>
-      <translation type="unfinished" />
+      <translation>Nur eine Ablesung: keine Kontrolle des Wertes dieser Station.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="53" />
       <source>Ring-and-sector: no elevation data at the station, so the zones finer than a DEM cell count as flat.</source>
-      <translation type="unfinished" />
+      <translation>Ringe und Sektoren: keine Höhendaten an der Station, daher gelten die Zonen, die feiner als eine DGM-Zelle sind, als eben.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="61" />
       <source>Same station and time as an earlier row: this copy is left out.</source>
-      <translation type="unfinished" />
+      <translation>Gleiche Station und Zeit wie eine frühere Zeile: diese Kopie wird ausgelassen.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="49" />
       <source>Some ring-and-sector compartments had no elevation data and count as flat.</source>
-      <translation type="unfinished" />
+      <translation>Einige Kompartimente der Ringe und Sektoren hatten keine Höhendaten und gelten als eben.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="41" />
       <source>Station height disagrees with the DEM by more than the local relief explains (see dem_diff).</source>
-      <translation type="unfinished" />
+      <translation>Die Stationshöhe weicht stärker vom DGM ab, als das örtliche Relief erklärt (siehe dem_diff).</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="29" />
       <source>Station height taken from the DEM (the layer gave none).</source>
-      <translation type="unfinished" />
+      <translation>Stationshöhe aus dem DGM entnommen (der Layer enthielt keine).</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="47" />
       <source>The elevation raster has no data at the station: no terrain correction.</source>
-      <translation type="unfinished" />
+      <translation>Das Höhenraster hat an der Station keine Daten: keine Geländekorrektion.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="48" />
       <source>The elevation rasters do not cover the whole correction area (see tc_cover).</source>
-      <translation type="unfinished" />
+      <translation>Die Höhenraster decken nicht das ganze Korrektionsgebiet ab (siehe tc_cover).</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="73" />
       <source>The elevation rasters lack data over part of the inner zone (see the inner coverage).</source>
-      <translation type="unfinished" />
+      <translation>Den Höhenrastern fehlen Daten in einem Teil der Innenzone (siehe die innere Abdeckung).</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="50" />
       <source>The fine elevation raster has no data near the station: the regional raster filled those cells.</source>
-      <translation type="unfinished" />
+      <translation>Das feine Höhenraster hat nahe der Station keine Daten: das regionale Raster hat diese Zellen gefüllt.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="67" />
       <source>The loop occupies its base once only: no closure, drift not from the base.</source>
-      <translation type="unfinished" />
+      <translation>Die Schleife besetzt ihre Basis nur einmal: kein Schleifenschluss, Drift nicht aus der Basis.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="68" />
       <source>The loop's drift could not be determined from its readings: none applied.</source>
-      <translation type="unfinished" />
+      <translation>Die Drift der Schleife konnte aus ihren Ablesungen nicht bestimmt werden: keine angebracht.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="31" />
       <source>The position could not be transformed to latitude and longitude.</source>
-      <translation type="unfinished" />
+      <translation>Die Position konnte nicht in geographische Breite und Länge transformiert werden.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="60" />
       <source>The reading is empty or not a number: left out.</source>
-      <translation type="unfinished" />
+      <translation>Die Ablesung ist leer oder keine Zahl: ausgelassen.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="59" />
       <source>The reading names a station that is not in the station layer: left out.</source>
-      <translation type="unfinished" />
+      <translation>Die Ablesung nennt eine Station, die nicht im Stationslayer ist: ausgelassen.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="66" />
       <source>The reading was left out of the final adjustment (outlier second pass).</source>
-      <translation type="unfinished" />
+      <translation>Die Ablesung wurde in der abschließenden Ausgleichung ausgelassen (Ausreißer, zweiter Durchgang).</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="65" />
       <source>The reading's residual exceeds 3 standard errors.</source>
-      <translation type="unfinished" />
+      <translation>Das Residuum der Ablesung übersteigt 3 Standardfehler.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="26" />
       <source>The station has no point geometry.</source>
-      <translation type="unfinished" />
+      <translation>Die Station hat keine Punktgeometrie.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="64" />
       <source>The station has no usable position for the tide: its readings are left out.</source>
-      <translation type="unfinished" />
+      <translation>Die Station hat keine verwendbare Position für die Gezeiten: ihre Ablesungen werden ausgelassen.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="34" />
       <source>The station is a multi-part point whose parts lie apart: its position is ambiguous.</source>
-      <translation type="unfinished" />
+      <translation>Die Station ist ein Multipunkt, dessen Teile auseinanderliegen: ihre Position ist mehrdeutig.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="56" />
       <source>The station lies outside the anomaly raster or next to blank cells: no regional or residual value.</source>
-      <translation type="unfinished" />
+      <translation>Die Station liegt außerhalb des Anomalierasters oder neben leeren Zellen: kein Regional- oder Residualwert.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="46" />
       <source>The station lies outside the elevation raster: no terrain correction.</source>
-      <translation type="unfinished" />
+      <translation>Die Station liegt außerhalb des Höhenrasters: keine Geländekorrektion.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="62" />
       <source>The time is earlier than a previous row of the same loop: check it.</source>
-      <translation type="unfinished" />
+      <translation>Die Zeit liegt vor einer vorherigen Zeile derselben Schleife: bitte prüfen.</translation>
     </message>
     <message>
       <location filename="../plugin/flags.py" line="74" />
       <source>With water, the terrain correction uses the reference (median) density, not this station's.</source>
-      <translation type="unfinished" />
+      <translation>Mit Wasser verwendet die Geländekorrektion die Bezugsdichte (Median), nicht die dieser Station.</translation>
     </message>
   </context>
   <context>
@@ -1485,37 +1485,37 @@
     <message>
       <location filename="../plugin/readings_table.py" line="112" />
       <source> and {} more</source>
-      <translation type="unfinished" />
+      <translation> und {} weitere</translation>
     </message>
     <message>
       <location filename="../plugin/readings_table.py" line="64" />
       <source>Cancelled by the user.</source>
-      <translation type="unfinished" />
+      <translation>Vom Benutzer abgebrochen.</translation>
     </message>
     <message>
       <location filename="../plugin/readings_table.py" line="148" />
       <source>Row {} of the calibration table has no number in its field {}.</source>
-      <translation type="unfinished" />
+      <translation>Zeile {} der Kalibriertabelle hat keine Zahl in ihrem Feld {}.</translation>
     </message>
     <message>
       <location filename="../plugin/readings_table.py" line="154" />
       <source>The calibration table cannot be used: {}.</source>
-      <translation type="unfinished" />
+      <translation>Die Kalibriertabelle kann nicht verwendet werden: {}.</translation>
     </message>
     <message>
       <location filename="../plugin/readings_table.py" line="137" />
       <source>The calibration table needs the fields counter, mgal and factor; it has {}.</source>
-      <translation type="unfinished" />
+      <translation>Die Kalibriertabelle braucht die Felder counter, mgal und factor; sie hat {}.</translation>
     </message>
     <message>
       <location filename="../plugin/readings_table.py" line="109" />
       <source>The readings table has no rows: there is nothing to process.</source>
-      <translation type="unfinished" />
+      <translation>Die Tabelle der Ablesungen hat keine Zeilen: es gibt nichts zu verarbeiten.</translation>
     </message>
     <message>
       <location filename="../plugin/readings_table.py" line="114" />
       <source>The time of row(s) {}{} of the readings cannot be read. Accepted forms: {}, or a date-time field.</source>
-      <translation type="unfinished" />
+      <translation>Die Zeit der Zeile(n) {}{} der Ablesungen kann nicht gelesen werden. Zulässige Formen: {} oder ein Datum/Zeit-Feld.</translation>
     </message>
   </context>
   <context>
@@ -1528,208 +1528,208 @@
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="104" />
       <source>Anomaly raster (mGal)</source>
-      <translation type="unfinished" />
+      <translation>Anomalieraster (mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="229" />
       <location filename="../plugin/toolbox/regional_residual.py" line="308" />
       <source>Cancelled by the user.</source>
-      <translation type="unfinished" />
+      <translation>Vom Benutzer abgebrochen.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="164" />
       <source>Choose the stations to sample, or leave the station output empty.</source>
-      <translation type="unfinished" />
+      <translation>Wählen Sie die abzutastenden Stationen oder lassen Sie die Stationsausgabe leer.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="129" />
       <source>Continuation height (m)</source>
-      <translation type="unfinished" />
+      <translation>Fortsetzungshöhe (m)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="320" />
       <source>Could not write a station to the output layer.</source>
-      <translation type="unfinished" />
+      <translation>Eine Station konnte nicht in den Ausgabelayer geschrieben werden.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="123" />
       <source>Least squares</source>
-      <translation type="unfinished" />
+      <translation>Kleinste Quadrate</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="74" />
       <source>Maps</source>
-      <translation type="unfinished" />
+      <translation>Karten</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="134" />
       <source>Padding on each side (fraction of the grid size)</source>
-      <translation type="unfinished" />
+      <translation>Randerweiterung je Seite (Anteil der Rastergröße)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="109" />
       <source>Polynomial trend surface</source>
-      <translation type="unfinished" />
+      <translation>Polynomiale Trendfläche</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="251" />
       <source>Regional</source>
-      <translation type="unfinished" />
+      <translation>Regional</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="68" />
       <source>Regional and residual anomaly (trend surface or upward continuation)</source>
-      <translation type="unfinished" />
+      <translation>Regional- und Residualanomalie (Trendfläche oder Feldfortsetzung nach oben)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="144" />
       <source>Regional anomaly</source>
-      <translation type="unfinished" />
+      <translation>Regionalanomalie</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="273" />
       <source>Regional by {}: {} cells; residual from {:.3f} to {:.3f} mGal (rms {:.3f}).</source>
-      <translation type="unfinished" />
+      <translation>Regionalfeld durch {}: {} Zellen; Residuum von {:.3f} bis {:.3f} mGal (RMS {:.3f}).</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="108" />
       <source>Regional from</source>
-      <translation type="unfinished" />
+      <translation>Regionalfeld aus</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="252" />
       <source>Residual</source>
-      <translation type="unfinished" />
+      <translation>Residual</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="145" />
       <source>Residual anomaly</source>
-      <translation type="unfinished" />
+      <translation>Residualanomalie</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="123" />
       <source>Robust, Huber weights</source>
-      <translation type="unfinished" />
+      <translation>Robust, Huber-Gewichte</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="123" />
       <source>Robust, Tukey biweight</source>
-      <translation type="unfinished" />
+      <translation>Robust, Tukey-Biweight</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="77" />
       <source>Splits an anomaly raster into a regional and a residual raster.</source>
-      <translation type="unfinished" />
+      <translation>Zerlegt ein Anomalieraster in ein Regional- und ein Residualraster.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="152" />
       <source>Stations sampled</source>
-      <translation type="unfinished" />
+      <translation>Abgetastete Stationen (Anzahl)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="141" />
       <source>Stations to sample (optional)</source>
-      <translation type="unfinished" />
+      <translation>Abzutastende Stationen (optional)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="148" />
       <source>Stations with regional and residual</source>
-      <translation type="unfinished" />
+      <translation>Stationen mit Regional- und Residualwert</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="205" />
       <source>The anomaly raster has no cell with a value.</source>
-      <translation type="unfinished" />
+      <translation>Das Anomalieraster hat keine Zelle mit einem Wert.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="174" />
       <source>The anomaly raster has no coordinate reference system.</source>
-      <translation type="unfinished" />
+      <translation>Das Anomalieraster hat kein Koordinatenbezugssystem.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="177" />
       <source>The anomaly raster is in a geographic CRS ({}), in degrees; both methods need cells in metres. Warp it to a projected CRS first.</source>
-      <translation type="unfinished" />
+      <translation>Das Anomalieraster liegt in einem geographischen KBS ({}) in Grad vor; beide Verfahren brauchen Zellen in Metern. Transformieren Sie es zuerst in ein projiziertes KBS.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="184" />
       <source>The anomaly raster is rotated; warp it to a north-up grid first.</source>
-      <translation type="unfinished" />
+      <translation>Das Anomalieraster ist gedreht; transformieren Sie es zuerst in ein nordorientiertes Gitter.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="160" />
       <source>The continuation height must be more than 0 m (upward).</source>
-      <translation type="unfinished" />
+      <translation>Die Fortsetzungshöhe muss größer als 0 m sein (nach oben).</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="227" />
       <source>The raster cannot be separated: {}</source>
-      <translation type="unfinished" />
+      <translation>Das Raster kann nicht zerlegt werden: {}</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="170" />
       <source>The raster {} is not a GDAL raster; save it as a GeoTIFF first.</source>
-      <translation type="unfinished" />
+      <translation>Das Raster {} ist kein GDAL-Raster; speichern Sie es zuerst als GeoTIFF.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="295" />
       <source>The stations already have a field {}; its values are replaced in the output copy.</source>
-      <translation type="unfinished" />
+      <translation>Die Stationen haben bereits ein Feld {}; seine Werte werden in der Ausgabekopie ersetzt.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="222" />
       <source>Trend coefficients per metre about ({:.1f}, {:.1f}): {}.</source>
-      <translation type="unfinished" />
+      <translation>Trendkoeffizienten je Meter um ({:.1f}, {:.1f}): {}.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="122" />
       <source>Trend surface fit</source>
-      <translation type="unfinished" />
+      <translation>Anpassung der Trendfläche</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="115" />
       <source>Trend surface order (1-3)</source>
-      <translation type="unfinished" />
+      <translation>Ordnung der Trendfläche (1-3)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="109" />
       <source>Upward continuation (FFT)</source>
-      <translation type="unfinished" />
+      <translation>Feldfortsetzung nach oben (FFT)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="80" />
       <source>gravity,anomaly,regional,residual,trend surface,polynomial,upward continuation,FFT</source>
-      <translation type="unfinished" />
+      <translation>Schwere,Anomalie,Regionalfeld,Residualfeld,Trendfläche,Polynom,Feldfortsetzung nach oben,FFT</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="218" />
       <source>least squares</source>
-      <translation type="unfinished" />
+      <translation>kleinste Quadrate</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="219" />
       <source>trend surface of order {} ({})</source>
-      <translation type="unfinished" />
+      <translation>Trendfläche der Ordnung {} ({})</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="213" />
       <source>upward continuation by {:g} m</source>
-      <translation type="unfinished" />
+      <translation>Feldfortsetzung nach oben um {:g} m</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="260" />
       <source>{} anomaly (mGal)</source>
-      <translation type="unfinished" />
+      <translation>{}anomalie (mGal)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="324" />
       <source>{} of {} stations lie outside the raster or next to blank cells (qc_flag outside_grid).</source>
-      <translation type="unfinished" />
+      <translation>{} von {} Stationen liegen außerhalb des Rasters oder neben leeren Zellen (qc_flag outside_grid).</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/regional_residual.py" line="261" />
       <source>{} part of {} by {}; values in mGal; regional + residual = input.</source>
-      <translation type="unfinished" />
+      <translation>{}anteil von {} durch {}; Werte in mGal; Regionalfeld + Residualfeld = Eingabe.</translation>
     </message>
   </context>
   <context>
@@ -1737,37 +1737,37 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="81" />
       <source>A density of {:g} kg/m³ ({}) is 1,000 times too large (g/cm³ values multiplied twice, or g/m³?): densities must lie between {:g} and {:g} kg/m³; enter {:g}.</source>
-      <translation type="unfinished" />
+      <translation>Eine Dichte von {:g} kg/m³ ({}) ist 1.000-mal zu groß (g/cm³-Werte doppelt multipliziert oder g/m³?): Dichten müssen zwischen {:g} und {:g} kg/m³ liegen; geben Sie {:g} ein.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="85" />
       <source>A density of {:g} kg/m³ ({}) is outside the accepted range {:g}-{:g} kg/m³.</source>
-      <translation type="unfinished" />
+      <translation>Eine Dichte von {:g} kg/m³ ({}) liegt außerhalb des zulässigen Bereichs {:g}-{:g} kg/m³.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="76" />
       <source>A density of {:g} kg/m³ ({}) looks like g/cm³: densities must lie between {:g} and {:g} kg/m³; enter {:g} for {:g} g/cm³.</source>
-      <translation type="unfinished" />
+      <translation>Eine Dichte von {:g} kg/m³ ({}) sieht nach g/cm³ aus: Dichten müssen zwischen {:g} und {:g} kg/m³ liegen; geben Sie {:g} für {:g} g/cm³ ein.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="184" />
       <source>A geoid height field or raster is given but HEIGHT_DATUM does not use it: set HEIGHT_DATUM to 'orthometric, geoid height from GEOID_FIELD or GEOID_RASTER', or clear them.</source>
-      <translation type="unfinished" />
+      <translation>Ein Feld oder Raster der Geoidhöhe ist angegeben, aber HEIGHT_DATUM verwendet es nicht: setzen Sie HEIGHT_DATUM auf 'orthometrisch, Geoidhöhe aus GEOID_FIELD oder GEOID_RASTER' oder leeren Sie beide.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="340" />
       <source>Cancelled by the user.</source>
-      <translation type="unfinished" />
+      <translation>Vom Benutzer abgebrochen.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="130" />
       <source>Centimetres</source>
-      <translation type="unfinished" />
+      <translation>Zentimeter</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="166" />
       <source>Elevation raster heights are above</source>
-      <translation type="unfinished" />
+      <translation>Höhen des Höhenrasters beziehen sich auf</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="130" />
@@ -1777,12 +1777,12 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="153" />
       <source>Geoid height field (m, geoid above the ellipsoid)</source>
-      <translation type="unfinished" />
+      <translation>Feld der Geoidhöhe (m, Geoid über dem Ellipsoid)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="161" />
       <source>Geoid height raster (m, geoid above the ellipsoid)</source>
-      <translation type="unfinished" />
+      <translation>Raster der Geoidhöhe (m, Geoid über dem Ellipsoid)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="47" />
@@ -1797,7 +1797,7 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="179" />
       <source>HEIGHT_DATUM says the geoid height comes from a field or a raster: choose exactly one of GEOID_FIELD and GEOID_RASTER.</source>
-      <translation type="unfinished" />
+      <translation>HEIGHT_DATUM besagt, dass die Geoidhöhe aus einem Feld oder Raster stammt: wählen Sie genau eines von GEOID_FIELD und GEOID_RASTER.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="129" />
@@ -1822,7 +1822,7 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="384" />
       <source>Provenance is recorded in GeoPackage and GeoTIFF outputs only; this output has none.</source>
-      <translation type="unfinished" />
+      <translation>Herkunftsangaben werden nur in GeoPackage- und GeoTIFF-Ausgaben aufgezeichnet; diese Ausgabe hat keine.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="216" />
@@ -1842,7 +1842,7 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="147" />
       <source>Station heights are</source>
-      <translation type="unfinished" />
+      <translation>Höhenbezug der Stationshöhen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="258" />
@@ -1857,42 +1857,42 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="392" />
       <source>The provenance record could not be written: {}</source>
-      <translation type="unfinished" />
+      <translation>Die Herkunftsangaben konnten nicht geschrieben werden: {}</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="318" />
       <source>elevation raster</source>
-      <translation type="unfinished" />
+      <translation>Höhenraster</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="320" />
       <source>geoid raster</source>
-      <translation type="unfinished" />
+      <translation>Geoidraster</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="323" />
       <source>output station layer</source>
-      <translation type="unfinished" />
+      <translation>Ausgabe-Stationslayer</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="319" />
       <source>regional elevation raster</source>
-      <translation type="unfinished" />
+      <translation>regionales Höhenraster</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="316" />
       <source>station layer</source>
-      <translation type="unfinished" />
+      <translation>Stationslayer</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="199" />
       <source>the field {}</source>
-      <translation type="unfinished" />
+      <translation>Feld {}</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="207" />
       <source>the raster {}</source>
-      <translation type="unfinished" />
+      <translation>Raster {}</translation>
     </message>
   </context>
   <context>
@@ -1913,32 +1913,32 @@
     <message>
       <location filename="../plugin/outputs.py" line="111" />
       <source>Cannot write in the folder {} of the {}: {}</source>
-      <translation type="unfinished" />
+      <translation>Im Ordner {} ({}) kann nicht geschrieben werden: {}</translation>
     </message>
     <message>
       <location filename="../plugin/outputs.py" line="140" />
       <source>Could not move the finished output into place at {}: {}</source>
-      <translation type="unfinished" />
+      <translation>Die fertige Ausgabe konnte nicht nach {} verschoben werden: {}</translation>
     </message>
     <message>
       <location filename="../plugin/outputs.py" line="99" />
       <source>The folder {} of the {} does not exist; create it or choose another.</source>
-      <translation type="unfinished" />
+      <translation>Der Ordner {} ({}) existiert nicht; legen Sie ihn an oder wählen Sie einen anderen.</translation>
     </message>
     <message>
       <location filename="../plugin/outputs.py" line="103" />
       <source>The folder {} of the {} is not writable; choose a folder you may write to.</source>
-      <translation type="unfinished" />
+      <translation>Der Ordner {} ({}) ist nicht beschreibbar; wählen Sie einen Ordner, in den Sie schreiben dürfen.</translation>
     </message>
     <message>
       <location filename="../plugin/outputs.py" line="68" />
       <source>The {} and the {} are both set to {}; choose two different files.</source>
-      <translation type="unfinished" />
+      <translation>„{}“ und „{}“ sind beide auf {} gesetzt; wählen Sie zwei verschiedene Dateien.</translation>
     </message>
     <message>
       <location filename="../plugin/outputs.py" line="59" />
       <source>The {} would be written to {}, which is the {}: writing it would destroy that input. Choose another file name.</source>
-      <translation type="unfinished" />
+      <translation>„{}“ würde nach {} geschrieben, in die Datei der Eingabe „{}“: das Schreiben würde diese Eingabe zerstören. Wählen Sie einen anderen Dateinamen.</translation>
     </message>
   </context>
   <context>
@@ -1946,27 +1946,27 @@
     <message>
       <location filename="../plugin/shipped_models.py" line="84" />
       <source>Model {} skipped: an algorithm named {} exists already.</source>
-      <translation type="unfinished" />
+      <translation>Modell {} übersprungen: ein Algorithmus namens {} existiert bereits.</translation>
     </message>
     <message>
       <location filename="../plugin/shipped_models.py" line="96" />
       <source>Model {} skipped: it needs {}, which is not installed.</source>
-      <translation type="unfinished" />
+      <translation>Modell {} übersprungen: es braucht {}, das nicht installiert ist.</translation>
     </message>
     <message>
       <location filename="../plugin/shipped_models.py" line="80" />
       <source>Model {} skipped: its file name must be lower-case letters, digits and underscores to serve as an algorithm name.</source>
-      <translation type="unfinished" />
+      <translation>Modell {} übersprungen: sein Dateiname darf nur Kleinbuchstaben, Ziffern und Unterstriche enthalten, um als Algorithmusname zu dienen.</translation>
     </message>
     <message>
       <location filename="../plugin/shipped_models.py" line="90" />
       <source>Model {} skipped: the file could not be read as a Processing model.</source>
-      <translation type="unfinished" />
+      <translation>Modell {} übersprungen: die Datei konnte nicht als Processing-Modell gelesen werden.</translation>
     </message>
     <message>
       <location filename="../plugin/shipped_models.py" line="58" />
       <source>Models</source>
-      <translation type="unfinished" />
+      <translation>Modelle</translation>
     </message>
   </context>
   <context>
@@ -1974,119 +1974,119 @@
     <message>
       <location filename="../plugin/heights.py" line="55" />
       <source>EGM96 geoid (most global DEMs)</source>
-      <translation type="unfinished" />
+      <translation>EGM96-Geoid (die meisten globalen DGM)</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="56" />
       <source>Ellipsoid</source>
-      <translation type="unfinished" />
+      <translation>Ellipsoid</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="40" />
       <source>Ellipsoidal heights (e.g. from GNSS)</source>
-      <translation type="unfinished" />
+      <translation>Ellipsoidische Höhen (z. B. aus GNSS)</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="272" />
       <source>Give a regional elevation raster (REGIONAL_DEM) reaching {:.1f} km around every station.</source>
-      <translation type="unfinished" />
+      <translation>Geben Sie ein regionales Höhenraster (REGIONAL_DEM) an, das {:.1f} km um jede Station reicht.</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="41" />
       <source>Orthometric heights above the EGM96 geoid</source>
-      <translation type="unfinished" />
+      <translation>Orthometrische Höhen über dem EGM96-Geoid</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="42" />
       <source>Orthometric heights, geoid height from GEOID_FIELD or GEOID_RASTER</source>
-      <translation type="unfinished" />
+      <translation>Orthometrische Höhen, Geoidhöhe aus GEOID_FIELD oder GEOID_RASTER</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="57" />
       <source>Same as the station heights</source>
-      <translation type="unfinished" />
+      <translation>Wie die Stationshöhen</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="148" />
       <source>The elevation raster looks like heights in {} (about {:.4g} times the station heights in metres: DEM median {:.1f} against {:.1f} m). Convert it to metres (Raster Calculator: value × {}) and run again.</source>
-      <translation type="unfinished" />
+      <translation>Das Höhenraster scheint Höhen in {} zu enthalten (etwa das {:.4g}-Fache der Stationshöhen in Metern: DGM-Median {:.1f} gegenüber {:.1f} m). Rechnen Sie es in Meter um (Rasterrechner: Wert × {}) und starten Sie erneut.</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="274" />
       <source>The regional elevation raster does not reach {:.1f} km around these stations; extend it.</source>
-      <translation type="unfinished" />
+      <translation>Das regionale Höhenraster reicht nicht {:.1f} km um diese Stationen; erweitern Sie es.</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="142" />
       <source>The station heights look like metres declared in another unit (median {:.1f} m after conversion against a DEM median of {:.1f} m): set HEIGHT_UNITS to metres.</source>
-      <translation type="unfinished" />
+      <translation>Die Stationshöhen sehen aus wie Meter, die in einer anderen Einheit angegeben wurden (Median {:.1f} m nach Umrechnung gegenüber einem DGM-Median von {:.1f} m): setzen Sie HEIGHT_UNITS auf Meter.</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="136" />
       <source>The station heights look like {} read as metres (median {:.1f} against a DEM median of {:.1f} m at the stations): set HEIGHT_UNITS to {}.</source>
-      <translation type="unfinished" />
+      <translation>Die Stationshöhen sehen aus wie als Meter gelesene {} (Median {:.1f} gegenüber einem DGM-Median von {:.1f} m an den Stationen): setzen Sie HEIGHT_UNITS auf {}.</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="169" />
       <source>The {} {} cannot be read to the end (damaged or truncated file?): {}</source>
-      <translation type="unfinished" />
+      <translation>{} {} kann nicht bis zum Ende gelesen werden (beschädigte oder abgeschnittene Datei?): {}</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="186" />
       <source>The {} {} goes down to {:.6g}, deeper than any point on Earth in metres: an untagged void value or a unit error. Set its NoData value or convert it to metres.</source>
-      <translation type="unfinished" />
+      <translation>{} {} reicht hinab bis {:.6g}, tiefer als jeder Punkt der Erde in Metern: ein nicht gekennzeichneter Leerwert oder ein Einheitenfehler. Setzen Sie seinen NoData-Wert oder rechnen Sie es in Meter um.</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="175" />
       <source>The {} {} has cells of {:.6g} but no NoData value: they look like voids and would be taken as heights. Set the raster's NoData value to {:.6g} (Raster &gt; Conversion &gt; Translate, 'Assign a specified NoData value') and run again.</source>
-      <translation type="unfinished" />
+      <translation>{} {} hat Zellen mit {:.6g}, aber keinen NoData-Wert: sie sehen wie Lücken aus und würden als Höhen genommen. Setzen Sie den NoData-Wert des Rasters auf {:.6g} (Raster &gt; Konvertierung &gt; Übersetzen, 'Einen bestimmten NoData-Wert zuweisen') und starten Sie erneut.</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="166" />
       <source>The {} {} holds no valid heights (every cell is NoData).</source>
-      <translation type="unfinished" />
+      <translation>{} {} enthält keine gültigen Höhen (jede Zelle ist NoData).</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="181" />
       <source>The {} {} reaches {:.6g}, higher than any point on Earth in metres: it looks like feet or centimetres. Convert it to metres and run again.</source>
-      <translation type="unfinished" />
+      <translation>{} {} erreicht {:.6g}, höher als jeder Punkt der Erde in Metern: es sieht nach Fuß oder Zentimetern aus. Rechnen Sie es in Meter um und starten Sie erneut.</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="231" />
       <source>above</source>
-      <translation type="unfinished" />
+      <translation>über</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="231" />
       <source>below</source>
-      <translation type="unfinished" />
+      <translation>unter</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="135" />
       <location filename="../plugin/heights.py" line="146" />
       <source>centimetres</source>
-      <translation type="unfinished" />
+      <translation>Zentimeter</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="135" />
       <location filename="../plugin/heights.py" line="146" />
       <source>feet</source>
-      <translation type="unfinished" />
+      <translation>Fuß</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="233" />
       <source>{:.0%} of the stations lie about one geoid height ({:.1f} m) {} the DEM: a datum setting is likely wrong. Try {} = '{}'. (Either the station heights or the DEM are on another datum than declared; see docs/datums.md.)</source>
-      <translation type="unfinished" />
+      <translation>{:.0%} der Stationen liegen etwa eine Geoidhöhe ({:.1f} m) {} dem DGM: wahrscheinlich ist ein Höhenbezug falsch eingestellt. Versuchen Sie {} = '{}'. (Entweder die Stationshöhen oder das DGM beziehen sich auf ein anderes Höhenbezugssystem als angegeben; siehe docs/datums.md.)</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="218" />
       <source>{} station(s) differ from the DEM by more than the local relief explains (largest {:.1f} m; flagged height_dem_mismatch, see dem_diff).</source>
-      <translation type="unfinished" />
+      <translation>{} Station(en) weichen stärker vom DGM ab, als das örtliche Relief erklärt (größte Abweichung {:.1f} m; markiert mit height_dem_mismatch, siehe dem_diff).</translation>
     </message>
     <message>
       <location filename="../plugin/heights.py" line="277" />
       <source>{} station(s) have elevation data over only part of the correction area (lowest tc_cover {:.2f}); their terrain correction misses the far terrain (flagged tc_partial). {}</source>
-      <translation type="unfinished" />
+      <translation>{} Station(en) haben Höhendaten nur über einen Teil des Korrektionsgebiets (kleinstes tc_cover {:.2f}); ihrer Geländekorrektion fehlt das ferne Gelände (markiert mit tc_partial). {}</translation>
     </message>
   </context>
   <context>
@@ -2105,7 +2105,7 @@
     <message>
       <location filename="../plugin/stations.py" line="260" />
       <source>Station {} has coordinates ({:.6g}, {:.6g}) that look like longitude and latitude, but the layer is declared in {} (units of metres). Assign the layer's true CRS (for example EPSG:4326) in Layer Properties &gt; Source, or reproject it.</source>
-      <translation type="unfinished" />
+      <translation>Station {} hat Koordinaten ({:.6g}, {:.6g}), die nach geographischer Länge und Breite aussehen, aber der Layer ist in {} (Einheit Meter) angegeben. Weisen Sie dem Layer sein tatsächliches KBS zu (zum Beispiel EPSG:4326) unter Layereigenschaften &gt; Quelle, oder projizieren Sie ihn um.</translation>
     </message>
     <message>
       <location filename="../plugin/stations.py" line="143" />
@@ -2120,12 +2120,12 @@
     <message>
       <location filename="../plugin/stations.py" line="298" />
       <source>The station layer holds {} geometries; stations must be points. Convert it first (for example Vector &gt; Geometry Tools &gt; Centroids) or choose the point layer.</source>
-      <translation type="unfinished" />
+      <translation>Der Stationslayer enthält {}-Geometrien; Stationen müssen Punkte sein. Wandeln Sie ihn zuerst um (zum Beispiel Vektor &gt; Geometriewerkzeuge &gt; Zentroide) oder wählen Sie den Punktlayer.</translation>
     </message>
     <message>
       <location filename="../plugin/stations.py" line="281" />
       <source>{} station(s) lie outside the area of use of the layer's CRS {} (first: station {} at {:.6g}, {:.6g}). Their latitudes would be wrong. Check the coordinates and assign the layer's true CRS (Layer Properties &gt; Source).</source>
-      <translation type="unfinished" />
+      <translation>{} Station(en) liegen außerhalb des Anwendungsbereichs des Layer-KBS {} (erste: Station {} bei {:.6g}, {:.6g}). Ihre Breiten wären falsch. Prüfen Sie die Koordinaten und weisen Sie dem Layer sein tatsächliches KBS zu (Layereigenschaften &gt; Quelle).</translation>
     </message>
   </context>
   <context>
@@ -2138,97 +2138,97 @@
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="94" />
       <source>Anomaly grid</source>
-      <translation type="unfinished" />
+      <translation>Anomalieraster</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="164" />
       <source>Anomaly map</source>
-      <translation type="unfinished" />
+      <translation>Anomaliekarte</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="106" />
       <source>Cancelled: no report written.</source>
-      <translation type="unfinished" />
+      <translation>Abgebrochen: kein Bericht geschrieben.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="124" />
       <source>Choose a file for the report.</source>
-      <translation type="unfinished" />
+      <translation>Wählen Sie eine Datei für den Bericht.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="97" />
       <source>Contours</source>
-      <translation type="unfinished" />
+      <translation>Isolinien</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="154" />
       <source>Coordinates: {} ({}).</source>
-      <translation type="unfinished" />
+      <translation>Koordinaten: {} ({}).</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="166" />
       <source>Gridded anomaly with contours and stations (mGal).</source>
-      <translation type="unfinished" />
+      <translation>Interpolierte Anomalie mit Isolinien und Stationen (mGal).</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="101" />
       <source>HTML files (*.html *.htm)</source>
-      <translation type="unfinished" />
+      <translation>HTML-Dateien (*.html *.htm)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="61" />
       <source>Maps</source>
-      <translation type="unfinished" />
+      <translation>Karten</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="85" />
       <source>Reduced stations</source>
-      <translation type="unfinished" />
+      <translation>Reduzierte Stationen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="160" />
       <source>Rendering the anomaly map…</source>
-      <translation type="unfinished" />
+      <translation>Anomaliekarte wird gezeichnet…</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="101" />
       <source>Report</source>
-      <translation type="unfinished" />
+      <translation>Bericht</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="182" />
       <source>Report written to {} ({} stations).</source>
-      <translation type="unfinished" />
+      <translation>Bericht nach {} geschrieben ({} Stationen).</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="90" />
       <source>Station height field (m)</source>
-      <translation type="unfinished" />
+      <translation>Feld der Stationshöhe (m)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="55" />
       <source>Survey report (HTML)</source>
-      <translation type="unfinished" />
+      <translation>Messgebietsbericht (HTML)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="151" />
       <source>The station layer has no features: nothing to report.</source>
-      <translation type="unfinished" />
+      <translation>Der Stationslayer hat keine Objekte: es gibt nichts zu berichten.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="117" />
       <source>The station layer has none of the fields faa, sba or cba: run the Bouguer reduction (reliefgravity:bouguerreduction) on it first and report on its output.</source>
-      <translation type="unfinished" />
+      <translation>Der Stationslayer hat keines der Felder faa, sba oder cba: führen Sie zuerst die Bouguer-Reduktion (reliefgravity:bouguerreduction) darauf aus und berichten Sie über deren Ausgabe.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="64" />
       <source>Writes one self-contained HTML report of a reduced station layer: runs, flags, maps, plots.</source>
-      <translation type="unfinished" />
+      <translation>Schreibt einen eigenständigen HTML-Bericht über einen reduzierten Stationslayer: Läufe, Markierungen, Karten, Diagramme.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="67" />
       <source>gravity,report,html,bouguer,anomaly,terrain,flags,uncertainty</source>
-      <translation type="unfinished" />
+      <translation>Schwere,Bericht,HTML,Bouguer,Anomalie,Gelände,Markierungen,Unsicherheit</translation>
     </message>
   </context>
   <context>
@@ -2256,7 +2256,7 @@
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="205" />
       <source>Hammer zones: {}</source>
-      <translation type="unfinished" />
+      <translation>Hammer-Zonen: {}</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="139" />
@@ -2271,17 +2271,17 @@
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="221" />
       <source>Ring-and-sector zones {} cover {:.1f} m to {:.2f} km; terrain nearer (except a field-estimated innermost correction) and beyond is not corrected.</source>
-      <translation type="unfinished" />
+      <translation>Die Zonen {} der Ringe und Sektoren decken {:.1f} m bis {:.2f} km ab; näheres Gelände (außer einer im Feld geschätzten Korrektion des innersten Rings) und ferneres wird nicht korrigiert.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="215" />
       <source>Ring-and-sector zones {} reach {:.2f} km; terrain beyond is not corrected.</source>
-      <translation type="unfinished" />
+      <translation>Die Zonen {} der Ringe und Sektoren reichen bis {:.2f} km; Gelände jenseits davon wird nicht korrigiert.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="156" />
       <source>Ring-and-sector: Hammer zones (contiguous letters out of B-M, or a range such as B-M)</source>
-      <translation type="unfinished" />
+      <translation>Ringe und Sektoren: Hammer-Zonen (zusammenhängende Buchstaben aus B-M oder ein Bereich wie B-M)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="148" />
@@ -2326,17 +2326,17 @@
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="228" />
       <source>Zones {} are narrower than a DEM cell: they hold the plane through the station with the DEM's slope there instead of DEM heights.</source>
-      <translation type="unfinished" />
+      <translation>Die Zonen {} sind schmaler als eine DGM-Zelle: sie enthalten die Ebene durch die Station mit der dortigen Neigung des DGM statt der DGM-Höhen.</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="248" />
       <source>elevation raster</source>
-      <translation type="unfinished" />
+      <translation>Höhenraster</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="182" />
       <source>geoid height</source>
-      <translation type="unfinished" />
+      <translation>Geoidhöhe</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="65" />
@@ -2351,7 +2351,7 @@
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="250" />
       <source>regional elevation raster</source>
-      <translation type="unfinished" />
+      <translation>regionales Höhenraster</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="180" />
@@ -2374,12 +2374,12 @@
     <message>
       <location filename="../plugin/terrain_run.py" line="90" />
       <source>Densities from a geology layer need the exact engine: the ring-and-sector method has one density per station. Choose the exact engine or leave DENSITY_LAYER empty.</source>
-      <translation type="unfinished" />
+      <translation>Dichten aus einem Geologielayer brauchen das exakte Verfahren: das Ringe-und-Sektoren-Verfahren hat eine Dichte je Station. Wählen Sie das exakte Verfahren oder lassen Sie DENSITY_LAYER leer.</translation>
     </message>
     <message>
       <location filename="../plugin/terrain_run.py" line="33" />
       <source>No station lies on the {} (raster extent {:.6g}, {:.6g}, {:.6g}, {:.6g} in its own CRS). Check that the raster covers the survey and that both layers have the right CRS.</source>
-      <translation type="unfinished" />
+      <translation>Keine Station liegt auf {} (Rasterausdehnung {:.6g}, {:.6g}, {:.6g}, {:.6g} in seinem eigenen KBS). Prüfen Sie, ob das Raster das Messgebiet abdeckt und beide Layer das richtige KBS haben.</translation>
     </message>
     <message>
       <location filename="../plugin/terrain_run.py" line="101" />
@@ -2389,7 +2389,7 @@
     <message>
       <location filename="../plugin/terrain_run.py" line="181" />
       <source>The elevation rasters stop short of the outer radius for {} station(s): the terrain they miss could add about {:.3f} mGal at worst (station {}; field tc_trunc, an estimate from the relief at the edge of coverage, not a bound). Give a regional DEM reaching {:.0f} m around every station.</source>
-      <translation type="unfinished" />
+      <translation>Die Höhenraster enden für {} Station(en) vor dem Außenradius: das fehlende Gelände könnte im ungünstigsten Fall etwa {:.3f} mGal beitragen (Station {}; Feld tc_trunc, eine Schätzung aus dem Relief am Rand der Abdeckung, keine Schranke). Geben Sie ein regionales DGM an, das {:.0f} m um jede Station reicht.</translation>
     </message>
     <message>
       <location filename="../plugin/terrain_run.py" line="54" />
@@ -2412,42 +2412,42 @@
     <message>
       <location filename="../plugin/uncertainty_run.py" line="63" />
       <source>DEM vertical random error per cell, one sigma (m)</source>
-      <translation type="unfinished" />
+      <translation>Zufälliger Höhenfehler des DGM je Zelle, eine Standardabweichung (m)</translation>
     </message>
     <message>
       <location filename="../plugin/uncertainty_run.py" line="84" />
       <source>Give both bounds of the density interval (DENSITY_LOW and DENSITY_HIGH), or neither.</source>
-      <translation type="unfinished" />
+      <translation>Geben Sie beide Grenzen des Dichteintervalls an (DENSITY_LOW und DENSITY_HIGH) oder keine.</translation>
     </message>
     <message>
       <location filename="../plugin/uncertainty_run.py" line="59" />
       <source>Observed gravity error, one sigma (mGal; a g_sigma field of the input is used instead)</source>
-      <translation type="unfinished" />
+      <translation>Fehler der gemessenen Schwere, eine Standardabweichung (mGal; ein Feld g_sigma der Eingabe wird stattdessen verwendet)</translation>
     </message>
     <message>
       <location filename="../plugin/uncertainty_run.py" line="67" />
       <source>Reduction density, lower bound of its 95 % interval (kg/m³)</source>
-      <translation type="unfinished" />
+      <translation>Reduktionsdichte, untere Grenze ihres 95-%-Intervalls (kg/m³)</translation>
     </message>
     <message>
       <location filename="../plugin/uncertainty_run.py" line="71" />
       <source>Reduction density, upper bound of its 95 % interval (kg/m³)</source>
-      <translation type="unfinished" />
+      <translation>Reduktionsdichte, obere Grenze ihres 95-%-Intervalls (kg/m³)</translation>
     </message>
     <message>
       <location filename="../plugin/uncertainty_run.py" line="55" />
       <source>Station height error field (m; replaces the number where set)</source>
-      <translation type="unfinished" />
+      <translation>Feld des Stationshöhenfehlers (m; ersetzt den Zahlenwert, wo gesetzt)</translation>
     </message>
     <message>
       <location filename="../plugin/uncertainty_run.py" line="51" />
       <source>Station height error, one sigma (m)</source>
-      <translation type="unfinished" />
+      <translation>Fehler der Stationshöhe, eine Standardabweichung (m)</translation>
     </message>
     <message>
       <location filename="../plugin/uncertainty_run.py" line="86" />
       <source>The density interval {} to {} kg/m³ is impossible: the lower bound must be positive and not above the upper bound.</source>
-      <translation type="unfinished" />
+      <translation>Das Dichteintervall {} bis {} kg/m³ ist unmöglich: die untere Grenze muss positiv sein und darf die obere nicht übersteigen.</translation>
     </message>
   </context>
 </TS>
