@@ -134,3 +134,44 @@ def test_plugin_loads_the_translation_of_the_user_locale(tmp_path):
     env.pop("QGIS_CUSTOM_CONFIG_PATH", None)
     completed = subprocess.run([sys.executable, "-c", GERMAN_USER, str(ROOT)], capture_output=True, text=True, env=env, timeout=120)
     assert "Geländekorrektion (Innen- und Außenzone aus Höhenrastern)" in completed.stdout, completed.stdout + completed.stderr
+
+
+def _placeholders(text):
+    """Counter of (index, spec, conversion) for every ``{...}`` field; ``{}`` fields are numbered in order."""
+    import string
+    from collections import Counter
+
+    found, auto = Counter(), 0
+    for _literal_text, name, spec, conversion in string.Formatter().parse(text):
+        if name is None:
+            continue
+        if name == "":
+            name, auto = str(auto), auto + 1
+        found[(name, spec, conversion)] += 1
+    return found
+
+
+def test_every_german_translation_keeps_placeholders_tags_and_parameter_keys():
+    import re
+    import xml.etree.ElementTree as ET
+    from collections import Counter
+
+    checked, problems = 0, []
+    for context in ET.parse(ROOT / "i18n" / "relief_gravity_de.ts").getroot().iter("context"):
+        for message in context.iter("message"):
+            source, translation = message.findtext("source"), message.find("translation")
+            if translation.get("type") == "unfinished" or not translation.text:
+                continue
+            text, checked = translation.text, checked + 1
+            where = f"{context.findtext('name')}: {source[:70]!r}"
+            if _placeholders(source) != _placeholders(text):
+                problems.append(f"{where}: placeholders differ")
+            if Counter(re.findall(r"</?\w+>", source)) != Counter(re.findall(r"</?\w+>", text)):
+                problems.append(f"{where}: HTML tags differ")
+            keys = set(re.findall(r"\b[A-Z][A-Z0-9]*_[A-Z0-9_]+\b", source))
+            if not keys <= set(re.findall(r"\b[A-Z][A-Z0-9]*_[A-Z0-9_]+\b", text)):
+                problems.append(f"{where}: parameter keys lost")
+    assert checked > 100
+    assert not problems, "\n".join(problems)
+    assert _placeholders("{} of {:.1f}") != _placeholders("{:.1f} of {}")
+    assert _placeholders("{} of {}") == _placeholders("{1} von {0}") == _placeholders("{0} von {1}")
