@@ -388,12 +388,12 @@
       <translation>Bouguer-Reduktion (Freiluft-, einfache und vollständige Bouguer-Anomalie)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="547" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="549" />
       <source>Check DENSITY_FIELD_UNITS (kg/m³ or g/cm³).</source>
       <translation>Prüfen Sie DENSITY_FIELD_UNITS (kg/m³ oder g/cm³).</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="324" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="325" />
       <source>Choose a station height field or an elevation raster to sample heights from.</source>
       <translation>Wählen Sie ein Feld der Stationshöhe oder ein Höhenraster, aus dem Höhen entnommen werden.</translation>
     </message>
@@ -428,7 +428,7 @@
       <translation>Gal (1.000 mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="500" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="502" />
       <source>Give densities either per station (DENSITY_FIELD) or from a geology layer (DENSITY_LAYER), not both.</source>
       <translation>Geben Sie Dichten entweder je Station (DENSITY_FIELD) oder aus einem Geologielayer (DENSITY_LAYER) an, nicht beides.</translation>
     </message>
@@ -438,7 +438,7 @@
       <translation>Höhenkorrektion (Freiluft)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="409" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="411" />
       <source>No terrain-correction field and no elevation raster: cba is left empty.</source>
       <translation>Weder Geländekorrektionsfeld noch Höhenraster: cba bleibt leer.</translation>
     </message>
@@ -463,17 +463,17 @@
       <translation>Die gemessene Schwere in {} beträgt {:.6g} mGal (Median), in jeder Einheit weit entfernt von den 975.000-984.000 mGal der Erde: relative Gravimeterablesungen oder eine andere Größe? Die Reduktion braucht die absolute gemessene Schwere.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="416" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="418" />
       <source>Orthometric reduction needs geoid heights: PROJ's EGM96 grid or a geoid field/raster.</source>
       <translation>Die orthometrische Reduktion braucht Geoidhöhen: das EGM96-Gitter von PROJ oder ein Geoidhöhenfeld bzw. -raster.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="281" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="282" />
       <source>Reduce with orthometric heights (legacy practice; the standard uses ellipsoidal heights)</source>
       <translation>Mit orthometrischen Höhen reduzieren (ältere Praxis; der Standard verwendet ellipsoidische Höhen)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="288" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="289" />
       <source>Reduced stations</source>
       <translation>Reduzierte Stationen</translation>
     </message>
@@ -503,12 +503,12 @@
       <translation>Feld der Stationshöhe (leer = aus dem Höhenraster)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="292" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="293" />
       <source>Stations flagged</source>
       <translation>Markierte Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="291" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="292" />
       <source>Stations reduced</source>
       <translation>Reduzierte Stationen (Anzahl)</translation>
     </message>
@@ -528,12 +528,12 @@
       <translation>WGS84 (geschlossene Formel nach Somigliana)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="307" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="308" />
       <source>density</source>
       <translation>Dichte</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="350" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="351" />
       <source>elevation raster</source>
       <translation>Höhenraster</translation>
     </message>
@@ -543,7 +543,7 @@
       <translation>g/cm³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="309" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="310" />
       <source>geoid height</source>
       <translation>Geoidhöhe</translation>
     </message>
@@ -568,32 +568,32 @@
       <translation>mGal</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="305" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="306" />
       <source>observed gravity</source>
       <translation>gemessene Schwere</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="352" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="353" />
       <source>regional elevation raster</source>
       <translation>regionales Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="306" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="307" />
       <source>station height</source>
       <translation>Stationshöhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="308" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="309" />
       <source>terrain correction</source>
       <translation>Geländekorrektion</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="555" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="557" />
       <source>{} station(s) have a reduction density outside {}-{} kg/m³ (e.g. {}); check the units.</source>
       <translation>{} Station(en) haben eine Reduktionsdichte außerhalb {}-{} kg/m³ (z. B. {}); prüfen Sie die Einheit.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="451" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="453" />
       <source>{} stations: {} with a free-air anomaly, {} with a complete Bouguer anomaly, {} flagged.</source>
       <translation>{} Stationen: {} mit Freiluftanomalie, {} mit vollständiger Bouguer-Anomalie, {} markiert.</translation>
     </message>
@@ -1750,37 +1750,42 @@
       <translation>Eine Dichte von {:g} kg/m³ ({}) sieht nach g/cm³ aus: Dichten müssen zwischen {:g} und {:g} kg/m³ liegen; geben Sie {:g} für {:g} g/cm³ ein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="184" />
+      <location filename="../plugin/toolbox/base.py" line="185" />
       <source>A geoid height field or raster is given but HEIGHT_DATUM does not use it: set HEIGHT_DATUM to 'orthometric, geoid height from GEOID_FIELD or GEOID_RASTER', or clear them.</source>
       <translation>Ein Feld oder Raster der Geoidhöhe ist angegeben, aber HEIGHT_DATUM verwendet es nicht: setzen Sie HEIGHT_DATUM auf 'orthometrisch, Geoidhöhe aus GEOID_FIELD oder GEOID_RASTER' oder leeren Sie beide.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="340" />
+      <location filename="../plugin/toolbox/base.py" line="354" />
       <source>Cancelled by the user.</source>
       <translation>Vom Benutzer abgebrochen.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="130" />
+      <location filename="../plugin/toolbox/base.py" line="131" />
       <source>Centimetres</source>
       <translation>Zentimeter</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="166" />
+      <location filename="../plugin/toolbox/base.py" line="167" />
       <source>Elevation raster heights are above</source>
       <translation>Höhen des Höhenrasters beziehen sich auf</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="130" />
+      <location filename="../plugin/toolbox/base.py" line="229" />
+      <source>Estimate the engine's own error against a refined evaluation (tc_numerr; about 4x the time)</source>
+      <translation type="unfinished" />
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="131" />
       <source>Feet</source>
       <translation>Fuß</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="153" />
+      <location filename="../plugin/toolbox/base.py" line="154" />
       <source>Geoid height field (m, geoid above the ellipsoid)</source>
       <translation>Feld der Geoidhöhe (m, Geoid über dem Ellipsoid)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="161" />
+      <location filename="../plugin/toolbox/base.py" line="162" />
       <source>Geoid height raster (m, geoid above the ellipsoid)</source>
       <translation>Raster der Geoidhöhe (m, Geoid über dem Ellipsoid)</translation>
     </message>
@@ -1790,47 +1795,47 @@
       <translation>Schwerereduktion</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="120" />
+      <location filename="../plugin/toolbox/base.py" line="121" />
       <source>Gravity stations</source>
       <translation>Schwerestationen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="179" />
+      <location filename="../plugin/toolbox/base.py" line="180" />
       <source>HEIGHT_DATUM says the geoid height comes from a field or a raster: choose exactly one of GEOID_FIELD and GEOID_RASTER.</source>
       <translation>HEIGHT_DATUM besagt, dass die Geoidhöhe aus einem Feld oder Raster stammt: wählen Sie genau eines von GEOID_FIELD und GEOID_RASTER.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="129" />
+      <location filename="../plugin/toolbox/base.py" line="130" />
       <source>Height units</source>
       <translation>Höheneinheit</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="236" />
+      <location filename="../plugin/toolbox/base.py" line="249" />
       <source>Inner zone radius (m)</source>
       <translation>Radius der Innenzone (m)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="130" />
+      <location filename="../plugin/toolbox/base.py" line="131" />
       <source>Metres</source>
       <translation>Meter</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="237" />
+      <location filename="../plugin/toolbox/base.py" line="250" />
       <source>Outer zone radius (m)</source>
       <translation>Radius der Außenzone (m)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="384" />
+      <location filename="../plugin/toolbox/base.py" line="398" />
       <source>Provenance is recorded in GeoPackage and GeoTIFF outputs only; this output has none.</source>
       <translation>Herkunftsangaben werden nur in GeoPackage- und GeoTIFF-Ausgaben aufgezeichnet; diese Ausgabe hat keine.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="216" />
+      <location filename="../plugin/toolbox/base.py" line="217" />
       <source>Reduction density (kg/m³)</source>
       <translation>Reduktionsdichte (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="232" />
+      <location filename="../plugin/toolbox/base.py" line="245" />
       <source>Regional elevation raster for the outer zone</source>
       <translation>Regionales Höhenraster für die Außenzone</translation>
     </message>
@@ -1840,57 +1845,57 @@
       <translation>Die Ergebnisse dienen nur der Interpretation. Prüfen Sie jede Reduktion an den Anschlussmessungen und Vorgaben der Vermessung; Entscheidungen über Bohrungen, Grundwasser oder Bauvorhaben sowie Berichte nach den Regeln einer Rechtsordnung sind Sache zugelassener Fachleute und örtlicher Vorschriften.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="147" />
+      <location filename="../plugin/toolbox/base.py" line="148" />
       <source>Station heights are</source>
       <translation>Höhenbezug der Stationshöhen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="258" />
+      <location filename="../plugin/toolbox/base.py" line="272" />
       <source>The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m).</source>
       <translation>Der Radius der Innenzone ({} m) muss positiv und kleiner als der Radius der Außenzone ({} m) sein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="301" />
+      <location filename="../plugin/toolbox/base.py" line="315" />
       <source>The input already has a field {}; its values are replaced in the output copy.</source>
       <translation>Die Eingabe hat bereits ein Feld {}; seine Werte werden in der Ausgabekopie ersetzt.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="392" />
+      <location filename="../plugin/toolbox/base.py" line="406" />
       <source>The provenance record could not be written: {}</source>
       <translation>Die Herkunftsangaben konnten nicht geschrieben werden: {}</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="318" />
+      <location filename="../plugin/toolbox/base.py" line="332" />
       <source>elevation raster</source>
       <translation>Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="320" />
+      <location filename="../plugin/toolbox/base.py" line="334" />
       <source>geoid raster</source>
       <translation>Geoidraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="323" />
+      <location filename="../plugin/toolbox/base.py" line="337" />
       <source>output station layer</source>
       <translation>Ausgabe-Stationslayer</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="319" />
+      <location filename="../plugin/toolbox/base.py" line="333" />
       <source>regional elevation raster</source>
       <translation>regionales Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="316" />
+      <location filename="../plugin/toolbox/base.py" line="330" />
       <source>station layer</source>
       <translation>Stationslayer</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="199" />
+      <location filename="../plugin/toolbox/base.py" line="200" />
       <source>the field {}</source>
       <translation>Feld {}</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="207" />
+      <location filename="../plugin/toolbox/base.py" line="208" />
       <source>the raster {}</source>
       <translation>Raster {}</translation>
     </message>
@@ -2244,47 +2249,47 @@
       <translation>Höhenraster (DGM, Meter)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="141" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="142" />
       <source>Exact engine (prisms, DEM-driven)</source>
       <translation>Exaktes Verfahren (Prismen, aus dem DGM)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="121" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="122" />
       <source>Field-estimated innermost-ring correction (mGal)</source>
       <translation>Im Feld geschätzte Korrektion des innersten Rings (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="205" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="206" />
       <source>Hammer zones: {}</source>
       <translation>Hammer-Zonen: {}</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="139" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="140" />
       <source>Method</source>
       <translation>Verfahren</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="142" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="143" />
       <source>Ring-and-sector (Hammer 1939 zones B-M)</source>
       <translation>Ringe und Sektoren (Hammer 1939, Zonen B-M)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="221" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="222" />
       <source>Ring-and-sector zones {} cover {:.1f} m to {:.2f} km; terrain nearer (except a field-estimated innermost correction) and beyond is not corrected.</source>
       <translation>Die Zonen {} der Ringe und Sektoren decken {:.1f} m bis {:.2f} km ab; näheres Gelände (außer einer im Feld geschätzten Korrektion des innersten Rings) und ferneres wird nicht korrigiert.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="215" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="216" />
       <source>Ring-and-sector zones {} reach {:.2f} km; terrain beyond is not corrected.</source>
       <translation>Die Zonen {} der Ringe und Sektoren reichen bis {:.2f} km; Gelände jenseits davon wird nicht korrigiert.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="156" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="157" />
       <source>Ring-and-sector: Hammer zones (contiguous letters out of B-M, or a range such as B-M)</source>
       <translation>Ringe und Sektoren: Hammer-Zonen (zusammenhängende Buchstaben aus B-M oder ein Bereich wie B-M)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="148" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="149" />
       <source>Ring-and-sector: one field per Hammer zone</source>
       <translation>Ringe und Sektoren: ein Feld je Hammer-Zone</translation>
     </message>
@@ -2294,17 +2299,17 @@
       <translation>Feld der Stationshöhe (leer = aus dem Höhenraster)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="166" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="167" />
       <source>Stations computed</source>
       <translation>Berechnete Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="167" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="168" />
       <source>Stations flagged</source>
       <translation>Markierte Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="163" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="164" />
       <source>Stations with terrain correction</source>
       <translation>Stationen mit Geländekorrektion</translation>
     </message>
@@ -2319,22 +2324,22 @@
       <translation>Geländekorrektion von Schwerestationen bis 166,7 km aus einem DGM, mit Erdkrümmung.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="129" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="130" />
       <source>Treat cells below sea level as water of this density (kg/m³)</source>
       <translation>Zellen unter dem Meeresspiegel als Wasser dieser Dichte behandeln (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="228" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="229" />
       <source>Zones {} are narrower than a DEM cell: they hold the plane through the station with the DEM's slope there instead of DEM heights.</source>
       <translation>Die Zonen {} sind schmaler als eine DGM-Zelle: sie enthalten die Ebene durch die Station mit der dortigen Neigung des DGM statt der DGM-Höhen.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="248" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="249" />
       <source>elevation raster</source>
       <translation>Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="182" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="183" />
       <source>geoid height</source>
       <translation>Geoidhöhe</translation>
     </message>
@@ -2344,22 +2349,22 @@
       <translation>Schwere,Geländekorrektion,Innenzone,Außenzone,Hammer-Zonen,DGM,Bouguer</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="181" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="182" />
       <source>innermost-ring correction</source>
       <translation>Korrektion des innersten Rings</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="250" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="251" />
       <source>regional elevation raster</source>
       <translation>regionales Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="180" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="181" />
       <source>station height</source>
       <translation>Stationshöhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="325" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="327" />
       <source>{} stations: terrain correction computed for {}, {} flagged.</source>
       <translation>{} Stationen: Geländekorrektion für {} berechnet, {} markiert.</translation>
     </message>
@@ -2367,14 +2372,25 @@
   <context>
     <name>TerrainRun</name>
     <message>
-      <location filename="../plugin/terrain_run.py" line="175" />
+      <location filename="../plugin/terrain_run.py" line="178" />
+      <location filename="../plugin/terrain_run.py" line="187" />
       <source>Cancelled by the user.</source>
       <translation>Vom Benutzer abgebrochen.</translation>
     </message>
     <message>
-      <location filename="../plugin/terrain_run.py" line="90" />
+      <location filename="../plugin/terrain_run.py" line="93" />
       <source>Densities from a geology layer need the exact engine: the ring-and-sector method has one density per station. Choose the exact engine or leave DENSITY_LAYER empty.</source>
       <translation>Dichten aus einem Geologielayer brauchen das exakte Verfahren: das Ringe-und-Sektoren-Verfahren hat eine Dichte je Station. Wählen Sie das exakte Verfahren oder lassen Sie DENSITY_LAYER leer.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/terrain_run.py" line="189" />
+      <source>Engine error against the refined evaluation: median {:.2g}, largest {:.2g} mGal.</source>
+      <translation type="unfinished" />
+    </message>
+    <message>
+      <location filename="../plugin/terrain_run.py" line="181" />
+      <source>Estimating the engine's own error against a refined evaluation (tc_numerr).</source>
+      <translation type="unfinished" />
     </message>
     <message>
       <location filename="../plugin/terrain_run.py" line="33" />
@@ -2382,12 +2398,12 @@
       <translation>Keine Station liegt auf {} (Rasterausdehnung {:.6g}, {:.6g}, {:.6g}, {:.6g} in seinem eigenen KBS). Prüfen Sie, ob das Raster das Messgebiet abdeckt und beide Layer das richtige KBS haben.</translation>
     </message>
     <message>
-      <location filename="../plugin/terrain_run.py" line="101" />
+      <location filename="../plugin/terrain_run.py" line="104" />
       <source>Reprojecting the regional elevation raster to the CRS of the fine one.</source>
       <translation>Das regionale Höhenraster wird in das KBS des feinen Rasters umprojiziert.</translation>
     </message>
     <message>
-      <location filename="../plugin/terrain_run.py" line="181" />
+      <location filename="../plugin/terrain_run.py" line="199" />
       <source>The elevation rasters stop short of the outer radius for {} station(s): the terrain they miss could add about {:.3f} mGal at worst (station {}; field tc_trunc, an estimate from the relief at the edge of coverage, not a bound). Give a regional DEM reaching {:.0f} m around every station.</source>
       <translation>Die Höhenraster enden für {} Station(en) vor dem Außenradius: das fehlende Gelände könnte im ungünstigsten Fall etwa {:.3f} mGal beitragen (Station {}; Feld tc_trunc, eine Schätzung aus dem Relief am Rand der Abdeckung, keine Schranke). Geben Sie ein regionales DGM an, das {:.0f} m um jede Station reicht.</translation>
     </message>
@@ -2397,12 +2413,12 @@
       <translation>Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/terrain_run.py" line="201" />
+      <location filename="../plugin/terrain_run.py" line="220" />
       <source>height from DEM</source>
       <translation>Höhe aus DGM</translation>
     </message>
     <message>
-      <location filename="../plugin/terrain_run.py" line="202" />
+      <location filename="../plugin/terrain_run.py" line="221" />
       <source>no height (outside DEM)</source>
       <translation>keine Höhe (außerhalb des DGM)</translation>
     </message>
