@@ -1772,7 +1772,7 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="229" />
       <source>Estimate the engine's own error against a refined evaluation (tc_numerr; about 4x the time)</source>
-      <translation type="unfinished" />
+      <translation>Eigenen Rechenfehler des Verfahrens gegen eine verfeinerte Auswertung schätzen (tc_numerr; etwa vierfache Rechenzeit)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="131" />
@@ -2385,12 +2385,12 @@
     <message>
       <location filename="../plugin/terrain_run.py" line="189" />
       <source>Engine error against the refined evaluation: median {:.2g}, largest {:.2g} mGal.</source>
-      <translation type="unfinished" />
+      <translation>Rechenfehler gegenüber der verfeinerten Auswertung: Median {:.2g}, größter Wert {:.2g} mGal.</translation>
     </message>
     <message>
       <location filename="../plugin/terrain_run.py" line="181" />
       <source>Estimating the engine's own error against a refined evaluation (tc_numerr).</source>
-      <translation type="unfinished" />
+      <translation>Der eigene Rechenfehler wird gegen eine verfeinerte Auswertung geschätzt (tc_numerr).</translation>
     </message>
     <message>
       <location filename="../plugin/terrain_run.py" line="33" />
