@@ -131,6 +131,9 @@ def station_map(x, y, values, label: str, cmap: str = "Spectral_r") -> bytes:
     ax.set_xlabel("easting")
     ax.set_ylabel("northing")
     ax.ticklabel_format(useOffset=False, style="plain")
+    # Six-digit map coordinates: few ticks, so the labels do not run together.
+    ax.xaxis.set_major_locator(plt.MaxNLocator(4))
+    ax.yaxis.set_major_locator(plt.MaxNLocator(5))
     ax.grid(alpha=0.25)
     fig.tight_layout()
     return _encode(fig)
