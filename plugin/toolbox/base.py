@@ -228,6 +228,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
             self.ENGINE_CHECK,
             _tr("Estimate the engine's own error against a refined evaluation (tc_numerr; about 4x the time)"),
             defaultValue=False,
+            optional=True,  # models need not wire it
         )
         check.setFlags(check.flags() | QgsProcessingParameterDefinition.FlagAdvanced)
         self.addParameter(check)
