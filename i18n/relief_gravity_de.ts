@@ -1755,7 +1755,7 @@
       <translation>Ein Feld oder Raster der Geoidhöhe ist angegeben, aber HEIGHT_DATUM verwendet es nicht: setzen Sie HEIGHT_DATUM auf 'orthometrisch, Geoidhöhe aus GEOID_FIELD oder GEOID_RASTER' oder leeren Sie beide.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="354" />
+      <location filename="../plugin/toolbox/base.py" line="355" />
       <source>Cancelled by the user.</source>
       <translation>Vom Benutzer abgebrochen.</translation>
     </message>
@@ -1810,7 +1810,7 @@
       <translation>Höheneinheit</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="249" />
+      <location filename="../plugin/toolbox/base.py" line="250" />
       <source>Inner zone radius (m)</source>
       <translation>Radius der Innenzone (m)</translation>
     </message>
@@ -1820,12 +1820,12 @@
       <translation>Meter</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="250" />
+      <location filename="../plugin/toolbox/base.py" line="251" />
       <source>Outer zone radius (m)</source>
       <translation>Radius der Außenzone (m)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="398" />
+      <location filename="../plugin/toolbox/base.py" line="399" />
       <source>Provenance is recorded in GeoPackage and GeoTIFF outputs only; this output has none.</source>
       <translation>Herkunftsangaben werden nur in GeoPackage- und GeoTIFF-Ausgaben aufgezeichnet; diese Ausgabe hat keine.</translation>
     </message>
@@ -1835,7 +1835,7 @@
       <translation>Reduktionsdichte (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="245" />
+      <location filename="../plugin/toolbox/base.py" line="246" />
       <source>Regional elevation raster for the outer zone</source>
       <translation>Regionales Höhenraster für die Außenzone</translation>
     </message>
@@ -1850,42 +1850,42 @@
       <translation>Höhenbezug der Stationshöhen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="272" />
+      <location filename="../plugin/toolbox/base.py" line="273" />
       <source>The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m).</source>
       <translation>Der Radius der Innenzone ({} m) muss positiv und kleiner als der Radius der Außenzone ({} m) sein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="315" />
+      <location filename="../plugin/toolbox/base.py" line="316" />
       <source>The input already has a field {}; its values are replaced in the output copy.</source>
       <translation>Die Eingabe hat bereits ein Feld {}; seine Werte werden in der Ausgabekopie ersetzt.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="406" />
+      <location filename="../plugin/toolbox/base.py" line="407" />
       <source>The provenance record could not be written: {}</source>
       <translation>Die Herkunftsangaben konnten nicht geschrieben werden: {}</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="332" />
+      <location filename="../plugin/toolbox/base.py" line="333" />
       <source>elevation raster</source>
       <translation>Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="334" />
+      <location filename="../plugin/toolbox/base.py" line="335" />
       <source>geoid raster</source>
       <translation>Geoidraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="337" />
+      <location filename="../plugin/toolbox/base.py" line="338" />
       <source>output station layer</source>
       <translation>Ausgabe-Stationslayer</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="333" />
+      <location filename="../plugin/toolbox/base.py" line="334" />
       <source>regional elevation raster</source>
       <translation>regionales Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="330" />
+      <location filename="../plugin/toolbox/base.py" line="331" />
       <source>station layer</source>
       <translation>Stationslayer</translation>
     </message>
