@@ -368,19 +368,9 @@
   <context>
     <name>BouguerReductionAlgorithm</name>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="239" />
-      <source>1967 formula (legacy databases)</source>
-      <translation>Formel von 1967 (ältere Datenbanken)</translation>
-    </message>
-    <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="145" />
       <source>&lt;p&gt;Adds normal gravity, every correction and the free-air (&lt;b&gt;faa&lt;/b&gt;), simple Bouguer (&lt;b&gt;sba&lt;/b&gt;) and complete Bouguer (&lt;b&gt;cba&lt;/b&gt;) anomalies to a copy of a station point layer. All values in mGal.&lt;/p&gt;&lt;p&gt;Default standard: Hinze et al. (2005): GRS80 normal gravity, second-order height correction, atmospheric correction, spherical-cap Bouguer correction to 166.7 km (slab + curvature, LaFehr 1991) and terrain correction to 166.7 km. The 1967 formula, the first-order 0.3086 mGal/m gradient and a flat slab are options to reproduce legacy databases.&lt;/p&gt;&lt;p&gt;faa = g_obs - normal_g + height_corr + atmos_corr; sba = faa - slab_corr - curv_corr; cba = sba + tc_total.&lt;/p&gt;&lt;p&gt;The terrain correction comes from the terrain-correction field when one is chosen, otherwise from the elevation raster with the exact prism engine (inner zone to the inner radius, outer zone to the outer radius); without either, cba is left empty.&lt;/p&gt;&lt;p&gt;Station height: from the height field, or sampled from the elevation raster when no field is chosen (flagged in qc_flag). A station that cannot be reduced keeps its row with empty values and codes in qc_flag (their meaning in qc_note).&lt;/p&gt;&lt;p&gt;&lt;b&gt;Datums&lt;/b&gt;: HEIGHT_DATUM says what the station heights are (ellipsoidal, orthometric above EGM96, or orthometric with the geoid height from GEOID_FIELD or GEOID_RASTER); DEM_DATUM what the raster heights are (EGM96 as most global DEMs, the ellipsoid, or the same as the stations). EGM96 comes from PROJ's egm96_15.gtx. The reduction uses ellipsoidal heights (Hinze et al. 2005) unless the legacy orthometric option is ticked; the terrain correction compares station and DEM in the DEM's datum. Stations that disagree with the DEM beyond the local relief are flagged height_dem_mismatch.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Units and limits&lt;/b&gt;: GRAVITY_UNITS mGal, µm/s², Gal or m/s²; observed gravity must fall within 975,000-984,000 mGal after units. Densities 500-5000 kg/m³ (1000-3500 without a warning). Inner radius above 0 and below the outer radius (default 895 m, the outer edge of Hammer zone F). A run stops with a sentence when the values look like another unit.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Regional DEM&lt;/b&gt;: the standard correction reaches 166.7 km; a regional elevation raster reaching that far around every station is needed, otherwise the stations are flagged tc_partial and cba misses the far terrain.&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</source>
       <translation>&lt;p&gt;Fügt einer Kopie eines Stations-Punktlayers die Normalschwere, jede Korrektion sowie die Freiluftanomalie (&lt;b&gt;faa&lt;/b&gt;), die einfache Bouguer-Anomalie (&lt;b&gt;sba&lt;/b&gt;) und die vollständige Bouguer-Anomalie (&lt;b&gt;cba&lt;/b&gt;) hinzu. Alle Werte in mGal.&lt;/p&gt;&lt;p&gt;Standardvorgabe: Hinze et al. (2005): Normalschwere GRS80, Höhenkorrektion zweiter Ordnung, Atmosphärenkorrektion, Bouguer-Korrektion als Kugelkappe bis 166,7 km (Platte + Krümmung, LaFehr 1991) und Geländekorrektion bis 166,7 km. Die Formel von 1967, der Gradient erster Ordnung von 0,3086 mGal/m und eine ebene Platte sind Optionen, um ältere Datenbanken nachzubilden.&lt;/p&gt;&lt;p&gt;faa = g_obs - normal_g + height_corr + atmos_corr; sba = faa - slab_corr - curv_corr; cba = sba + tc_total.&lt;/p&gt;&lt;p&gt;Die Geländekorrektion stammt aus dem Geländekorrektionsfeld, wenn eines gewählt ist, sonst aus dem Höhenraster mit dem exakten Prismenverfahren (Innenzone bis zum Innenradius, Außenzone bis zum Außenradius); ohne beides bleibt cba leer.&lt;/p&gt;&lt;p&gt;Stationshöhe: aus dem Höhenfeld oder, wenn kein Feld gewählt ist, aus dem Höhenraster entnommen (in qc_flag markiert). Eine Station, die nicht reduziert werden kann, behält ihre Zeile mit leeren Werten und Codes in qc_flag (ihre Bedeutung in qc_note).&lt;/p&gt;&lt;p&gt;&lt;b&gt;Höhenbezugssysteme&lt;/b&gt;: HEIGHT_DATUM gibt an, was die Stationshöhen sind (ellipsoidisch, orthometrisch über EGM96 oder orthometrisch mit der Geoidhöhe aus GEOID_FIELD oder GEOID_RASTER); DEM_DATUM, was die Rasterhöhen sind (EGM96 wie bei den meisten globalen DGM, das Ellipsoid oder dasselbe wie die Stationen). EGM96 stammt aus egm96_15.gtx von PROJ. Die Reduktion verwendet ellipsoidische Höhen (Hinze et al. 2005), sofern die ältere orthometrische Option nicht angekreuzt ist; die Geländekorrektion vergleicht Station und DGM im Höhenbezug des DGM. Stationen, die stärker vom DGM abweichen, als das örtliche Relief erklärt, werden mit height_dem_mismatch markiert.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Einheiten und Grenzen&lt;/b&gt;: GRAVITY_UNITS mGal, µm/s², Gal oder m/s²; die gemessene Schwere muss nach der Umrechnung innerhalb 975.000-984.000 mGal liegen. Dichten 500-5000 kg/m³ (1000-3500 ohne Warnung). Innenradius über 0 und unter dem Außenradius (Standard 895 m, der äußere Rand der Hammer-Zone F). Ein Lauf bricht mit einer Meldung ab, wenn die Werte nach einer anderen Einheit aussehen.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Regionales DGM&lt;/b&gt;: die Standardkorrektion reicht bis 166,7 km; ein regionales Höhenraster, das so weit um jede Station reicht, wird benötigt, sonst werden die Stationen mit tc_partial markiert und cba fehlt das ferne Gelände.&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="257" />
-      <source>Apply the atmospheric correction</source>
-      <translation>Atmosphärenkorrektion anbringen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="136" />
@@ -388,12 +378,12 @@
       <translation>Bouguer-Reduktion (Freiluft-, einfache und vollständige Bouguer-Anomalie)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="549" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="515" />
       <source>Check DENSITY_FIELD_UNITS (kg/m³ or g/cm³).</source>
       <translation>Prüfen Sie DENSITY_FIELD_UNITS (kg/m³ oder g/cm³).</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="325" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="291" />
       <source>Choose a station height field or an elevation raster to sample heights from.</source>
       <translation>Wählen Sie ein Feld der Stationshöhe oder ein Höhenraster, aus dem Höhen entnommen werden.</translation>
     </message>
@@ -408,19 +398,9 @@
       <translation>Alle Werte der gemessenen Schwere in {} sind 0: das Feld enthält keine Messwerte. Wählen Sie das Feld mit der gemessenen (absoluten) Schwere.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="270" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="236" />
       <source>Existing terrain-correction field (mGal)</source>
       <translation>Vorhandenes Feld der Geländekorrektion (mGal)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="250" />
-      <source>First order, 0.3086 mGal/m</source>
-      <translation>Erster Ordnung, 0,3086 mGal/m</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="237" />
-      <source>GRS80 (Somigliana closed form)</source>
-      <translation>GRS80 (geschlossene Formel nach Somigliana)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="72" />
@@ -428,24 +408,14 @@
       <translation>Gal (1.000 mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="502" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="468" />
       <source>Give densities either per station (DENSITY_FIELD) or from a geology layer (DENSITY_LAYER), not both.</source>
       <translation>Geben Sie Dichten entweder je Station (DENSITY_FIELD) oder aus einem Geologielayer (DENSITY_LAYER) an, nicht beides.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="247" />
-      <source>Height (free-air) correction</source>
-      <translation>Höhenkorrektion (Freiluft)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="411" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="377" />
       <source>No terrain-correction field and no elevation raster: cba is left empty.</source>
       <translation>Weder Geländekorrektionsfeld noch Höhenraster: cba bleibt leer.</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="235" />
-      <source>Normal gravity</source>
-      <translation>Normalschwere</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="188" />
@@ -463,17 +433,17 @@
       <translation>Die gemessene Schwere in {} beträgt {:.6g} mGal (Median), in jeder Einheit weit entfernt von den 975.000-984.000 mGal der Erde: relative Gravimeterablesungen oder eine andere Größe? Die Reduktion braucht die absolute gemessene Schwere.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="418" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="384" />
       <source>Orthometric reduction needs geoid heights: PROJ's EGM96 grid or a geoid field/raster.</source>
       <translation>Die orthometrische Reduktion braucht Geoidhöhen: das EGM96-Gitter von PROJ oder ein Geoidhöhenfeld bzw. -raster.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="282" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="248" />
       <source>Reduce with orthometric heights (legacy practice; the standard uses ellipsoidal heights)</source>
       <translation>Mit orthometrischen Höhen reduzieren (ältere Praxis; der Standard verwendet ellipsoidische Höhen)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="289" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="255" />
       <source>Reduced stations</source>
       <translation>Reduzierte Stationen</translation>
     </message>
@@ -488,27 +458,17 @@
       <translation>Feld der Reduktionsdichte je Station</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="249" />
-      <source>Second order, latitude dependent (Hinze et al. 2005)</source>
-      <translation>Zweiter Ordnung, breitenabhängig (Hinze et al. 2005)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="263" />
-      <source>Spherical cap to 166.7 km (add the curvature correction to the slab)</source>
-      <translation>Kugelkappe bis 166,7 km (Krümmungskorrektion zur Platte)</translation>
-    </message>
-    <message>
       <location filename="../plugin/toolbox/bouguer_reduction.py" line="201" />
       <source>Station height field (empty = sample the elevation raster)</source>
       <translation>Feld der Stationshöhe (leer = aus dem Höhenraster)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="293" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="259" />
       <source>Stations flagged</source>
       <translation>Markierte Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="292" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="258" />
       <source>Stations reduced</source>
       <translation>Reduzierte Stationen (Anzahl)</translation>
     </message>
@@ -523,17 +483,12 @@
       <translation>Einheit des Dichtefeldes</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="238" />
-      <source>WGS84 (Somigliana closed form)</source>
-      <translation>WGS84 (geschlossene Formel nach Somigliana)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="308" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="274" />
       <source>density</source>
       <translation>Dichte</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="351" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="317" />
       <source>elevation raster</source>
       <translation>Höhenraster</translation>
     </message>
@@ -543,7 +498,7 @@
       <translation>g/cm³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="310" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="276" />
       <source>geoid height</source>
       <translation>Geoidhöhe</translation>
     </message>
@@ -568,32 +523,32 @@
       <translation>mGal</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="306" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="272" />
       <source>observed gravity</source>
       <translation>gemessene Schwere</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="353" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="319" />
       <source>regional elevation raster</source>
       <translation>regionales Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="307" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="273" />
       <source>station height</source>
       <translation>Stationshöhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="309" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="275" />
       <source>terrain correction</source>
       <translation>Geländekorrektion</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="557" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="523" />
       <source>{} station(s) have a reduction density outside {}-{} kg/m³ (e.g. {}); check the units.</source>
       <translation>{} Station(en) haben eine Reduktionsdichte außerhalb {}-{} kg/m³ (z. B. {}); prüfen Sie die Einheit.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/bouguer_reduction.py" line="453" />
+      <location filename="../plugin/toolbox/bouguer_reduction.py" line="419" />
       <source>{} stations: {} with a free-air anomaly, {} with a complete Bouguer anomaly, {} flagged.</source>
       <translation>{} Stationen: {} mit Freiluftanomalie, {} mit vollständiger Bouguer-Anomalie, {} markiert.</translation>
     </message>
@@ -606,333 +561,288 @@
   <context>
     <name>DensityEstimateAlgorithm</name>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="190" />
-      <source>1967 formula (legacy databases)</source>
-      <translation>Formel von 1967 (ältere Datenbanken)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="470" />
-      <location filename="../plugin/toolbox/density_estimate.py" line="514" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="435" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="479" />
       <source>95 % interval</source>
       <translation>95-%-Intervall</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="102" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="101" />
       <source>&lt;p&gt;Estimates the reduction density (kg/m³) from the stations themselves. The slab, curvature and terrain terms are computed once at 1 kg/m³ with the same standard and terrain engine as the Bouguer reduction (they are linear in density): B = slab + curvature - terrain correction per kg/m³, and the Bouguer anomaly at density ρ is faa - ρB.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Parasnis (1952)&lt;/b&gt;: least-squares regression faa = ρB + regional term; the interval is the Student-t interval of the slope.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Nettleton (1939)&lt;/b&gt;: the density whose Bouguer anomaly is uncorrelated with the station heights, over the whole survey or, with a &lt;b&gt;profile line layer&lt;/b&gt;, within a &lt;b&gt;buffer&lt;/b&gt; of each line (pooled over the lines); the interval is a bootstrap over stations (2000 resamples, seeded).&lt;/p&gt;&lt;p&gt;&lt;b&gt;Regional term&lt;/b&gt; (both methods): none, planar (default) or quadratic in the coordinates, fitted with the density so that a regional gradient does not leak into it.&lt;/p&gt;&lt;p&gt;Outputs DENSITY, DENSITY_LOW and DENSITY_HIGH (95 %) can feed the reduction's density in a model; PLOT is a PNG of the fit. The log warns when the relief is too small, when relief and regional trend cannot be told apart, and when low and high stations disagree (geology that follows the topography biases both methods).&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</source>
       <translation>&lt;p&gt;Schätzt die Reduktionsdichte (kg/m³) aus den Stationen selbst. Platten-, Krümmungs- und Geländeterm werden einmal für 1 kg/m³ mit demselben Standard und demselben Geländeverfahren wie die Bouguer-Reduktion berechnet (sie sind linear in der Dichte): B = Platte + Krümmung - Geländekorrektion je kg/m³, und die Bouguer-Anomalie bei der Dichte ρ ist faa - ρB.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Parasnis (1952)&lt;/b&gt;: Regression nach kleinsten Quadraten faa = ρB + Regionalterm; das Intervall ist das Student-t-Intervall der Steigung.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Nettleton (1939)&lt;/b&gt;: die Dichte, deren Bouguer-Anomalie nicht mit den Stationshöhen korreliert, über die ganze Vermessung oder, mit einem &lt;b&gt;Profillinienlayer&lt;/b&gt;, innerhalb eines &lt;b&gt;Puffers&lt;/b&gt; um jede Linie (über die Linien zusammengefasst); das Intervall ist ein Bootstrap über die Stationen (2000 Stichproben, mit festem Startwert).&lt;/p&gt;&lt;p&gt;&lt;b&gt;Regionalterm&lt;/b&gt; (beide Verfahren): keiner, eben (Standard) oder quadratisch in den Koordinaten, gemeinsam mit der Dichte angepasst, damit ein regionaler Gradient nicht in sie einfließt.&lt;/p&gt;&lt;p&gt;Die Ausgaben DENSITY, DENSITY_LOW und DENSITY_HIGH (95 %) können in einem Modell die Dichte der Reduktion speisen; PLOT ist ein PNG der Anpassung. Das Protokoll warnt, wenn das Relief zu gering ist, wenn Relief und regionaler Trend nicht zu trennen sind und wenn tiefe und hohe Stationen nicht übereinstimmen (eine Geologie, die der Topographie folgt, verfälscht beide Verfahren).&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="208" />
-      <source>Apply the atmospheric correction</source>
-      <translation>Atmosphärenkorrektion anbringen</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="472" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="437" />
       <source>Bouguer and terrain term per unit density (mGal per g/cm³)</source>
       <translation>Bouguer- und Geländeterm je Dichteeinheit (mGal je g/cm³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="492" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="457" />
       <source>Bouguer anomaly against height</source>
       <translation>Bouguer-Anomalie gegen Höhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="522" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="487" />
       <source>Bouguer anomaly minus regional, centred (mGal)</source>
       <translation>Bouguer-Anomalie minus Regionalfeld, zentriert (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="177" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="176" />
       <source>Buffer around the profile lines</source>
       <translation>Puffer um die Profillinien</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="334" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="299" />
       <source>Cancelled by the user.</source>
       <translation>Vom Benutzer abgebrochen.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="517" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="482" />
       <source>Correlation with height</source>
       <translation>Korrelation mit der Höhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="350" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="315" />
       <source>Density {:.0f} kg/m³, 95 % interval {:.0f} to {:.0f} kg/m³ from {} stations ({}).</source>
       <translation>Dichte {:.0f} kg/m³, 95-%-Intervall {:.0f} bis {:.0f} kg/m³ aus {} Stationen ({}).</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="503" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="468" />
       <source>Distance along the profile (m)</source>
       <translation>Abstand entlang des Profils (m)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="146" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="145" />
       <source>Elevation raster (DEM, metres)</source>
       <translation>Höhenraster (DGM, Meter)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="228" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="193" />
       <source>Estimated density (kg/m³)</source>
       <translation>Geschätzte Dichte (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="96" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="95" />
       <source>Estimates the Bouguer reduction density from the stations, with a 95 % interval and a figure.</source>
       <translation>Schätzt die Bouguer-Reduktionsdichte aus den Stationen, mit 95-%-Intervall und Abbildung.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="222" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="187" />
       <source>Figure of the estimate</source>
       <translation>Abbildung der Schätzung</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="201" />
-      <source>First order, 0.3086 mGal/m</source>
-      <translation>Erster Ordnung, 0,3086 mGal/m</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="473" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="438" />
       <source>Free-air anomaly minus regional term (mGal)</source>
       <translation>Freiluftanomalie minus Regionalterm (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="188" />
-      <source>GRS80 (Somigliana closed form)</source>
-      <translation>GRS80 (geschlossene Formel nach Somigliana)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="198" />
-      <source>Height (free-air) correction</source>
-      <translation>Höhenkorrektion (Freiluft)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="523" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="488" />
       <source>Height (m)</source>
       <translation>Höhe (m)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="229" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="194" />
       <source>Lower bound of the 95 % interval (kg/m³)</source>
       <translation>Untere Grenze des 95-%-Intervalls (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="150" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="149" />
       <source>Method</source>
       <translation>Verfahren</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="153" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="152" />
       <source>Nettleton (1939) least correlation with topography</source>
       <translation>Nettleton (1939), geringste Korrelation mit der Topographie</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="343" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="308" />
       <source>Nettleton correlation, {} regional term, {} group(s); bootstrap percentile interval, {} resamples</source>
       <translation>Nettleton-Korrelation, Regionalterm {}, {} Gruppe(n); Bootstrap-Perzentilintervall, {} Stichproben</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="518" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="483" />
       <source>Nettleton: {:.0f} kg/m³ ({:.0f} to {:.0f})</source>
       <translation>Nettleton: {:.0f} kg/m³ ({:.0f} bis {:.0f})</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="347" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="312" />
       <source>No density can be estimated: {}</source>
       <translation>Es kann keine Dichte geschätzt werden: {}</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="162" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="161" />
       <source>None (constant)</source>
       <translation>Keiner (konstant)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="186" />
-      <source>Normal gravity</source>
-      <translation>Normalschwere</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="128" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="127" />
       <source>Observed gravity field (mGal)</source>
       <translation>Feld der gemessenen Schwere (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="223" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="188" />
       <source>PNG files (*.png)</source>
       <translation>PNG-Dateien (*.png)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="152" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="151" />
       <source>Parasnis (1952) regression</source>
       <translation>Parasnis (1952), Regression</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="338" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="303" />
       <source>Parasnis regression, {} regional term; Student-t interval, {} degrees of freedom</source>
       <translation>Parasnis-Regression, Regionalterm {}; Student-t-Intervall, {} Freiheitsgrade</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="474" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="439" />
       <source>Parasnis: {:.0f} kg/m³ ({:.0f} to {:.0f})</source>
       <translation>Parasnis: {:.0f} kg/m³ ({:.0f} bis {:.0f})</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="162" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="161" />
       <source>Planar</source>
       <translation>Eben</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="399" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="364" />
       <source>Profile buffers need stations in a projected CRS (metres); reproject the station layer first.</source>
       <translation>Profilpuffer brauchen Stationen in einem projizierten KBS (Meter); projizieren Sie den Stationslayer zuerst um.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="169" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="168" />
       <source>Profile lines (Nettleton; empty = whole survey)</source>
       <translation>Profillinien (Nettleton; leer = ganze Vermessung)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="257" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="222" />
       <source>Profile lines are used by Nettleton's method only: choose it, or leave the profiles empty.</source>
       <translation>Profillinien werden nur vom Nettleton-Verfahren verwendet: wählen Sie es oder lassen Sie die Profile leer.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="504" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="469" />
       <source>Profile {} ({} stations)</source>
       <translation>Profil {} ({} Stationen)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="162" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="161" />
       <source>Quadratic</source>
       <translation>Quadratisch</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="93" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="92" />
       <source>Reduction density from the data (Parasnis, Nettleton)</source>
       <translation>Reduktionsdichte aus den Daten (Parasnis, Nettleton)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="161" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="160" />
       <source>Regional term fitted with the density</source>
       <translation>Mit der Dichte angepasster Regionalterm</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="450" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="415" />
       <source>Relief {:.0f} m (standard deviation after the regional term); low and high stations agree.</source>
       <translation>Relief {:.0f} m (Standardabweichung nach dem Regionalterm); tiefe und hohe Stationen stimmen überein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="200" />
-      <source>Second order, latitude dependent (Hinze et al. 2005)</source>
-      <translation>Zweiter Ordnung, breitenabhängig (Hinze et al. 2005)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="214" />
-      <source>Spherical cap to 166.7 km (add the curvature correction to the slab)</source>
-      <translation>Kugelkappe bis 166,7 km (Krümmungskorrektion zur Platte)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="491" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="456" />
       <source>Station height (m)</source>
       <translation>Stationshöhe (m)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="140" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="139" />
       <source>Station height field (above the ellipsoid; empty = sample the elevation raster)</source>
       <translation>Feld der Stationshöhe (über dem Ellipsoid; leer = aus dem Höhenraster)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="233" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="198" />
       <source>Stations used</source>
       <translation>Verwendete Stationen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="425" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="390" />
       <source>Stations within {:g} of each profile line: {}.</source>
       <translation>Stationen innerhalb {:g} um jede Profillinie: {}.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="261" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="226" />
       <source>The buffer around the profile lines must be more than 0.</source>
       <translation>Der Puffer um die Profillinien muss größer als 0 sein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="252" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="217" />
       <source>The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m).</source>
       <translation>Der Radius der Innenzone ({} m) muss positiv und kleiner als der Radius der Außenzone ({} m) sein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="411" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="376" />
       <source>The profile layer has no line.</source>
       <translation>Der Profillayer enthält keine Linie.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="516" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="481" />
       <source>Trial density (kg/m³)</source>
       <translation>Versuchsdichte (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="134" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="133" />
       <source>Units of observed gravity</source>
       <translation>Einheit der gemessenen Schwere</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="231" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="196" />
       <source>Upper bound of the 95 % interval (kg/m³)</source>
       <translation>Obere Grenze des 95-%-Intervalls (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="189" />
-      <source>WGS84 (Somigliana closed form)</source>
-      <translation>WGS84 (geschlossene Formel nach Somigliana)</translation>
-    </message>
-    <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="270" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="235" />
       <source>elevation raster</source>
       <translation>Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="515" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="480" />
       <source>estimate {:.0f} kg/m³</source>
       <translation>Schätzung {:.0f} kg/m³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="469" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="434" />
       <source>fit: {:.0f} kg/m³</source>
       <translation>Anpassung: {:.0f} kg/m³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="99" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="98" />
       <source>gravity,density,bouguer,Parasnis,Nettleton,regression,correlation,bootstrap</source>
       <translation>Schwere,Dichte,Bouguer,Parasnis,Nettleton,Regression,Korrelation,Bootstrap</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="245" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="210" />
       <source>observed gravity</source>
       <translation>gemessene Schwere</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="273" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="238" />
       <source>regional elevation raster</source>
       <translation>regionales Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="245" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="210" />
       <source>station height</source>
       <translation>Stationshöhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="468" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="433" />
       <source>stations</source>
       <translation>Stationen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="521" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="486" />
       <source>{:.0f} kg/m³</source>
       <translation>{:.0f} kg/m³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="327" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="292" />
       <source>{} of {} stations left out (no anomaly, no terrain correction or outside the profile buffers).</source>
       <translation>{} von {} Stationen ausgelassen (keine Anomalie, keine Geländekorrektion oder außerhalb der Profilpuffer).</translation>
     </message>
@@ -1735,6 +1645,11 @@
   <context>
     <name>ReliefGravityAlgorithm</name>
     <message>
+      <location filename="../plugin/toolbox/base.py" line="238" />
+      <source>1967 formula (legacy databases)</source>
+      <translation type="unfinished" />
+    </message>
+    <message>
       <location filename="../plugin/toolbox/base.py" line="81" />
       <source>A density of {:g} kg/m³ ({}) is 1,000 times too large (g/cm³ values multiplied twice, or g/m³?): densities must lie between {:g} and {:g} kg/m³; enter {:g}.</source>
       <translation>Eine Dichte von {:g} kg/m³ ({}) ist 1.000-mal zu groß (g/cm³-Werte doppelt multipliziert oder g/m³?): Dichten müssen zwischen {:g} und {:g} kg/m³ liegen; geben Sie {:g} ein.</translation>
@@ -1750,42 +1665,57 @@
       <translation>Eine Dichte von {:g} kg/m³ ({}) sieht nach g/cm³ aus: Dichten müssen zwischen {:g} und {:g} kg/m³ liegen; geben Sie {:g} für {:g} g/cm³ ein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="185" />
+      <location filename="../plugin/toolbox/base.py" line="189" />
       <source>A geoid height field or raster is given but HEIGHT_DATUM does not use it: set HEIGHT_DATUM to 'orthometric, geoid height from GEOID_FIELD or GEOID_RASTER', or clear them.</source>
       <translation>Ein Feld oder Raster der Geoidhöhe ist angegeben, aber HEIGHT_DATUM verwendet es nicht: setzen Sie HEIGHT_DATUM auf 'orthometrisch, Geoidhöhe aus GEOID_FIELD oder GEOID_RASTER' oder leeren Sie beide.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="355" />
+      <location filename="../plugin/toolbox/base.py" line="255" />
+      <source>Apply the atmospheric correction</source>
+      <translation type="unfinished" />
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="397" />
       <source>Cancelled by the user.</source>
       <translation>Vom Benutzer abgebrochen.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="131" />
+      <location filename="../plugin/toolbox/base.py" line="135" />
       <source>Centimetres</source>
       <translation>Zentimeter</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="167" />
+      <location filename="../plugin/toolbox/base.py" line="171" />
       <source>Elevation raster heights are above</source>
       <translation>Höhen des Höhenrasters beziehen sich auf</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="229" />
+      <location filename="../plugin/toolbox/base.py" line="271" />
       <source>Estimate the engine's own error against a refined evaluation (tc_numerr; about 4x the time)</source>
       <translation>Eigenen Rechenfehler des Verfahrens gegen eine verfeinerte Auswertung schätzen (tc_numerr; etwa vierfache Rechenzeit)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="131" />
+      <location filename="../plugin/toolbox/base.py" line="135" />
       <source>Feet</source>
       <translation>Fuß</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="154" />
+      <location filename="../plugin/toolbox/base.py" line="249" />
+      <source>First order, 0.3086 mGal/m</source>
+      <translation type="unfinished" />
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="236" />
+      <source>GRS80 (Somigliana closed form)</source>
+      <translation>GRS80 (geschlossene Formel nach Somigliana)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="158" />
       <source>Geoid height field (m, geoid above the ellipsoid)</source>
       <translation>Feld der Geoidhöhe (m, Geoid über dem Ellipsoid)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="162" />
+      <location filename="../plugin/toolbox/base.py" line="166" />
       <source>Geoid height raster (m, geoid above the ellipsoid)</source>
       <translation>Raster der Geoidhöhe (m, Geoid über dem Ellipsoid)</translation>
     </message>
@@ -1795,47 +1725,57 @@
       <translation>Schwerereduktion</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="121" />
+      <location filename="../plugin/toolbox/base.py" line="125" />
       <source>Gravity stations</source>
       <translation>Schwerestationen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="180" />
+      <location filename="../plugin/toolbox/base.py" line="184" />
       <source>HEIGHT_DATUM says the geoid height comes from a field or a raster: choose exactly one of GEOID_FIELD and GEOID_RASTER.</source>
       <translation>HEIGHT_DATUM besagt, dass die Geoidhöhe aus einem Feld oder Raster stammt: wählen Sie genau eines von GEOID_FIELD und GEOID_RASTER.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="130" />
+      <location filename="../plugin/toolbox/base.py" line="246" />
+      <source>Height (free-air) correction</source>
+      <translation type="unfinished" />
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="134" />
       <source>Height units</source>
       <translation>Höheneinheit</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="250" />
+      <location filename="../plugin/toolbox/base.py" line="292" />
       <source>Inner zone radius (m)</source>
       <translation>Radius der Innenzone (m)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="131" />
+      <location filename="../plugin/toolbox/base.py" line="135" />
       <source>Metres</source>
       <translation>Meter</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="251" />
+      <location filename="../plugin/toolbox/base.py" line="234" />
+      <source>Normal gravity</source>
+      <translation type="unfinished" />
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="293" />
       <source>Outer zone radius (m)</source>
       <translation>Radius der Außenzone (m)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="399" />
+      <location filename="../plugin/toolbox/base.py" line="441" />
       <source>Provenance is recorded in GeoPackage and GeoTIFF outputs only; this output has none.</source>
       <translation>Herkunftsangaben werden nur in GeoPackage- und GeoTIFF-Ausgaben aufgezeichnet; diese Ausgabe hat keine.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="217" />
+      <location filename="../plugin/toolbox/base.py" line="221" />
       <source>Reduction density (kg/m³)</source>
       <translation>Reduktionsdichte (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="246" />
+      <location filename="../plugin/toolbox/base.py" line="288" />
       <source>Regional elevation raster for the outer zone</source>
       <translation>Regionales Höhenraster für die Außenzone</translation>
     </message>
@@ -1845,57 +1785,72 @@
       <translation>Die Ergebnisse dienen nur der Interpretation. Prüfen Sie jede Reduktion an den Anschlussmessungen und Vorgaben der Vermessung; Entscheidungen über Bohrungen, Grundwasser oder Bauvorhaben sowie Berichte nach den Regeln einer Rechtsordnung sind Sache zugelassener Fachleute und örtlicher Vorschriften.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="148" />
+      <location filename="../plugin/toolbox/base.py" line="248" />
+      <source>Second order, latitude dependent (Hinze et al. 2005)</source>
+      <translation type="unfinished" />
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="260" />
+      <source>Spherical cap to 166.7 km (add the curvature correction to the slab)</source>
+      <translation>Kugelkappe bis 166,7 km (Krümmungskorrektion zur Platte)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="152" />
       <source>Station heights are</source>
       <translation>Höhenbezug der Stationshöhen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="273" />
+      <location filename="../plugin/toolbox/base.py" line="315" />
       <source>The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m).</source>
       <translation>Der Radius der Innenzone ({} m) muss positiv und kleiner als der Radius der Außenzone ({} m) sein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="316" />
+      <location filename="../plugin/toolbox/base.py" line="358" />
       <source>The input already has a field {}; its values are replaced in the output copy.</source>
       <translation>Die Eingabe hat bereits ein Feld {}; seine Werte werden in der Ausgabekopie ersetzt.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="407" />
+      <location filename="../plugin/toolbox/base.py" line="449" />
       <source>The provenance record could not be written: {}</source>
       <translation>Die Herkunftsangaben konnten nicht geschrieben werden: {}</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="333" />
+      <location filename="../plugin/toolbox/base.py" line="237" />
+      <source>WGS84 (Somigliana closed form)</source>
+      <translation type="unfinished" />
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/base.py" line="375" />
       <source>elevation raster</source>
       <translation>Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="335" />
+      <location filename="../plugin/toolbox/base.py" line="377" />
       <source>geoid raster</source>
       <translation>Geoidraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="338" />
+      <location filename="../plugin/toolbox/base.py" line="380" />
       <source>output station layer</source>
       <translation>Ausgabe-Stationslayer</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="334" />
+      <location filename="../plugin/toolbox/base.py" line="376" />
       <source>regional elevation raster</source>
       <translation>regionales Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="331" />
+      <location filename="../plugin/toolbox/base.py" line="373" />
       <source>station layer</source>
       <translation>Stationslayer</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="200" />
+      <location filename="../plugin/toolbox/base.py" line="204" />
       <source>the field {}</source>
       <translation>Feld {}</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/base.py" line="208" />
+      <location filename="../plugin/toolbox/base.py" line="212" />
       <source>the raster {}</source>
       <translation>Raster {}</translation>
     </message>

@@ -113,6 +113,10 @@ class StationAlgorithm(ReliefGravityAlgorithm):
     #: and outer corrections (see docs/datums.md for the sources checked).
     DEFAULT_INNER_RADIUS = 895.0
     ENGINE_CHECK = "ENGINE_CHECK"
+    NORMAL_GRAVITY = "NORMAL_GRAVITY"
+    HEIGHT_CORRECTION = "HEIGHT_CORRECTION"
+    ATMOSPHERIC = "ATMOSPHERIC"
+    CURVATURE = "CURVATURE"
 
     def add_stations_parameter(self) -> None:
         from qgis.core import QgsProcessing, QgsProcessingParameterFeatureSource
@@ -217,6 +221,44 @@ class StationAlgorithm(ReliefGravityAlgorithm):
                 _tr("Reduction density (kg/m³)"),
                 type=QgsProcessingParameterNumber.Double,
                 defaultValue=DEFAULT_REDUCTION_DENSITY,
+            )
+        )
+
+    def add_standard_parameters(self) -> None:
+        """NORMAL_GRAVITY, HEIGHT_CORRECTION, ATMOSPHERIC, CURVATURE: the reduction standard's choices."""
+        from qgis.core import QgsProcessingParameterBoolean, QgsProcessingParameterEnum
+
+        self.addParameter(
+            QgsProcessingParameterEnum(
+                self.NORMAL_GRAVITY,
+                _tr("Normal gravity"),
+                options=[
+                    _tr("GRS80 (Somigliana closed form)"),
+                    _tr("WGS84 (Somigliana closed form)"),
+                    _tr("1967 formula (legacy databases)"),
+                ],
+                defaultValue=0,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterEnum(
+                self.HEIGHT_CORRECTION,
+                _tr("Height (free-air) correction"),
+                options=[
+                    _tr("Second order, latitude dependent (Hinze et al. 2005)"),
+                    _tr("First order, 0.3086 mGal/m"),
+                ],
+                defaultValue=0,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterBoolean(self.ATMOSPHERIC, _tr("Apply the atmospheric correction"), defaultValue=True)
+        )
+        self.addParameter(
+            QgsProcessingParameterBoolean(
+                self.CURVATURE,
+                _tr("Spherical cap to 166.7 km (add the curvature correction to the slab)"),
+                defaultValue=True,
             )
         )
 

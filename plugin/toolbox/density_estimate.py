@@ -20,7 +20,6 @@ from qgis.core import (
     QgsProcessing,
     QgsProcessingException,
     QgsProcessingOutputNumber,
-    QgsProcessingParameterBoolean,
     QgsProcessingParameterDistance,
     QgsProcessingParameterEnum,
     QgsProcessingParameterFeatureSource,
@@ -180,41 +179,7 @@ class DensityEstimateAlgorithm(StationAlgorithm):
                 minValue=0.0,
             )
         )
-        self.addParameter(
-            QgsProcessingParameterEnum(
-                self.NORMAL_GRAVITY,
-                self.tr("Normal gravity"),
-                options=[
-                    self.tr("GRS80 (Somigliana closed form)"),
-                    self.tr("WGS84 (Somigliana closed form)"),
-                    self.tr("1967 formula (legacy databases)"),
-                ],
-                defaultValue=0,
-            )
-        )
-        self.addParameter(
-            QgsProcessingParameterEnum(
-                self.HEIGHT_CORRECTION,
-                self.tr("Height (free-air) correction"),
-                options=[
-                    self.tr("Second order, latitude dependent (Hinze et al. 2005)"),
-                    self.tr("First order, 0.3086 mGal/m"),
-                ],
-                defaultValue=0,
-            )
-        )
-        self.addParameter(
-            QgsProcessingParameterBoolean(
-                self.ATMOSPHERIC, self.tr("Apply the atmospheric correction"), defaultValue=True
-            )
-        )
-        self.addParameter(
-            QgsProcessingParameterBoolean(
-                self.CURVATURE,
-                self.tr("Spherical cap to 166.7 km (add the curvature correction to the slab)"),
-                defaultValue=True,
-            )
-        )
+        self.add_standard_parameters()
         self.add_zone_parameters(advanced=True)
         self.addParameter(
             QgsProcessingParameterFileDestination(
