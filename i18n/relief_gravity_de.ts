@@ -1647,7 +1647,7 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="238" />
       <source>1967 formula (legacy databases)</source>
-      <translation type="unfinished" />
+      <translation>Formel von 1967 (ältere Datenbanken)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="81" />
@@ -1672,7 +1672,7 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="255" />
       <source>Apply the atmospheric correction</source>
-      <translation type="unfinished" />
+      <translation>Atmosphärenkorrektion anbringen</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="397" />
@@ -1702,7 +1702,7 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="249" />
       <source>First order, 0.3086 mGal/m</source>
-      <translation type="unfinished" />
+      <translation>Erster Ordnung, 0,3086 mGal/m</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="236" />
@@ -1737,7 +1737,7 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="246" />
       <source>Height (free-air) correction</source>
-      <translation type="unfinished" />
+      <translation>Höhenkorrektion (Freiluft)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="134" />
@@ -1757,7 +1757,7 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="234" />
       <source>Normal gravity</source>
-      <translation type="unfinished" />
+      <translation>Normalschwere</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="293" />
@@ -1787,7 +1787,7 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="248" />
       <source>Second order, latitude dependent (Hinze et al. 2005)</source>
-      <translation type="unfinished" />
+      <translation>Zweiter Ordnung, breitenabhängig (Hinze et al. 2005)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="260" />
@@ -1817,7 +1817,7 @@
     <message>
       <location filename="../plugin/toolbox/base.py" line="237" />
       <source>WGS84 (Somigliana closed form)</source>
-      <translation type="unfinished" />
+      <translation>WGS84 (geschlossene Formel nach Somigliana)</translation>
     </message>
     <message>
       <location filename="../plugin/toolbox/base.py" line="375" />
