@@ -81,6 +81,10 @@ VOCABULARY = {
         ("tc_partial", WARNING, "The elevation rasters do not cover the whole correction area (see tc_cover)."),
         ("tc_no_data_zones", WARNING, "Some ring-and-sector compartments had no elevation data and count as flat."),
     ),
+    # --- batch runner -------------------------------------------------------
+    **_entries(
+        ("tc_field_empty", NOT_COMPUTED, "The chosen terrain-correction field is empty: no complete Bouguer anomaly."),
+    ),
 }
 
 
