@@ -17,6 +17,7 @@ import shutil
 import sys
 import tempfile
 import time
+import warnings
 from pathlib import Path
 
 import numpy as np
@@ -124,6 +125,9 @@ def start_client(scheduler: str | None, workers: int, memory_limit: str):
             return Client(scheduler, timeout="20s"), None
         except (OSError, TimeoutError) as error:
             raise BatchError(f"Could not reach the Dask scheduler at {scheduler}: {error}") from error
+    # With the dashboard off the scheduler still opens a small HTTP server;
+    # when port 8787 is taken it picks another and warns: nothing to act on.
+    warnings.filterwarnings("ignore", message="Port 8787 is already in use")
     cluster = LocalCluster(
         n_workers=workers,
         threads_per_worker=1,
