@@ -114,6 +114,11 @@ def peak_memory() -> int:
     return resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024
 
 
+def worker_usage() -> tuple[int, float]:
+    """Peak resident memory (bytes) and CPU seconds of this worker process."""
+    return peak_memory(), time.process_time()
+
+
 def start_client(scheduler: str | None, workers: int, memory_limit: str):
     """A distributed Client (and the LocalCluster it owns, or None)."""
     import dask
@@ -241,7 +246,7 @@ def _compute(plan, cfg, chunks, todo, results, parts, args, log, on_chunk) -> li
             if on_chunk is not None:
                 on_chunk(done, client)
         progress.close()
-        peaks = sorted(client.run(peak_memory).values())
+        peaks = sorted(client.run(worker_usage).values())
     finally:
         client.close()
         if cluster is not None:
@@ -294,5 +299,7 @@ def _assemble(plan, args, chunks, results, parts, peaks, resumed, log) -> dict:
     what = "terrain correction computed" if plan.command == "terrain" else "with a free-air anomaly"
     log(f"{plan.n:,} stations: {computed:,} {what}, {flagged:,} flagged. Output: {out}")
     if peaks:
-        log("Peak memory per worker: " + ", ".join(f"{p / 2**20:,.0f} MiB" for p in peaks) + f" (limit {args.memory_limit}).")
-    return {"stations": plan.n, "computed": computed, "flagged": flagged, "chunks": len(chunks), "resumed_chunks": resumed, "peak_memory": peaks}
+        limit = "" if args.scheduler else f" (limit {args.memory_limit})"
+        log("Peak memory per worker: " + ", ".join(f"{p / 2**20:,.0f} MiB" for p, _ in peaks) + limit
+            + "; CPU time per worker: " + ", ".join(f"{c:,.1f} s" for _, c in peaks) + ".")
+    return {"stations": plan.n, "computed": computed, "flagged": flagged, "chunks": len(chunks), "resumed_chunks": resumed, "workers": peaks}
