@@ -189,9 +189,10 @@ def write_output(
     ds, lyr = open_layer(source_path, layer_name)
     out_dir = os.path.dirname(os.path.abspath(out_path))
     suffix = Path(out_path).suffix
+    # Temporary files of an earlier assembly killed before its rename.
+    for stale in Path(out_dir).glob(f".{Path(out_path).stem}.writing-*{suffix}"):
+        stale.unlink()
     temp = os.path.join(out_dir, f".{Path(out_path).stem}.writing-{os.getpid()}{suffix}")
-    if os.path.exists(temp):
-        os.remove(temp)
     driver = ogr.GetDriverByName(driver_name)
     out_ds = driver.CreateDataSource(temp)
     try:
