@@ -34,7 +34,7 @@ class Plan:
     layer_name: str | None
     n: int
     arrays: dict  # per-station arrays sent to the tasks (None when not used)
-    flags: dict  # "a", "b" (None: from the DEM), "c": lists of code lists
+    flags: dict  # "a", "b" (None: from the DEM), "c": station index -> codes (sparse)
     config: dict  # settings sent with every task
     positions: tuple  # (x, y) used to partition the stations
     regional_source: str | None = None
@@ -67,10 +67,12 @@ def _labels(command: str, v: dict) -> dict:
     return {v[k]: label for k, label in keys.items() if v.get(k)}
 
 
-def _flag_where(flags, mask, code) -> None:
-    for i in np.flatnonzero(mask):
-        if code not in flags[i]:
-            flags[i].append(code)
+def _flag_where(flags: dict, mask, code) -> None:
+    """Add ``code`` to the stations of ``mask`` (flags: index -> codes, sparse)."""
+    for i in np.flatnonzero(mask).tolist():
+        codes = flags.setdefault(i, [])
+        if code not in codes:
+            codes.append(code)
 
 
 def _check_output(v: dict, overwrite: bool, resuming: bool) -> None:
@@ -110,7 +112,7 @@ def prepare(command: str, v: dict, *, overwrite: bool = False, resuming: bool = 
     names = [v[k] for k in ("GRAVITY_FIELD", "HEIGHT_FIELD", "DENSITY_FIELD", "TC_FIELD", "INNERMOST_TC_FIELD") if v.get(k)]
     st = read_arrays(lyr, srs, list(dict.fromkeys(names)))
     n = len(st)
-    flags_a = [[] for _ in range(n)]
+    flags_a: dict = {}
     _flag_where(flags_a, np.isnan(st.x), "no_geometry")
     lon, lat = transform_points(srs, geographic_wkt(), st.x, st.y)
     bad = ~np.isnan(lat) & ((np.abs(lat) > 90.0) | (np.abs(lon) > 360.0))
@@ -140,12 +142,12 @@ def prepare(command: str, v: dict, *, overwrite: bool = False, resuming: bool = 
     if height_field:
         scale = FOOT if v["HEIGHT_UNITS"] == 1 else 1.0
         arrays["heights"] = st.values[height_field] * scale
-        flags_b = [[] for _ in range(n)]
+        flags_b: dict = {}
         _flag_where(flags_b, np.isnan(arrays["heights"]), "no_height")
     else:
         arrays["heights"] = None
 
-    flags_c = [[] for _ in range(n)]
+    flags_c: dict = {}
     if command == "terrain":
         density = np.full(n, v["DENSITY"])
         innermost = v.get("INNERMOST_TC_FIELD")

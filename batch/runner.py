@@ -17,6 +17,7 @@ import shutil
 import sys
 import tempfile
 import time
+import uuid
 import warnings
 from pathlib import Path
 
@@ -159,8 +160,8 @@ def _payload(plan: Plan, index: int, rows: np.ndarray) -> dict:
     for key, values in plan.arrays.items():
         chunk[key] = None if values is None else np.asarray(values)[rows]
     for key in ("a", "c"):
-        chunk["flags_" + key] = [plan.flags[key][i] for i in rows]
-    chunk["flags_b"] = None if plan.flags["b"] is None else [plan.flags["b"][i] for i in rows]
+        chunk["flags_" + key] = [plan.flags[key].get(i, []) for i in rows.tolist()]
+    chunk["flags_b"] = None if plan.flags["b"] is None else [plan.flags["b"].get(i, []) for i in rows.tolist()]
     return chunk
 
 
@@ -236,12 +237,24 @@ def _compute(plan, cfg, chunks, todo, results, parts, args, log, on_chunk) -> li
     try:
         where = args.scheduler or f"a local cluster of {args.workers} worker process(es), {args.memory_limit} each"
         log(f"Computing {len(todo):,} chunks on {where}.")
-        remote_cfg = client.scatter(cfg, broadcast=True) if args.scheduler else cfg
-        futures = [
-            client.submit(run_chunk, _payload(plan, i, chunks[i]), remote_cfg, key=f"relief-gravity-{plan.command}-{i}-{id(plan):x}", retries=2, pure=False)
-            for i in todo
-        ]
-        for done, future in enumerate(as_completed(futures), start=1):
+        # A bounded number of tasks in flight keeps the driver's and the
+        # scheduler's memory flat whatever the number of stations; chunks
+        # come in partition order, so tasks in flight are neighbours.
+        n_workers = max(len(client.scheduler_info().get("workers", {})), 1)
+        window = max(4 * n_workers, 8)
+        token = uuid.uuid4().hex[:8]
+        pending = iter(todo)
+        running = as_completed()
+
+        def submit_next() -> None:
+            i = next(pending, None)
+            if i is not None:
+                key = f"relief-gravity-{plan.command}-{token}-{i}"
+                running.add(client.submit(run_chunk, _payload(plan, i, chunks[i]), cfg, key=key, retries=2, pure=False))
+
+        for _ in range(window):
+            submit_next()
+        for done, future in enumerate(running, start=1):
             try:
                 result = future.result()
             except Exception as error:  # noqa: BLE001 - reported as a sentence
@@ -250,6 +263,7 @@ def _compute(plan, cfg, chunks, todo, results, parts, args, log, on_chunk) -> li
                     f"A chunk failed ({name}: {error}). The {len(results):,} chunks computed so far are kept in "
                     f"{parts.folder}; run the same command again to resume."
                 ) from error
+            submit_next()
             parts.save(result)
             results[result["index"]] = result
             progress.add(len(result["rows"]))

@@ -132,6 +132,28 @@ def setup_cost(inputs: dict, n_marginal: int = 200) -> dict:
     return out
 
 
+def driver_cost(inputs: dict, folder: Path) -> tuple[float, float]:
+    """Seconds the driver spends alone: checking and reading the stations
+    (prepare) and writing the output copy (assembly), for this run's size."""
+    from relief_gravity.batch.options import COMMANDS
+    from relief_gravity.batch.prepare import prepare
+    from relief_gravity.batch.vector import write_output
+
+    values = {p.name: (p.default if p.kind in ("number", "enum", "bool") else None) for p in COMMANDS["reduce"][1]}
+    values.update(INPUT=inputs["stations"], GRAVITY_FIELD="g", HEIGHT_FIELD="h", DEM=inputs["fine"],
+                  REGIONAL_DEM=inputs["regional"], OUTPUT=str(folder / "driver.gpkg"))
+    t0 = time.monotonic()
+    plan = prepare("reduce", values, overwrite=True)
+    t_read = time.monotonic() - t0
+    columns = {name: np.zeros(plan.n) for name in ("normal_g", "height_corr", "atmos_corr", "slab_corr", "curv_corr",
+                                                   "tc_inner", "tc_outer", "tc_total", "faa", "sba", "cba")}
+    t0 = time.monotonic()
+    temp = write_output(inputs["stations"], None, values["OUTPUT"], columns, {"qc_flag": [""] * plan.n, "qc_note": [""] * plan.n})
+    t_write = time.monotonic() - t0
+    os.remove(temp)
+    return t_read, t_write
+
+
 def national_cells(cell: float = 30.0, outer: float = 166_735.0) -> float:
     """Cells one chunk's set-up reads from a fine mosaic that covers the whole
     disc: the nested level windows, the largest a square of side 2 x outer;
@@ -174,6 +196,10 @@ def main() -> None:
         rate = c1 / t1
         print(f"[per-chunk set-up, in-process CPU] one-station chunk {t1:.2f} s reading {c1 / 1e6:.2f} M cells "
               f"({rate / 1e6:.1f} M cells/s); 200-station chunk {tn:.2f} s -> {per_station * 1000:.2f} CPU-ms per extra station")
+        t_read, t_write = driver_cost(inputs, folder)
+        print(f"[driver, serial] checking and reading {args.stations:,} stations {t_read:.1f} s "
+              f"({t_read / args.stations * 1e6:.0f} us/station), writing the output copy {t_write:.1f} s "
+              f"({t_write / args.stations * 1e6:.0f} us/station)")
         nat = national_cells()
         print(f"[national model] a 30 m mosaic covering each chunk's 166.7 km disc: about {nat / 1e6:.0f} M cells read per chunk, "
               f"{nat / rate:.0f} CPU-s of set-up per chunk at the measured rate")
