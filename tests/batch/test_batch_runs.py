@@ -217,3 +217,12 @@ def test_parquet_output_where_gdal_has_the_driver(small_survey, tmp_path, dask_a
         return
     assert main(argv) == 0
     assert ogr.Open(str(out)).GetLayer(0).GetFeatureCount() == small_survey["n"]
+
+
+def test_partition_doctest():
+    import doctest
+
+    import relief_gravity.batch.partition as module
+
+    result = doctest.testmod(module)
+    assert result.attempted > 0 and result.failed == 0
