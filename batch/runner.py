@@ -196,6 +196,13 @@ def run(command: str, values: dict, args, *, log=print, on_chunk=None) -> dict:
         raise BatchError(f"--workers must be at least 1, got {args.workers}.")
     if args.chunk_size < 1:
         raise BatchError(f"--chunk-size must be at least 1, got {args.chunk_size}.")
+    from dask.utils import parse_bytes
+
+    try:
+        if parse_bytes(args.memory_limit) < 256 * 2**20:
+            raise ValueError
+    except (ValueError, TypeError):
+        raise BatchError(f"--memory-limit must be a size of at least 256MiB, such as 2GiB; got {args.memory_limit!r}.") from None
     plan = prepare(command, values, overwrite=args.overwrite, resuming=resuming)
     for text in plan.warnings:
         log("Warning: " + text)

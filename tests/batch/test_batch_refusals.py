@@ -106,6 +106,8 @@ CASES = [
     ("terrain", {"--output": "@exists"}, "add --overwrite"),
     ("terrain", {"--workers": "0"}, "--workers must be at least 1"),
     ("terrain", {"--chunk-size": "0"}, "--chunk-size must be at least 1"),
+    ("terrain", {"--memory-limit": "lots"}, "--memory-limit must be a size"),
+    ("terrain", {"--memory-limit": "10MB"}, "--memory-limit must be a size"),
 ]
 
 

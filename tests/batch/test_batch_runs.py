@@ -226,3 +226,23 @@ def test_partition_doctest():
 
     result = doctest.testmod(module)
     assert result.attempted > 0 and result.failed == 0
+
+
+def test_module_entry_point_and_checkout_launcher(tmp_path, small_survey, reference, rows_of):
+    """``python3 -m relief_gravity.batch`` with the plugin folder's parent on
+    PYTHONPATH, and ``tools/batch.py`` from the checkout (its own local cluster)."""
+    link = tmp_path / "plugins" / "relief_gravity"
+    link.parent.mkdir()
+    link.symlink_to(REPO, target_is_directory=True)
+    env = dict(os.environ, PYTHONPATH=str(link.parent))
+    shown = subprocess.run([sys.executable, "-m", "relief_gravity.batch", "reduce", "--help"], env=env, capture_output=True, text=True, timeout=60)
+    assert shown.returncode == 0 and "--gravity-field" in shown.stdout and "--normal-gravity" in shown.stdout
+    out = tmp_path / "launched.gpkg"
+    argv = _argv(small_survey, out, "--workers", "1", "--chunk-size", "60")
+    env = {k: v for k, v in os.environ.items() if k != "PYTHONPATH"}
+    done = subprocess.run([sys.executable, str(REPO / "tools" / "batch.py"), *argv], env=env, capture_output=True, text=True, timeout=120, cwd=tmp_path)
+    assert done.returncode == 0, done.stderr
+    assert "Peak memory per worker" in done.stdout
+    _, rows_a = rows_of(reference)
+    _, rows_b = rows_of(out)
+    assert rows_a == rows_b
