@@ -286,6 +286,11 @@ def _compute(plan, cfg, chunks, todo, results, parts, args, log, on_chunk) -> li
             shutil.rmtree(path_folder, ignore_errors=True)
             if path_folder in sys.path:
                 sys.path.remove(path_folder)
+            kept = [p for p in os.environ.get("PYTHONPATH", "").split(os.pathsep) if p and p != path_folder]
+            if kept:
+                os.environ["PYTHONPATH"] = os.pathsep.join(kept)
+            else:
+                os.environ.pop("PYTHONPATH", None)
     return peaks
 
 
