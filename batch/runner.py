@@ -138,7 +138,7 @@ def start_client(scheduler: str | None, workers: int, memory_limit: str):
     )
     if scheduler:
         try:
-            return Client(scheduler, timeout="20s"), None
+            return Client(scheduler, timeout=dask.config.get("distributed.comm.timeouts.connect")), None
         except (OSError, TimeoutError) as error:
             raise BatchError(f"Could not reach the Dask scheduler at {scheduler}: {error}") from error
     # With the dashboard off the scheduler still opens a small HTTP server;

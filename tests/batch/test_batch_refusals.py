@@ -157,3 +157,16 @@ def test_parts_of_another_run_are_not_mixed(base, tmp_path, capsys):
     Parts(out).open("another-run", 3, 10)
     code, err = _run(base["terrain"], capsys)
     assert code == 1 and "holds the parts of another run" in err
+
+
+def test_unreachable_scheduler_is_a_sentence(base, capsys):
+    import socket
+
+    import dask
+
+    with socket.socket() as probe:  # a local port nobody listens on
+        probe.bind(("127.0.0.1", 0))
+        port = probe.getsockname()[1]
+    with dask.config.set({"distributed.comm.timeouts.connect": "2s"}):
+        code, err = _run(base["terrain"] + ["--scheduler", f"tcp://127.0.0.1:{port}"], capsys)
+    assert code == 1 and "Could not reach the Dask scheduler" in err
