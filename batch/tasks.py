@@ -13,13 +13,16 @@ from __future__ import annotations
 import numpy as np
 
 from ..algorithms import REDUCTION_FIELDS
+from ..algorithms.terrain import HAMMER_ZONES
 from . import adapters
 from .flags import as_qc_flag, codes_of
+from .options import param
 from .rasters import cached
 
-HAMMER_ZONE_LETTERS = "BCDEFGHIJKLM"
-NORMAL_FORMULAS = ("grs80", "wgs84", "1967")
-HEIGHT_FORMULAS = ("second_order", "first_order")
+HAMMER_ZONE_LETTERS = "".join(zone.letter for zone in HAMMER_ZONES)
+#: The enumeration words are the names ``reduce_gravity`` takes (dashes aside).
+NORMAL_FORMULAS = param("reduce", "NORMAL_GRAVITY").words
+HEIGHT_FORMULAS = tuple(w.replace("-", "_") for w in param("reduce", "HEIGHT_CORRECTION").words)
 
 
 def _heights(chunk: dict, fine_raster):

@@ -48,8 +48,19 @@ def reference(small_survey, tmp_path_factory, dask_address):
     from relief_gravity.batch.cli import main
 
     out = tmp_path_factory.mktemp("reference") / "ref.gpkg"
+    before = {k: _digest(small_survey[k]) for k in ("stations", "dem")}
+    listing = sorted(p.name for p in Path(small_survey["dem"]).parent.iterdir())
     assert main(_argv(small_survey, out, "--scheduler", dask_address, "--chunk-size", "12")) == 0
+    # Inputs untouched: same bytes, no side files (.aux.xml, locks) beside them.
+    assert {k: _digest(small_survey[k]) for k in ("stations", "dem")} == before
+    assert sorted(p.name for p in Path(small_survey["dem"]).parent.iterdir()) == listing
     return out
+
+
+def _digest(path):
+    import hashlib
+
+    return hashlib.sha256(Path(path).read_bytes()).hexdigest()
 
 
 def test_reference_run_is_complete(reference, rows_of, small_survey):
