@@ -3,6 +3,7 @@
 
 from __future__ import annotations
 
+import importlib.util
 import sys
 
 from .errors import BatchError
@@ -13,6 +14,15 @@ def main(argv=None, *, on_chunk=None) -> int:
     """Parse, run, report; 0 on success, 1 with a sentence on a problem, 130 when interrupted."""
     args = build_parser().parse_args(argv)
     values = processing_values(args.command, args)
+    missing = [name for name in ("osgeo", "distributed") if importlib.util.find_spec(name) is None]
+    if missing:
+        print(
+            f"Error: this Python ({sys.executable}) lacks {' and '.join(missing)}. The batch runner needs GDAL's "
+            "Python bindings and dask.distributed: on Debian install python3-gdal python3-dask python3-distributed "
+            "(tools/setup.sh does) and run it with /usr/bin/python3 or the project's .venv/bin/python.",
+            file=sys.stderr,
+        )
+        return 1
     from .runner import run
     from .store import parts_dir
 
