@@ -170,3 +170,12 @@ def test_unreachable_scheduler_is_a_sentence(base, capsys):
     with dask.config.set({"distributed.comm.timeouts.connect": "2s"}):
         code, err = _run(base["terrain"] + ["--scheduler", f"tcp://127.0.0.1:{port}"], capsys)
     assert code == 1 and "Could not reach the Dask scheduler" in err
+
+
+def test_python_without_dask_gets_a_sentence(base, capsys, monkeypatch):
+    import importlib.util
+
+    real = importlib.util.find_spec
+    monkeypatch.setattr(importlib.util, "find_spec", lambda name, *a: None if name == "distributed" else real(name, *a))
+    code, err = _run(base["terrain"], capsys)
+    assert code == 1 and "lacks distributed" in err and "python3-distributed" in err
