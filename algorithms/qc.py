@@ -83,7 +83,7 @@ VOCABULARY = {
     ),
     # --- batch runner -------------------------------------------------------
     **_entries(
-        ("tc_field_empty", NOT_COMPUTED, "The chosen terrain-correction field is empty: no complete Bouguer anomaly."),
+        ("no_tc", NOT_COMPUTED, "No terrain correction for this station: no complete Bouguer anomaly."),
     ),
 }
 

@@ -25,7 +25,7 @@ REASON_CODES = {
     "height from DEM": "height_from_dem",
     "density missing, default used": "density_default",
     "unusual density": "density_unusual",
-    "no terrain correction": "tc_field_empty",
+    "no terrain correction": "no_tc",
     "outside DEM": "outside_dem",
     "no DEM at station": "no_dem_at_station",
 }

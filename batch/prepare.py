@@ -170,7 +170,7 @@ def prepare(command: str, v: dict, *, overwrite: bool = False, resuming: bool = 
         arrays["density"] = density
         arrays["tc_field"] = st.values[tc_field] if tc_field else None
         if tc_field:
-            _flag_where(flags_c, np.isnan(arrays["tc_field"]), "tc_field_empty")
+            _flag_where(flags_c, np.isnan(arrays["tc_field"]), "no_tc")
         elif dem is None:
             plan_warnings.append("No terrain-correction field and no elevation raster: cba is left empty.")
 

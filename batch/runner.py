@@ -294,6 +294,15 @@ def _compute(plan, cfg, chunks, todo, results, parts, args, log, on_chunk) -> li
     return peaks
 
 
+def _input_record(path: str, layer: str | None) -> dict | None:
+    """The station file's provenance record, None without one (GDAL raises
+    for a file it cannot open as a raster when exceptions are on)."""
+    try:
+        return provenance.read_record(path, layer)
+    except RuntimeError:
+        return None
+
+
 def _assemble(plan, args, chunks, results, parts, peaks, resumed, log) -> dict:
     names = list(results[0]["columns"]) if results else []
     columns = {k: np.full(plan.n, np.nan) for k in names}
@@ -316,7 +325,7 @@ def _assemble(plan, args, chunks, results, parts, peaks, resumed, log) -> dict:
     )
     algorithm = COMMANDS[plan.command][0]
     step = provenance.make_step(algorithm, plan.values, _settings(plan, args, len(chunks)))
-    record = provenance.chained(provenance.read_record(plan.stations_path, plan.layer_name), step)
+    record = provenance.chained(_input_record(plan.stations_path, plan.layer_name), step)
     try:
         if out.lower().endswith(".gpkg"):
             provenance.write_record(temp, record, Path(out).stem)

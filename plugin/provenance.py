@@ -80,14 +80,6 @@ def _split_source(path: str) -> tuple[str, str | None]:
     return parts[0], layer
 
 
-def _quiet_open(opener, *args):
-    """``opener(*args)``, None when it fails (also with GDAL exceptions enabled)."""
-    try:
-        return opener(*args)
-    except RuntimeError:
-        return None
-
-
 def read_record(path: str, layer: str | None = None) -> dict | None:
     """The record of a GeoPackage layer or a raster, or None when it has none."""
     file_path, named = _split_source(path)
@@ -96,14 +88,14 @@ def read_record(path: str, layer: str | None = None) -> dict | None:
     gdal.PushErrorHandler("CPLQuietErrorHandler")
     try:
         if file_path.lower().endswith(".gpkg") or layer is not None:
-            ds = _quiet_open(ogr.Open, file_path, 0)
+            ds = ogr.Open(file_path, 0)
             if ds is not None:
                 lyr = ds.GetLayerByName(layer) if layer else ds.GetLayer(0)
                 if lyr is not None:
                     text = lyr.GetMetadataItem(KEY)
                 ds = None
         if text is None:
-            ds = _quiet_open(gdal.Open, file_path)
+            ds = gdal.Open(file_path)
             if ds is not None:
                 text = ds.GetMetadataItem(KEY)
                 ds = None

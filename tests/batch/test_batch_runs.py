@@ -31,7 +31,7 @@ def _record(path):
     record = read_record(str(path))
     for step in record["steps"]:
         step.pop("time")
-        step["parameters"].pop("OUTPUT")
+        step["parameters"].pop("OUTPUT", None)
     return record
 
 
@@ -205,14 +205,25 @@ def test_progress_line_states_count_rate_and_time_left():
     assert "300/1,000 stations" in line and "20.0/s" in line and "00:00:35 left" in line
 
 
-def test_provenance_of_a_layer_without_record_is_none(small_survey):
-    from osgeo import gdal
+def test_provenance_record_follows_the_input_record(small_survey, tmp_path, reference, dask_address):
+    import shutil
 
-    from relief_gravity.plugin.provenance import read_record
+    from relief_gravity.batch.cli import main
+    from relief_gravity.plugin.provenance import chained, make_step, write_record
 
-    gdal.UseExceptions()
-    assert read_record(small_survey["stations"]) is None
-    assert read_record(small_survey["dem"]) is None
+    alone = _record(reference)
+    assert [step["algorithm"] for step in alone["steps"]] == ["reliefgravity:bouguerreduction"]
+    settings = alone["steps"][0]["settings"]
+    assert settings["runner"] == "relief_gravity.batch" and settings["normal_gravity"] == "grs80"
+    assert alone["steps"][0]["parameters"]["GRAVITY_FIELD"] == "g"
+
+    stations = tmp_path / "with_record.gpkg"
+    shutil.copy(small_survey["stations"], stations)
+    write_record(str(stations), chained(None, make_step("reliefgravity:observedgravity", {"X": 1}, {})), "stations")
+    survey = dict(small_survey, stations=str(stations))
+    out = tmp_path / "chained.gpkg"
+    assert main(_argv(survey, out, "--scheduler", dask_address, "--chunk-size", "120")) == 0
+    assert [step["algorithm"] for step in _record(out)["steps"]] == ["reliefgravity:observedgravity", "reliefgravity:bouguerreduction"]
 
 
 def test_parquet_output_where_gdal_has_the_driver(small_survey, tmp_path, dask_address, capsys):
