@@ -49,6 +49,8 @@ def _check_numbers(command: str, v: dict) -> None:
                 raise BatchError(f"{p.option} must be a number, got {value}.")
             if p.minimum is not None and value < p.minimum:
                 raise BatchError(f"{p.option} must be at least {p.minimum:g}, got {value:g}.")
+            if p.maximum is not None and value > p.maximum:
+                raise BatchError(f"{p.option} must be at most {p.maximum:g}, got {value:g}.")
     density = v["DENSITY"]
     if not density > 0:
         raise BatchError(f"The reduction density must be positive (kg/m³); got {density}.")

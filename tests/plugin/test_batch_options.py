@@ -20,6 +20,8 @@ KINDS = {
     "number": "QgsProcessingParameterNumber",
     "enum": "QgsProcessingParameterEnum",
     "bool": "QgsProcessingParameterBoolean",
+    "string": "QgsProcessingParameterString",
+    "polygons": "QgsProcessingParameterFeatureSource",
 }
 
 
@@ -42,12 +44,12 @@ def test_every_parameter_has_an_option_of_the_same_kind(provider, command):
         d = definitions[p.name]
         assert type(d).__name__ == KINDS[p.kind], p.name
         optional = bool(d.flags() & QgsProcessingParameterDefinition.FlagOptional)
-        if p.kind in ("field", "raster", "source"):
+        if p.kind in ("field", "raster", "source", "polygons"):
             assert optional == p.optional, p.name
         if p.kind == "enum":
             assert len(d.options()) == len(p.words), p.name
             assert d.defaultValue() == p.default, p.name
-        if p.kind in ("bool", "number"):
+        if p.kind in ("bool", "number", "string"):
             assert d.defaultValue() == p.default, p.name
         if p.kind == "number":
             assert optional == p.optional, p.name
@@ -55,6 +57,9 @@ def test_every_parameter_has_an_option_of_the_same_kind(provider, command):
                 assert d.minimum() == p.minimum, p.name
             else:
                 assert d.minimum() < -1e300, p.name
+            assert d.maximum() == (p.maximum if p.maximum is not None else d.maximum()), p.name
+            if p.maximum is None:
+                assert d.maximum() > 1e300, p.name
 
 
 @pytest.mark.parametrize("command", list(COMMANDS))
