@@ -96,44 +96,10 @@ class GdalRaster:
         )
 
     def sample_bilinear(self, x: np.ndarray, y: np.ndarray) -> np.ndarray:
-        """Bilinear heights at points in the raster CRS (the plugin's rule).
+        """Bilinear heights at points in the raster CRS (the engine's sampler, as the plugin)."""
+        from ..algorithms.terrain import sample_bilinear
 
-        NaN outside the extent or where a corner of the 2 x 2 stencil has no
-        data; edge cells are clamped (the outer half cell takes edge values).
-        """
-        x = np.asarray(x, dtype=float)
-        y = np.asarray(y, dtype=float)
-        out = np.full(x.shape, np.nan)
-        col = (x - self.x_origin) / self.cell_x - 0.5
-        row = (self.y_origin - y) / self.cell_y - 0.5
-        inside = (
-            np.isfinite(col)
-            & np.isfinite(row)
-            & (x >= self.x_origin)
-            & (x <= self.x_origin + self.cell_x * self.n_cols)
-            & (y <= self.y_origin)
-            & (y >= self.y_origin - self.cell_y * self.n_rows)
-        )
-        if not inside.any():
-            return out
-        c0 = np.clip(np.floor(col[inside]).astype(int), 0, max(self.n_cols - 2, 0))
-        r0 = np.clip(np.floor(row[inside]).astype(int), 0, max(self.n_rows - 2, 0))
-        r_lo, r_hi = int(r0.min()), int(r0.max()) + 2
-        c_lo, c_hi = int(c0.min()), int(c0.max()) + 2
-        if (r_hi - r_lo) * (c_hi - c_lo) <= 25_000_000:
-            window = self.read_window(r_lo, c_lo, r_hi - r_lo, c_hi - c_lo)
-            corners = [window[r0 - r_lo + dr, c0 - c_lo + dc] for dr in (0, 1) for dc in (0, 1)]
-        else:
-            corners = [np.empty(len(r0)) for _ in range(4)]
-            for k, (r, c) in enumerate(zip(r0, c0)):
-                w = self.read_window(int(r), int(c), 2, 2)
-                for m, (dr, dc) in enumerate(((0, 0), (0, 1), (1, 0), (1, 1))):
-                    corners[m][k] = w[dr, dc]
-        fr = np.clip(row[inside] - r0, 0.0, 1.0)
-        fc = np.clip(col[inside] - c0, 0.0, 1.0)
-        z00, z01, z10, z11 = corners
-        out[inside] = z00 * (1 - fr) * (1 - fc) + z01 * (1 - fr) * fc + z10 * fr * (1 - fc) + z11 * fr * fc
-        return out
+        return sample_bilinear(self.elevation_grid(), x, y)
 
 
 def open_checked(path: str, label: str) -> GdalRaster:

@@ -159,9 +159,8 @@ def _payload(plan: Plan, index: int, rows: np.ndarray) -> dict:
     chunk = {"index": index, "rows": rows}
     for key, values in plan.arrays.items():
         chunk[key] = None if values is None else np.asarray(values)[rows]
-    for key in ("a", "c"):
+    for key in ("a", "b", "c"):
         chunk["flags_" + key] = [plan.flags[key].get(i, []) for i in rows.tolist()]
-    chunk["flags_b"] = None if plan.flags["b"] is None else [plan.flags["b"].get(i, []) for i in rows.tolist()]
     return chunk
 
 

@@ -15,7 +15,7 @@ import numpy as np
 from ..algorithms import REDUCTION_FIELDS
 from ..algorithms.terrain import HAMMER_ZONES
 from . import adapters
-from .flags import as_qc_flag, codes_of
+from .flags import as_qc_flag
 from .options import param
 from .rasters import cached
 
@@ -25,88 +25,90 @@ NORMAL_FORMULAS = param("reduce", "NORMAL_GRAVITY").words
 HEIGHT_FORMULAS = tuple(w.replace("-", "_") for w in param("reduce", "HEIGHT_CORRECTION").words)
 
 
-def _heights(chunk: dict, fine_raster):
-    """Heights from the chunk, or sampled from the DEM (flags B)."""
-    if chunk.get("heights") is not None:
-        return np.asarray(chunk["heights"], float), chunk["flags_b"]
-    heights = fine_raster.sample_bilinear(chunk["x"], chunk["y"])
-    flags = [["height_from_dem"] if np.isfinite(h) else ["no_height"] for h in heights]
-    return heights, flags
-
-
-def _terrain(chunk: dict, cfg: dict, heights, density, innermost, method):
+def _terrain(chunk: dict, cfg: dict, density, innermost, method):
     fine_raster = cached(cfg["dem"])
     regional = cached(cfg["regional"]).elevation_grid() if cfg.get("regional") else None
     return adapters.terrain_chunk(
         chunk["x"],
         chunk["y"],
-        heights,
+        np.asarray(chunk["heights"], float),
         fine_raster.elevation_grid(),
         regional,
         inner_radius=cfg["inner_radius"],
         outer_radius=cfg["outer_radius"],
         density=density,
-        reference_density=cfg["reference_density"],
         innermost_tc=innermost,
         water_density=cfg.get("water_density"),
         method=method,
+        zones=cfg.get("zones", HAMMER_ZONE_LETTERS),
     )
+
+
+def _engine_columns(chunk: dict, cfg: dict, result: dict, late: list) -> dict:
+    """dem_diff, tc_cover, tc_trunc and the height_dem_mismatch flags of the exact engine."""
+    grid = cached(cfg["dem"]).elevation_grid()
+    off = adapters.mismatch(grid, chunk["x"], chunk["y"], result["dem_diff"])
+    for i in np.flatnonzero(off).tolist():
+        late[i].append("height_dem_mismatch")
+    return {"dem_diff": result["dem_diff"], "tc_cover": result["coverage"], "tc_trunc": result["tc_trunc"]}
 
 
 def run_chunk(chunk: dict, cfg: dict) -> dict:
     """Compute one chunk; returns ``{"index", "rows", "columns", "qc_flag"}``."""
     n = len(chunk["rows"])
-    fine_raster = cached(cfg["dem"]) if cfg.get("dem") else None
-    if fine_raster is not None and chunk.get("heights") is None:
-        heights, flags_b = _heights(chunk, fine_raster)
-    else:
-        heights, flags_b = np.asarray(chunk["heights"], float), chunk["flags_b"]
-    engine_flags = [""] * n
+    engine_flags = [[] for _ in range(n)]
+    late = [[] for _ in range(n)]
     columns: dict = {}
     if cfg["command"] == "terrain":
         method = cfg["method"]
-        density = np.full(n, cfg["density"])
         innermost = None if chunk.get("innermost") is None else np.asarray(chunk["innermost"], float)
-        result = _terrain(chunk, cfg, heights, density, innermost, method)
+        result = _terrain(chunk, cfg, np.full(n, cfg["density"]), innermost, method)
         engine_flags = result["flags"]
         columns = {k: result[k] for k in ("tc_inner", "tc_outer", "tc_total")}
         if method == adapters.EXACT:
-            columns["dem_diff"] = result["dem_diff"]
-            columns["tc_cover"] = result["coverage"]
+            columns.update(_engine_columns(chunk, cfg, result, late))
         elif cfg["zone_fields"]:
             for letter in HAMMER_ZONE_LETTERS:
                 if letter in result["zones"]:
                     columns["tc_" + letter.lower()] = result["zones"][letter]
     else:
         density = np.asarray(chunk["density"], float)
-        tc_inner = np.full(n, np.nan)
-        tc_outer = np.full(n, np.nan)
+        nan = np.full(n, np.nan)
+        engine = {"tc_inner": nan, "tc_outer": nan, "dem_diff": nan, "tc_cover": nan}
+        truncation = None
         if chunk.get("tc_field") is not None:
             tc_total = np.asarray(chunk["tc_field"], float)
         elif cfg.get("dem") and cfg["terrain_from_dem"]:
-            result = _terrain(chunk, cfg, heights, density, None, adapters.EXACT)
+            result = _terrain(chunk, cfg, density, None, adapters.EXACT)
             engine_flags = result["flags"]
-            tc_inner, tc_outer, tc_total = result["tc_inner"], result["tc_outer"], result["tc_total"]
+            tc_total = result["tc_total"]
+            engine = {"tc_inner": result["tc_inner"], "tc_outer": result["tc_outer"], **_engine_columns(chunk, cfg, result, late)}
+            truncation = result["tc_trunc"]
         else:
-            tc_total = np.full(n, np.nan)
+            tc_total = nan
+        options = {
+            "normal_formula": NORMAL_FORMULAS[cfg["normal_gravity"]],
+            "height_formula": HEIGHT_FORMULAS[cfg["height_correction"]],
+            "atmospheric": cfg["atmospheric"],
+            "curvature": cfg["curvature"],
+        }
+        reduction_heights = np.asarray(chunk["reduction_heights"], float)
         reduced = adapters.reduce_chunk(
-            np.asarray(chunk["observed"], float),
-            np.asarray(chunk["latitude"], float),
-            heights,
-            density,
-            tc_total,
-            normal_formula=NORMAL_FORMULAS[cfg["normal_gravity"]],
-            height_formula=HEIGHT_FORMULAS[cfg["height_correction"]],
-            atmospheric=cfg["atmospheric"],
-            curvature=cfg["curvature"],
+            np.asarray(chunk["observed"], float), np.asarray(chunk["latitude"], float), reduction_heights, density, tc_total, **options
         )
-        reduced["tc_inner"] = tc_inner
-        reduced["tc_outer"] = tc_outer
-        at = REDUCTION_FIELDS.index("tc_total")
-        names = REDUCTION_FIELDS[:at] + ("tc_inner", "tc_outer") + REDUCTION_FIELDS[at:]
+        names = REDUCTION_FIELDS[: REDUCTION_FIELDS.index("tc_total")]
         columns = {k: np.asarray(reduced[k], float) for k in names}
+        columns.update({"tc_inner": engine["tc_inner"], "tc_outer": engine["tc_outer"]})
+        columns.update({k: np.asarray(reduced[k], float) for k in REDUCTION_FIELDS if k not in columns})
+        columns.update(engine)
+        grid = cached(cfg["dem"]).elevation_grid() if cfg.get("dem") and chunk.get("tc_field") is None else None
+        columns.update(
+            adapters.uncertainty_chunk(
+                chunk, grid, reduction_heights, density, reduced, truncation, options, cfg
+            )
+        )
     qc = [
-        as_qc_flag([*chunk["flags_a"][i], *flags_b[i], *chunk["flags_c"][i], *codes_of(engine_flags[i])])
+        as_qc_flag([*chunk["flags_a"][i], *chunk["flags_b"][i], *chunk["flags_c"][i], *engine_flags[i], *late[i]])
         for i in range(n)
     ]
     return {"index": chunk["index"], "rows": np.asarray(chunk["rows"]), "columns": columns, "qc_flag": qc}
