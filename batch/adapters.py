@@ -48,6 +48,7 @@ def terrain_chunk(
     water_density: float | None,
     method: int,
     zones: str = "BCDEFGHIJKLM",
+    reference_density: float | None = None,
 ) -> dict:
     """Terrain correction of a chunk of stations (mGal), as ``compute_terrain`` of the plugin.
 
@@ -78,8 +79,12 @@ def terrain_chunk(
         (per station a list of ``algorithms/qc.py`` codes).
     """
     n = len(heights)
+    density = np.array(np.broadcast_to(np.asarray(density, dtype=float), (n,)))
+    if reference_density is not None and water_density is None:
+        # A station without density gets the reference density: the layer's, not the chunk's median.
+        density[~np.isfinite(density)] = reference_density
     model = TerrainModel(
-        density=np.broadcast_to(np.asarray(density, dtype=float), (n,)),
+        density=density,
         water_density=water_density,
         inner_radius=inner_radius,
         outer_radius=outer_radius,

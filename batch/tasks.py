@@ -41,6 +41,7 @@ def _terrain(chunk: dict, cfg: dict, density, innermost, method):
         water_density=cfg.get("water_density"),
         method=method,
         zones=cfg.get("zones", HAMMER_ZONE_LETTERS),
+        reference_density=cfg["reference_density"],
     )
 
 
