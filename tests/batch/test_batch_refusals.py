@@ -87,7 +87,7 @@ CASES = [
     ("reduce", {"--gravity-field": "name"}, "observed gravity field is not numeric"),
     ("reduce", {"--density-field": "nosuch"}, "no field named 'nosuch'"),
     ("reduce", {"--tc-field": "label"}, "terrain correction field is not numeric"),
-    ("terrain", {"--density": "0"}, "must be positive"),
+    ("terrain", {"--density": "0"}, "outside the accepted range 500-5000"),
     ("reduce", {"--density": "2.67"}, "looks like g/cm³"),
     ("terrain", {"--inner-radius": "5000", "--outer-radius": "3000"}, "must be positive and smaller"),
     ("terrain", {"--inner-radius": "-5"}, "--inner-radius must be at least 0"),
