@@ -188,7 +188,7 @@ def normal_gravity_1967(latitude_deg: npt.ArrayLike) -> np.ndarray:
     ----------
     International Association of Geodesy, 1971, Geodetic Reference System
     1967, Publ. Spec. 3 (from memory). The coefficients are those of the
-    USGS compilation in ``../shared/data/clvf-usgs-gravity`` (its README).
+    USGS ground-gravity compilation of the Sonoma-Clear Lake area (its README).
 
     Examples
     --------

@@ -124,7 +124,7 @@ ELLIPSOIDS = {"grs80": GRS80, "wgs84": WGS84}
 
 #: The 1967 normal-gravity formula as used by legacy (IGSN71) databases, in
 #: mGal: gamma = A (1 + B sin^2 phi + C sin^4 phi). Coefficients as used by
-#: the USGS compilation in ../shared/data/clvf-usgs-gravity (README there,
+#: the USGS ground-gravity compilation of the Sonoma-Clear Lake area (its README,
 #: checked on 2,859 rows); the formula is the Geodetic Reference System 1967
 #: series (IAG 1971, from memory).
 NORMAL_GRAVITY_1967_EQUATOR = 978_031.846

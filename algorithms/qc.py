@@ -124,7 +124,12 @@ VOCABULARY = {
         (
             "tc_regional_fill",
             INFO,
-            "Ring-and-sector: the regional raster gave heights where the fine raster has no data inside its extent.",
+            "The fine elevation raster has no data near the station: the regional raster filled those cells.",
+        ),
+        (
+            "tc_regional_only",
+            WARNING,
+            "No fine elevation data at the station: its terrain correction comes from the regional raster alone.",
         ),
         (
             "tc_no_slope",

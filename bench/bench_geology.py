@@ -25,7 +25,6 @@ import importlib.util
 import os
 import sys
 import time
-from dataclasses import replace
 from pathlib import Path
 
 REPO_ROOT = Path(__file__).resolve().parent.parent
@@ -44,23 +43,46 @@ from relief_gravity.bench import terrain_scenario  # noqa: E402
 
 
 def stripes(n_cols: int, west: float, cell: float, edges: np.ndarray) -> np.ndarray:
+    """Unit index of each column of a grid: vertical stripes split at ``edges``.
+
+    Parameters
+    ----------
+    n_cols : int
+        Columns of the grid.
+    west : float
+        Western edge of the grid, m.
+    cell : float
+        Cell width, m.
+    edges : numpy.ndarray
+        Eastings of the stripe boundaries, m, ascending.
+
+    Returns
+    -------
+    numpy.ndarray
+        Unit index (0 west of the first edge) of each column, int64.
+    """
     centres = west + (np.arange(n_cols) + 0.5) * cell
     return np.searchsorted(edges, centres).astype(np.int64)
 
 
 def main() -> None:
+    """Time one constant-density run and one unit run; print their figures and differences."""
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     parser.add_argument("--stations", type=int, default=200)
     parser.add_argument("--units", type=int, default=3)
     args = parser.parse_args()
     sc = terrain_scenario.build()
     fine = ElevationGrid.from_array(sc.fine, sc.fine_west, sc.fine_north, sc.fine_cell, sc.fine_cell)
-    regional = ElevationGrid.from_array(sc.regional, sc.regional_west, sc.regional_north, sc.regional_cell, sc.regional_cell)
+    regional = ElevationGrid.from_array(
+        sc.regional, sc.regional_west, sc.regional_north, sc.regional_cell, sc.regional_cell
+    )
     x, y, h = sc.stations(args.stations)
     # Stripe edges spread over the stations' span, so every unit is near some stations.
     edges = np.quantile(x, np.linspace(0, 1, args.units + 1)[1:-1])
     fu = np.broadcast_to(stripes(fine.n_cols, fine.x_origin, fine.cell_x, edges), (fine.n_rows, fine.n_cols))
-    ru = np.broadcast_to(stripes(regional.n_cols, regional.x_origin, regional.cell_x, edges), (regional.n_rows, regional.n_cols))
+    ru = np.broadcast_to(
+        stripes(regional.n_cols, regional.x_origin, regional.cell_x, edges), (regional.n_rows, regional.n_cols)
+    )
     densities = [2200.0 + 700.0 * k / max(args.units - 1, 1) for k in range(args.units)]
     model = TerrainModel(density=2670.0)
     units = DensityUnits(densities, fu, ru)
@@ -73,10 +95,16 @@ def main() -> None:
     t2 = time.perf_counter()
     same = terrain_correction_by_units(x, y, h, fine, regional, flat, model)
     load = os.getloadavg()[0]
-    print(f"stations {args.stations}, units {args.units} ({', '.join(f'{d:g}' for d in densities)} kg/m^3), load {load:.2f}")
+    print(
+        f"stations {args.stations}, units {args.units} ({', '.join(f'{d:g}' for d in densities)} kg/m^3), "
+        f"load {load:.2f}"
+    )
     print(f"constant-density engine run: {t1 - t0:.1f} s")
     print(f"unit run ({args.units} + 1 engine runs): {t2 - t1:.1f} s, ratio {(t2 - t1) / (t1 - t0):.2f}")
-    print(f"every unit at 2670 (split blocks only): largest |difference| from the constant run {np.nanmax(np.abs(same.tc_total - ref.tc_total)):.2e} mGal")
+    print(
+        "every unit at 2670 (split blocks only): largest |difference| from the constant run "
+        f"{np.nanmax(np.abs(same.tc_total - ref.tc_total)):.2e} mGal"
+    )
     print(f"unit densities against 2670 everywhere: mean {np.nanmean(geo.tc_total - ref.tc_total):+.3f} mGal, "
           f"range {np.nanmin(geo.tc_total - ref.tc_total):+.3f} to {np.nanmax(geo.tc_total - ref.tc_total):+.3f} mGal")
 

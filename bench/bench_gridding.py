@@ -59,6 +59,20 @@ BODIES = (
 
 
 def synthetic_field(x: np.ndarray, y: np.ndarray, side: float) -> np.ndarray:
+    """Invented smooth field: the sum of the Gaussian ``BODIES`` scaled to a square of side ``side``.
+
+    Parameters
+    ----------
+    x, y : numpy.ndarray
+        Positions, m, in the square ``[0, side]``.
+    side : float
+        Side of the square, m.
+
+    Returns
+    -------
+    numpy.ndarray
+        Field value at each position, mGal.
+    """
     out = np.zeros_like(x, dtype=float)
     for x0, y0, amp, width in BODIES:
         w = width * side
@@ -138,6 +152,7 @@ def _measure(method: str, n_stations: int, n_nodes: int) -> dict:
 
 
 def main() -> None:
+    """Time minimum curvature against cubic griddata on random stations; print the figures."""
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     parser.add_argument("--stations", type=int, default=10_000)
     parser.add_argument("--nodes", type=int, default=1_000, help="nodes per side")

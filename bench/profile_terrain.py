@@ -47,6 +47,18 @@ def _register() -> None:
 
 
 def main(argv: list[str] | None = None) -> int:
+    """Profile the terrain engine on the seeded landscape; print the kernel floor and the time per part.
+
+    Parameters
+    ----------
+    argv : list of str, optional
+        Command-line arguments without the program name (default: ``sys.argv[1:]``).
+
+    Returns
+    -------
+    int
+        Exit status, 0 on success.
+    """
     parser = argparse.ArgumentParser(description=__doc__.split("\n\n", 1)[0])
     parser.add_argument("--stations", type=int, default=1000, help="stations profiled (default 1,000)")
     args = parser.parse_args(argv)
@@ -115,7 +127,8 @@ def main(argv: list[str] | None = None) -> int:
         best = min(best, time.process_time() - t0)
     per_eval = best / m
     print(f"\n[kernel] one column-kernel evaluation (size, spread and tilt terms): {per_eval * 1e9:.1f} ns "
-          f"(single precision, best of 5 over 1e6 columns in batches of 60,000); floor {total * per_eval * 1e3:.3f} ms CPU per station")
+          "(single precision, best of 5 over 1e6 columns in batches of 60,000); "
+          f"floor {total * per_eval * 1e3:.3f} ms CPU per station")
 
     # 3. the engine under the profiler
     profiler = cProfile.Profile()
@@ -128,9 +141,23 @@ def main(argv: list[str] | None = None) -> int:
           f"{cpu / n * 1e3:.3f} ms per station ({cpu / n / (total * per_eval):.1f} x the kernel floor)")
     stats = pstats.Stats(profiler)
     groups = {
-        "block statistics (read, merge, tables)": ("block_statistics", "_cell_statistics", "merge_blocks", "block_table"),
+        "block statistics (read, merge, tables)": (
+            "block_statistics",
+            "_cell_statistics",
+            "merge_blocks",
+            "block_table",
+        ),
         "column kernel": ("column_kernel",),
-        "exact prisms": ("prism_gravity", "_vertex_kernel", "_safe_log", "_closed_form", "_line_sum", "inverse_distance_difference", "prism_terms", "_piece_terms"),
+        "exact prisms": (
+            "prism_gravity",
+            "_vertex_kernel",
+            "_safe_log",
+            "_closed_form",
+            "_line_sum",
+            "inverse_distance_difference",
+            "prism_terms",
+            "_piece_terms",
+        ),
         "innermost square": ("innermost", "plane_terrain_effect"),
     }
     found = {name: 0.0 for name in groups}

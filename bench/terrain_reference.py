@@ -65,6 +65,7 @@ class ReferenceResult:
 
     @property
     def total(self) -> np.ndarray:
+        """Whole terrain correction per station, mGal (``beyond + within``)."""
         return self.beyond + self.within
 
 
@@ -216,10 +217,11 @@ class Reference:
 
 
 def curvature_check(distances=(10_000.0, 50_000.0, 100_000.0)) -> list[tuple[float, float]]:
-    """TC contribution (mGal) of a 1 km x 1 km x 500 m column standing on the
-    station's sphere (station height 0) at the given distances: the case of
-    docs/terrain.md section 6, whose lowered-prism column this must reproduce
-    (positive near, negative once the column's middle is below the horizon).
+    """TC contribution (mGal) of a 1 km x 1 km x 500 m column on the station's sphere at given distances.
+
+    The station height is 0. This is the case of docs/terrain.md section 6,
+    whose lowered-prism column this must reproduce (positive near, negative
+    once the column's middle is below the horizon).
     """
     return [(d, _tc_of_columns(np.array([d]), np.array([0.0]), 500.0, 500.0, np.array([500.0]), 2670.0))
             for d in distances]

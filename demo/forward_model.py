@@ -71,24 +71,30 @@ class HeightGrid:
 
     @property
     def n_rows(self) -> int:
+        """Number of rows."""
         return self.heights.shape[0]
 
     @property
     def n_cols(self) -> int:
+        """Number of columns."""
         return self.heights.shape[1]
 
     @property
     def east(self) -> float:
+        """Eastern edge, m."""
         return self.west + self.n_cols * self.cell_size
 
     @property
     def south(self) -> float:
+        """Southern edge, m."""
         return self.north - self.n_rows * self.cell_size
 
     def x_centres(self) -> np.ndarray:
+        """Easting of each column's cell centres, m, west to east."""
         return self.west + (np.arange(self.n_cols) + 0.5) * self.cell_size
 
     def y_centres(self) -> np.ndarray:
+        """Northing of each row's cell centres, m, north to south."""
         return self.north - (np.arange(self.n_rows) + 0.5) * self.cell_size
 
 
@@ -105,6 +111,7 @@ class PrismSet:
     density: np.ndarray
 
     def __post_init__(self):
+        """Refuse fields of different lengths."""
         n = np.asarray(self.west).size
         for name in ("east", "south", "north", "bottom", "top", "density"):
             if np.asarray(getattr(self, name)).size != n:
@@ -113,6 +120,7 @@ class PrismSet:
 
     @property
     def size(self) -> int:
+        """Number of prisms."""
         return np.asarray(self.west).size
 
     def mass(self) -> float:
@@ -122,6 +130,18 @@ class PrismSet:
 
     @staticmethod
     def concatenate(*sets: PrismSet) -> PrismSet:
+        """All prisms of ``sets`` in one set, in the order given.
+
+        Parameters
+        ----------
+        *sets : PrismSet
+            The sets to join.
+
+        Returns
+        -------
+        PrismSet
+            One set holding every prism.
+        """
         fields = ("west", "east", "south", "north", "bottom", "top", "density")
         return PrismSet(*(np.concatenate([np.asarray(getattr(s, f), float) for s in sets]) for f in fields))
 

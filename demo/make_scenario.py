@@ -313,6 +313,21 @@ def _srs(epsg):
 
 
 def write_geotiff(path, array, west, north, cell, description):
+    """Write a north-up height raster as a compressed single-band GeoTIFF in the demo's CRS.
+
+    Parameters
+    ----------
+    path : pathlib.Path
+        File to (re)write.
+    array : numpy.ndarray
+        Heights above the ellipsoid, m; row 0 is the northern row.
+    west, north : float
+        Western and northern edges, m.
+    cell : float
+        Square cell size, m.
+    description : str
+        Text for the TIFF image description tag.
+    """
     path.unlink(missing_ok=True)
     driver = gdal.GetDriverByName("GTiff")
     rows, cols = array.shape
@@ -332,6 +347,19 @@ def write_geotiff(path, array, west, north, cell, description):
 
 
 def write_stations(path, ids, x, y, fields):
+    """Write the stations as a point GeoPackage (byte-identical between runs).
+
+    Parameters
+    ----------
+    path : pathlib.Path
+        File to (re)write.
+    ids : sequence of str
+        Station ids.
+    x, y : array_like
+        Eastings and northings, m, in the demo's CRS.
+    fields : dict of str to array_like
+        Real-valued fields, one value per station.
+    """
     path.unlink(missing_ok=True)
     # A fixed timestamp keeps the GeoPackage byte-identical between runs.
     gdal.SetConfigOption("OGR_CURRENT_DATE", "2026-01-01T00:00:00.000Z")
@@ -372,6 +400,13 @@ def latitudes(x, y):
 
 
 def main(argv=None):
+    """Generate the invented Corvahl demo scenario into ``--out``.
+
+    Parameters
+    ----------
+    argv : list of str, optional
+        Command-line arguments without the program name (default: ``sys.argv[1:]``).
+    """
     parser = argparse.ArgumentParser(description="Generate the invented Corvahl demo scenario.")
     parser.add_argument("--out", type=Path, default=Path(__file__).resolve().parent / "data")
     parser.add_argument("--seed", type=int, default=20261201)

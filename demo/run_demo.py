@@ -39,6 +39,13 @@ def register_checkout() -> None:
 
 
 def start_qgis():
+    """Start a headless QGIS application with Processing initialised.
+
+    Returns
+    -------
+    qgis.core.QgsApplication
+        The running application (keep it referenced until the end).
+    """
     os.environ.setdefault("QT_QPA_PLATFORM", "offscreen")
     from qgis.core import QgsApplication
 
@@ -52,17 +59,43 @@ def start_qgis():
 
 
 def demo_files() -> dict:
+    """Paths of the demo's inputs; exit with a sentence when one is missing.
+
+    Returns
+    -------
+    dict
+        ``dem``, ``regional``, ``stations``, ``readings`` and ``calibration`` paths.
+    """
     def one(pattern):
         found = sorted(DATA.glob(pattern))
         if not found:
             sys.exit(f"demo data {pattern} missing in {DATA}; regenerate with demo/make_scenario.py")
         return found[0]
 
-    return {"dem": one("*_dem.tif"), "regional": one("*_regional.tif"), "stations": one("*_field_stations.gpkg"),
-            "readings": one("*_readings.csv"), "calibration": one("*_calibration.csv")}
+    return {
+        "dem": one("*_dem.tif"),
+        "regional": one("*_regional.tif"),
+        "stations": one("*_field_stations.gpkg"),
+        "readings": one("*_readings.csv"),
+        "calibration": one("*_calibration.csv"),
+    }
 
 
 def attribute_array(layer, name):
+    """Values of a numeric field of a vector layer as floats, NaN for NULL.
+
+    Parameters
+    ----------
+    layer : qgis.core.QgsVectorLayer
+        The layer.
+    name : str
+        Field name.
+
+    Returns
+    -------
+    numpy.ndarray
+        One value per feature, in the layer's order.
+    """
     import numpy as np
     from qgis.core import NULL
 
@@ -82,11 +115,27 @@ def loop_misclosures(path):
     rows = [(f["loop"], f["station"], parse_time(f["t_utc"]).utc_hours, f["read_mgal"] + f["ih_corr"] + f["tide_corr"])
             for f in QgsVectorLayer(str(path), "readings", "ogr").getFeatures() if f["g_read"] not in (None, NULL)]
     loops, ids = sorted({r[0] for r in rows}), sorted({r[1] for r in rows})
-    closure = loop_closures(*([ids.index(r[1]) for r in rows], [loops.index(r[0]) for r in rows]), [r[2] for r in rows], [r[3] for r in rows])
+    closure = loop_closures(
+        *([ids.index(r[1]) for r in rows], [loops.index(r[0]) for r in rows]),
+        [r[2] for r in rows],
+        [r[3] for r in rows],
+    )
     return dict(zip(loops, closure.misclosure, strict=True))
 
 
 def main(argv: list[str]) -> int:
+    """Run the whole chain on the invented survey, write its outputs and print a summary.
+
+    Parameters
+    ----------
+    argv : list of str
+        ``sys.argv``; ``argv[1]``, when given, is the output folder (default ``demo_output``).
+
+    Returns
+    -------
+    int
+        Exit status, 0 on success.
+    """
     output = Path(argv[1]).resolve() if len(argv) > 1 else ROOT / "demo_output"
     output.mkdir(parents=True, exist_ok=True)
     register_checkout()
@@ -157,8 +206,9 @@ def main(argv: list[str]) -> int:
 
     # Density from the data (Parasnis, planar regional) and the residual anomaly.
     density = processing.run("reliefgravity:densityestimate", {
-        "INPUT": str(files["stations"]), "GRAVITY_FIELD": "obs_grav", "HEIGHT_FIELD": "elev_m", "DEM": str(files["dem"]),
-        "REGIONAL_DEM": str(files["regional"]), "DEM_DATUM": 1, "PLOT": str(output / "density_fit.png")},
+        "INPUT": str(files["stations"]), "GRAVITY_FIELD": "obs_grav", "HEIGHT_FIELD": "elev_m",
+        "DEM": str(files["dem"]), "REGIONAL_DEM": str(files["regional"]), "DEM_DATUM": 1,
+        "PLOT": str(output / "density_fit.png")},
         feedback=feedback)
     residual_path = output / "cba_residual.tif"
     processing.run("reliefgravity:regionalresidual", {"INPUT": str(grid_path), "METHOD": 0, "ORDER": 1, "ROBUST": 2,
@@ -181,7 +231,8 @@ def main(argv: list[str]) -> int:
     print(f"  readings -> observed gravity: {observed['LOOPS']} loops; misclosure on the opening base (mGal): "
           + ", ".join(f"{k} {v:+.3f}" for k, v in misclosures.items() if np.isfinite(v))
           + f"; largest {observed['MAX_MISCLOSURE']:.3f}")
-    print(f"  g_obs - true gravity (mGal) : rms {np.sqrt(np.nanmean(g_error**2)):.4f}, max {np.nanmax(np.abs(g_error)):.4f}"
+    print(f"  g_obs - true gravity (mGal) : rms {np.sqrt(np.nanmean(g_error**2)):.4f}, "
+          f"max {np.nanmax(np.abs(g_error)):.4f}"
           f" over {int(np.isfinite(g_error).sum())} stations")
     print(f"  stations reduced            : {reduction['STATIONS_REDUCED']} of {layer.featureCount()}"
           f" ({reduction['STATIONS_FLAGGED']} flagged) in {reduced_seconds:.1f} s")

@@ -113,7 +113,9 @@ def read_parameters(algorithm, parameters, context, default_density: float, targ
     return read_polygons(source, names[0], default_density, target_crs, context.transformContext(), feedback)
 
 
-def read_polygons(source, field_name: str, default_density: float, target_crs, transform_context, feedback=None) -> DensityPolygons:
+def read_polygons(
+    source, field_name: str, default_density: float, target_crs, transform_context, feedback=None
+) -> DensityPolygons:
     """Read a polygon feature source's densities and geometries, reprojected to ``target_crs``.
 
     Features without a density (NULL) or without a geometry are left to the
@@ -148,18 +150,23 @@ def read_polygons(source, field_name: str, default_density: float, target_crs, t
         geometries.append(geometry)
         values.append(float(value))
     if not values:
-        raise QgsProcessingException(_tr("No polygon of DENSITY_LAYER has a density in the field {}.").format(field_name))
+        raise QgsProcessingException(
+            _tr("No polygon of DENSITY_LAYER has a density in the field {}.").format(field_name)
+        )
     try:
         kg, given_in = density_table_to_kg_m3(values)
     except ValueError as error:
         raise QgsProcessingException(
-            _tr("The densities of DENSITY_LAYER ({}) cannot be read: {}. Give every polygon in kg/m³ (500-5000) or every polygon in g/cm³ (0.5-5).").format(
-                field_name, error
-            )
+            _tr(
+                "The densities of DENSITY_LAYER ({}) cannot be read: {}. "
+                "Give every polygon in kg/m³ (500-5000) or every polygon in g/cm³ (0.5-5)."
+            ).format(field_name, error)
         ) from error
     if skipped and feedback is not None:
         feedback.pushWarning(
-            _tr("{} polygon(s) of DENSITY_LAYER have no density or no geometry: the default density applies there.").format(skipped)
+            _tr(
+                "{} polygon(s) of DENSITY_LAYER have no density or no geometry: the default density applies there."
+            ).format(skipped)
         )
     densities, polygon_unit = unit_table(kg, default_density)
     return DensityPolygons(target_crs, geometries, polygon_unit, densities, given_in)
@@ -174,7 +181,9 @@ def rasterise_units(polygons: DensityPolygons, raster) -> np.ndarray:
     units.
     """
     if QgsCoordinateReferenceSystem.fromWkt(raster.crs_wkt) != polygons.crs:
-        raise QgsProcessingException(_tr("Internal: the geology polygons are not in the CRS of the raster {}.").format(raster.path))
+        raise QgsProcessingException(
+            _tr("Internal: the geology polygons are not in the CRS of the raster {}.").format(raster.path)
+        )
     srs = osr.SpatialReference()
     srs.ImportFromWkt(raster.crs_wkt)
     vectors = gdal.GetDriverByName("Memory").Create("units", 0, 0, 0, gdal.GDT_Unknown)

@@ -48,7 +48,7 @@ def _notes() -> dict:
         "tc_partial": _tr("The elevation rasters do not cover the whole correction area (see tc_cover)."),
         "tc_no_data_zones": _tr("Some ring-and-sector compartments had no elevation data and count as flat."),
         "tc_regional_fill": _tr(
-            "Ring-and-sector: the regional raster gave heights where the fine raster has no data inside its extent."
+            "The fine elevation raster has no data near the station: the regional raster filled those cells."
         ),
         "tc_no_slope": _tr(
             "Ring-and-sector: no elevation data at the station, so the zones finer than a DEM cell count as flat."
@@ -73,6 +73,9 @@ def _notes() -> dict:
         "tc_gap_inner": _tr("The elevation rasters lack data over part of the inner zone (see the inner coverage)."),
         "tc_density_reference": _tr(
             "With water, the terrain correction uses the reference (median) density, not this station's."
+        ),
+        "tc_regional_only": _tr(
+            "No fine elevation data at the station: its terrain correction comes from the regional raster alone."
         ),
     }
 

@@ -134,15 +134,18 @@ def write_record(path: str, record: dict, layer: str | None = None) -> None:
     if file_path.lower().endswith(".gpkg"):
         ds = ogr.Open(file_path, 1)
         if ds is None:
-            raise OSError(f"cannot open {file_path} to record provenance")
+            msg = f"cannot open {file_path} to record provenance"
+            raise OSError(msg)
         lyr = ds.GetLayerByName(layer) if layer else ds.GetLayer(0)
         if lyr is None:
-            raise OSError(f"no layer {layer!r} in {file_path}")
+            msg = f"no layer {layer!r} in {file_path}"
+            raise OSError(msg)
         lyr.SetMetadataItem(KEY, text)
         ds = None
         return
     ds = gdal.Open(file_path, gdal.GA_Update)
     if ds is None:
-        raise OSError(f"cannot open {file_path} to record provenance")
+        msg = f"cannot open {file_path} to record provenance"
+        raise OSError(msg)
     ds.SetMetadataItem(KEY, text)
     ds = None

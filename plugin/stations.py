@@ -306,6 +306,13 @@ def check_point_layer(source) -> None:
 TEXT_FIELDS = ("qc_flag", "qc_note")
 
 
+def _text_length(name: str, kind) -> int:
+    """Field length: unlimited (0) for numbers and the flag texts, 254 for other text."""
+    if kind != QVariant.String or name in TEXT_FIELDS:
+        return 0
+    return 254
+
+
 def output_fields(input_fields: QgsFields, added: list[tuple[str, QVariant.Type]]):
     """Input fields followed by the added ones.
 
@@ -323,16 +330,17 @@ def output_fields(input_fields: QgsFields, added: list[tuple[str, QVariant.Type]
         name = original.name()
         if name in kinds:
             reused.append(name)
-            if original.type() != kinds[name]:
+            if original.type() != kinds[name] or name in TEXT_FIELDS:
+                # Flags and notes grow with every run: always unlimited text.
                 kind = kinds[name]
-                fields.append(QgsField(name, kind, len=254 if kind == QVariant.String else 0))
+                fields.append(QgsField(name, kind, len=_text_length(name, kind)))
                 continue
         fields.append(QgsField(original))
     indices = {}
     for name, kind in added:
         index = fields.lookupField(name)
         if index < 0:
-            fields.append(QgsField(name, kind, len=254 if kind == QVariant.String else 0))
+            fields.append(QgsField(name, kind, len=_text_length(name, kind)))
             index = fields.lookupField(name)
         indices[name] = index
     return fields, indices, reused

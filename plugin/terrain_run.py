@@ -81,7 +81,8 @@ def compute_terrain(
     (``density_layer.DensityPolygons``): densities per DEM cell from a
     geology layer (exact engine only; docs/geology-densities.md).
     """
-    from ..algorithms.terrain import TerrainCancelled, TerrainModel, hammer_terrain_correction, terrain_correction
+    from ..algorithms.terrain import TerrainCancelled, TerrainModel, hammer_terrain_correction
+    from ..algorithms.terrain._fallback import terrain_correction_with_fallback
 
     fine, x, y = placed.raster, placed.x, placed.y
     if polygons is not None and method == RING_SECTOR:
@@ -95,7 +96,8 @@ def compute_terrain(
     regional_grid = None
     if regional_layer is not None:
         regional = open_elevation(regional_layer)
-        if not QgsCoordinateReferenceSystem.fromWkt(regional.crs_wkt) == QgsCoordinateReferenceSystem.fromWkt(fine.crs_wkt):
+        regional_crs = QgsCoordinateReferenceSystem.fromWkt(regional.crs_wkt)
+        if regional_crs != QgsCoordinateReferenceSystem.fromWkt(fine.crs_wkt):
             feedback.pushInfo(_tr("Reprojecting the regional elevation raster to the CRS of the fine one."))
             regional = warp_to(regional, fine.crs_wkt)
         regional_grid = regional.elevation_grid()
@@ -129,7 +131,9 @@ def compute_terrain(
             table.flag_each(hammer.flags)
             # Linear in density: from the reference density to each station's.
             scale = model.density_factors(n) / model.reference_density
-            result = {key: np.array(getattr(hammer, key), dtype=float) * scale for key in ("tc_inner", "tc_outer", "tc_total")}
+            result = {
+                key: np.array(getattr(hammer, key), dtype=float) * scale for key in ("tc_inner", "tc_outer", "tc_total")
+            }
             result["zones"] = {k: np.asarray(v, dtype=float) * scale for k, v in hammer.zones.items()}
             result["plane_zones"] = hammer.plane_zones
             if innermost_tc is not None:
@@ -156,7 +160,8 @@ def compute_terrain(
                 is_cancelled=feedback.isCanceled,
             )
         else:
-            engine = terrain_correction(
+            # Where the fine DEM has no data the regional one serves, flagged.
+            engine = terrain_correction_with_fallback(
                 x,
                 y,
                 heights,

@@ -20,9 +20,10 @@ The shared steps are built by ``_add_reduce``, ``_add_grid`` and
 ``_add_report``. The models are built in code rather than drawn in the Modeler
 so that they always match the algorithms' current parameter names; run this
 script again after changing them. A model file whose content would not change
-is left alone (rewriting it would only reorder its XML attributes). The styles are written by ``plugin/styling.py`` from an
-invented anomaly (two Gaussian bodies on a regional gradient), so the raster
-style's colour stops are those of that invented raster (see styling.py).
+is left alone (rewriting it would only reorder its XML attributes). The styles
+are written by ``plugin/styling.py`` from an invented anomaly (two Gaussian
+bodies on a regional gradient), so the raster style's colour stops are those
+of that invented raster (see styling.py).
 """
 
 from __future__ import annotations
@@ -381,8 +382,10 @@ def build_readings_model():
         QgsProcessingParameterEnum("reading_units", "Reading units", options=["Counter units", "mGal"], defaultValue=0),
         QgsProcessingParameterFeatureSource("calibration", "Calibration table (counter, mgal, factor)",
                                             [QgsProcessing.TypeVector], optional=True),
-        field("instrument_height_field", "Instrument height field (m)", parentLayerParameterName="readings", optional=True),
-        field("loop_field", "Loop field (empty: one loop per local day)", parentLayerParameterName="readings", optional=True),
+        field("instrument_height_field", "Instrument height field (m)", parentLayerParameterName="readings",
+              optional=True),
+        field("loop_field", "Loop field (empty: one loop per local day)", parentLayerParameterName="readings",
+              optional=True),
         QgsProcessingParameterFeatureSource(STATIONS, "Gravity stations", [QgsProcessing.TypeVectorPoint]),
         field("stations_id_field", "Station id field", parentLayerParameterName=STATIONS),
         field("known_gravity_field", "Known gravity field (mGal)", parentLayerParameterName=STATIONS),
@@ -396,8 +399,12 @@ def build_readings_model():
     ], 120.0, 40.0, 55.0)
 
     wired = {key.upper(): Source.fromModelParameter(key) for key in READINGS_INPUTS}
-    wired.update({"STATIONS": Source.fromModelParameter(STATIONS), "HEIGHT_FIELD": Source.fromModelParameter(HEIGHT_FIELD)})
-    observed = _child("reliefgravity:observedgravity", "observed", "Observed gravity from readings", wired, 420.0, 120.0)
+    wired.update(
+        {"STATIONS": Source.fromModelParameter(STATIONS), "HEIGHT_FIELD": Source.fromModelParameter(HEIGHT_FIELD)}
+    )
+    observed = _child(
+        "reliefgravity:observedgravity", "observed", "Observed gravity from readings", wired, 420.0, 120.0
+    )
     _output(observed, "OUTPUT", "observed_stations", "Stations with observed gravity", 680.0, 80.0)
     _output(observed, "READINGS_OUTPUT", "readings", "Reduced readings", 680.0, 140.0)
     model.addChildAlgorithm(observed)
@@ -465,6 +472,18 @@ def build_styles(folder: Path) -> tuple[Path, Path]:
 
 
 def main(argv=None) -> int:
+    """Build the shipped models (and, with ``--styles``, the styles and layouts); write only what changed.
+
+    Parameters
+    ----------
+    argv : list of str, optional
+        Command-line arguments without the program name (default: ``sys.argv[1:]``).
+
+    Returns
+    -------
+    int
+        Exit status, 0 on success.
+    """
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     parser.add_argument("--output", type=Path, default=MODEL_PATH, help="model file to write")
     parser.add_argument("--styles", action="store_true", help="also write plugin/styles/*.qml and plugin/layouts/*.qpt")

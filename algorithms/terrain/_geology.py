@@ -79,10 +79,12 @@ class DensityUnits:
     def __post_init__(self) -> None:
         dens = np.atleast_1d(np.asarray(self.densities, dtype=float)).copy()
         if dens.ndim != 1 or dens.size == 0:
-            raise ValueError(f"densities must be a non-empty list of values, got shape {dens.shape}")
+            msg = f"densities must be a non-empty list of values, got shape {dens.shape}"
+            raise ValueError(msg)
         bad = ~(np.isfinite(dens) & (dens > 0))
         if np.any(bad):
-            raise ValueError(f"every unit density must be a finite number > 0 kg/m^3, got {dens[bad][0]!r}")
+            msg = f"every unit density must be a finite number > 0 kg/m^3, got {dens[bad][0]!r}"
+            raise ValueError(msg)
         dens.flags.writeable = False
         object.__setattr__(self, "densities", dens)
         for name in ("fine", "regional"):
@@ -91,12 +93,15 @@ class DensityUnits:
                 continue
             arr = np.asarray(grid)
             if arr.ndim != 2:
-                raise ValueError(f"{name} unit grid must be 2-D, got shape {arr.shape}")
+                msg = f"{name} unit grid must be 2-D, got shape {arr.shape}"
+                raise ValueError(msg)
             if arr.size and not np.issubdtype(arr.dtype, np.integer):
-                raise ValueError(f"{name} unit grid must hold integer unit indices, got {arr.dtype}")
+                msg = f"{name} unit grid must hold integer unit indices, got {arr.dtype}"
+                raise ValueError(msg)
             if arr.size and (arr.min() < 0 or arr.max() >= dens.size):
                 worst = int(arr.min()) if arr.min() < 0 else int(arr.max())
-                raise ValueError(f"{name} unit grid holds unit index {worst}; the units are 0 to {dens.size - 1}")
+                msg = f"{name} unit grid holds unit index {worst}; the units are 0 to {dens.size - 1}"
+                raise ValueError(msg)
             # One byte per cell for up to 256 units (the grids are as large as the DEMs).
             arr = arr.astype(np.uint8 if dens.size <= 256 else np.int32)
             arr.flags.writeable = False
@@ -160,7 +165,8 @@ def masked_grid(grid: ElevationGrid, units: np.ndarray, unit: int) -> ElevationG
            [ 3., nan]])
     """
     if units.shape != (grid.n_rows, grid.n_cols):
-        raise ValueError(f"unit grid has shape {units.shape}, the DEM {(grid.n_rows, grid.n_cols)}")
+        msg = f"unit grid has shape {units.shape}, the DEM {(grid.n_rows, grid.n_cols)}"
+        raise ValueError(msg)
 
     def reader(row0: int, col0: int, n_rows: int, n_cols: int) -> np.ndarray:
         heights = np.asarray(grid.reader(row0, col0, n_rows, n_cols), dtype=float)
@@ -264,30 +270,39 @@ def terrain_correction_by_units(
     """
     model = model if model is not None else TerrainModel()
     if model.per_station_density:
-        raise ValueError("with density units the model's density must be one value (the units give the densities)")
+        msg = "with density units the model's density must be one value (the units give the densities)"
+        raise ValueError(msg)
     xs = np.atleast_1d(np.asarray(x, dtype=float))
     ys = np.atleast_1d(np.asarray(y, dtype=float))
     hs = np.atleast_1d(np.asarray(station_height, dtype=float))
     n = xs.size
     if ys.size != n or hs.size != n:
-        raise ValueError(f"x, y and station_height must have the same length, got {xs.size}, {ys.size}, {hs.size}")
+        msg = f"x, y and station_height must have the same length, got {xs.size}, {ys.size}, {hs.size}"
+        raise ValueError(msg)
     model.check_stations(n)
     if units.fine.shape != (fine.n_rows, fine.n_cols):
-        raise ValueError(f"fine unit grid has shape {units.fine.shape}, the fine DEM {(fine.n_rows, fine.n_cols)}")
+        msg = f"fine unit grid has shape {units.fine.shape}, the fine DEM {(fine.n_rows, fine.n_cols)}"
+        raise ValueError(msg)
     if regional is not None:
         if units.regional is None:
-            raise ValueError("a regional DEM needs a regional unit grid")
+            msg = "a regional DEM needs a regional unit grid"
+            raise ValueError(msg)
         if units.regional.shape != (regional.n_rows, regional.n_cols):
-            raise ValueError(
-                f"regional unit grid has shape {units.regional.shape}, the regional DEM {(regional.n_rows, regional.n_cols)}"
+            msg = (
+                f"regional unit grid has shape {units.regional.shape}, "
+                f"the regional DEM {(regional.n_rows, regional.n_cols)}"
             )
+            raise ValueError(msg)
     rho_s = units.station_density(fine, xs, ys)
     if station_density is not None:
         given = np.atleast_1d(np.asarray(station_density, dtype=float))
         if given.size != n:
-            raise ValueError(f"station_density must have one value per station ({n}), got {given.size}")
+            msg = f"station_density must have one value per station ({n}), got {given.size}"
+            raise ValueError(msg)
         if np.any(np.isinf(given) | (given <= 0)):
-            raise ValueError(f"station densities must be > 0 kg/m^3 (NaN for none), got {given[np.isinf(given) | (given <= 0)][0]!r}")
+            bad = given[np.isinf(given) | (given <= 0)][0]
+            msg = f"station densities must be > 0 kg/m^3 (NaN for none), got {bad!r}"
+            raise ValueError(msg)
         rho_s = np.where(np.isfinite(given), given, rho_s)
 
     present = units.present()
@@ -381,7 +396,8 @@ def density_table_to_kg_m3(values: npt.ArrayLike) -> tuple[np.ndarray, str]:
     v = np.atleast_1d(np.asarray(values, dtype=float))
     finite = v[np.isfinite(v)]
     if finite.size == 0:
-        raise ValueError("no polygon has a density")
+        msg = "no polygon has a density"
+        raise ValueError(msg)
     low, high = DENSITY_BOUNDS
     in_kg = (finite >= low) & (finite <= high)
     in_g = (finite >= low / 1000.0) & (finite <= high / 1000.0)
@@ -391,11 +407,20 @@ def density_table_to_kg_m3(values: npt.ArrayLike) -> tuple[np.ndarray, str]:
         return v * 1000.0, "g/cm3"
     if np.any(in_kg) and np.sum(in_kg) >= np.sum(in_g):
         odd = finite[~in_kg][0]
-        raise ValueError(f"density {odd:g} is not in {low:g}-{high:g} kg/m^3 like the others ({finite[in_kg][0]:g}); one unit for every polygon")
+        msg = (
+            f"density {odd:g} is not in {low:g}-{high:g} kg/m^3 like the others ({finite[in_kg][0]:g}); "
+            "one unit for every polygon"
+        )
+        raise ValueError(msg)
     if np.any(in_g):
         odd = finite[~in_g][0]
-        raise ValueError(f"density {odd:g} is not in {low / 1000:g}-{high / 1000:g} g/cm^3 like the others ({finite[in_g][0]:g}); one unit for every polygon")
-    raise ValueError(f"density {finite[0]:g} is neither in {low:g}-{high:g} kg/m^3 nor in {low / 1000:g}-{high / 1000:g} g/cm^3")
+        msg = (
+            f"density {odd:g} is not in {low / 1000:g}-{high / 1000:g} g/cm^3 like the others ({finite[in_g][0]:g}); "
+            "one unit for every polygon"
+        )
+        raise ValueError(msg)
+    msg = f"density {finite[0]:g} is neither in {low:g}-{high:g} kg/m^3 nor in {low / 1000:g}-{high / 1000:g} g/cm^3"
+    raise ValueError(msg)
 
 
 def unit_table(polygon_density: npt.ArrayLike, default_density: float) -> tuple[np.ndarray, np.ndarray]:
@@ -423,7 +448,8 @@ def unit_table(polygon_density: npt.ArrayLike, default_density: float) -> tuple[
     ([2670.0, 2200.0, 2900.0], [1, 2, 1, 0, 0])
     """
     if not (math.isfinite(default_density) and default_density > 0):
-        raise ValueError(f"default density must be a finite number > 0 kg/m^3, got {default_density!r}")
+        msg = f"default density must be a finite number > 0 kg/m^3, got {default_density!r}"
+        raise ValueError(msg)
     dens = np.atleast_1d(np.asarray(polygon_density, dtype=float))
     table = [float(default_density)]
     out = np.zeros(dens.size, dtype=np.int64)

@@ -4,7 +4,6 @@
 from __future__ import annotations
 
 import traceback
-
 from pathlib import Path
 
 from qgis.core import QgsProcessingAlgorithm
@@ -126,7 +125,10 @@ class StationAlgorithm(ReliefGravityAlgorithm):
 
         self.addParameter(
             QgsProcessingParameterEnum(
-                self.HEIGHT_UNITS, _tr("Height units"), options=[_tr("Metres"), _tr("Feet"), _tr("Centimetres")], defaultValue=0
+                self.HEIGHT_UNITS,
+                _tr("Height units"),
+                options=[_tr("Metres"), _tr("Feet"), _tr("Centimetres")],
+                defaultValue=0,
             )
         )
 
@@ -219,7 +221,11 @@ class StationAlgorithm(ReliefGravityAlgorithm):
 
     def add_zone_parameters(self, advanced: bool) -> None:
         """Regional raster and zone radii (advanced in the reduction dialog)."""
-        from qgis.core import QgsProcessingParameterDefinition, QgsProcessingParameterNumber, QgsProcessingParameterRasterLayer
+        from qgis.core import (
+            QgsProcessingParameterDefinition,
+            QgsProcessingParameterNumber,
+            QgsProcessingParameterRasterLayer,
+        )
 
         definitions = [
             QgsProcessingParameterRasterLayer(
@@ -263,9 +269,7 @@ class StationAlgorithm(ReliefGravityAlgorithm):
         """Source, a three-step feedback and the station table of ``INPUT``."""
         from qgis.core import QgsProcessingException, QgsProcessingMultiStepFeedback
 
-        from ..stations import read_stations
-
-        from ..stations import check_point_layer
+        from ..stations import check_point_layer, read_stations
 
         source = self.parameterAsSource(parameters, self.INPUT, context)
         if source is None:
@@ -296,7 +300,9 @@ class StationAlgorithm(ReliefGravityAlgorithm):
             feedback.pushWarning(
                 _tr("The input already has a field {}; its values are replaced in the output copy.").format(name)
             )
-        sink, dest_id = self.parameterAsSink(parameters, self.OUTPUT, context, fields, source.wkbType(), source.sourceCrs())
+        sink, dest_id = self.parameterAsSink(
+            parameters, self.OUTPUT, context, fields, source.wkbType(), source.sourceCrs()
+        )
         if sink is None:
             raise QgsProcessingException(self.invalidSinkError(parameters, self.OUTPUT))
         return sink, dest_id, fields, indices
@@ -319,8 +325,10 @@ class StationAlgorithm(ReliefGravityAlgorithm):
         return StagedOutput(self, parameters, self.OUTPUT, context, label)
 
     def run_staged(self, parameters, context, feedback, work):
-        """Run ``work(parameters, context, feedback) -> (results, settings)`` on a staged
-        output; move it into place only on success, then record its provenance."""
+        """Run ``work(parameters, context, feedback) -> (results, settings)`` on a staged output.
+
+        The output moves into place only on success; its provenance is then recorded.
+        """
         from qgis.core import QgsProcessingException
 
         from ..outputs import layer_source

@@ -55,7 +55,7 @@ HEIGHT_FORMULAS = ("second_order", "first_order")
 #: Fields added to the copy of the station layer (docs/reduction.md, section 6), all mGal but
 #: qc_flag: the reduction's fields with the two terrain zones before their total.
 _TC_TOTAL_AT = REDUCTION_FIELDS.index("tc_total")
-RESULT_FIELDS = REDUCTION_FIELDS[:_TC_TOTAL_AT] + ("tc_inner", "tc_outer") + REDUCTION_FIELDS[_TC_TOTAL_AT:]
+RESULT_FIELDS = (*REDUCTION_FIELDS[:_TC_TOTAL_AT], "tc_inner", "tc_outer", *REDUCTION_FIELDS[_TC_TOTAL_AT:])
 
 #: Further per-station results the terrain runner may return (written when present).
 ENGINE_EXTRA_FIELDS = ("tc_trunc",)
@@ -73,9 +73,12 @@ def gravity_unit_names() -> list:
 
 
 def observed_gravity_mgal(table, gravity_field, units):
-    """Observed gravity in mGal; stop when most values are not Earth's gravity
-    in the declared units, flag single stations that are not (shared by the
-    algorithms that reduce observed gravity)."""
+    """Observed gravity in mGal, checked against Earth's gravity in the declared units.
+
+    Stop when most values are not Earth's gravity in the declared units, flag
+    single stations that are not (shared by the algorithms that reduce
+    observed gravity).
+    """
     raw = table.field_values(gravity_field, missing_code="no_gravity")
     problem = check_gravity(raw, units)
     if problem is not None:
@@ -468,7 +471,14 @@ class BouguerReductionAlgorithm(StationAlgorithm):
             ),
             "inner_radius_m": inner,
             "outer_radius_m": outer,
-            "dem_files": [p for p in (placed.raster.path if placed else None, raster_path(regional) if regional and placed else None) if p],
+            "dem_files": [
+                p
+                for p in (
+                    placed.raster.path if placed else None,
+                    raster_path(regional) if regional and placed else None,
+                )
+                if p
+            ],
             "geoid": geoid_description(height_datum, dem_datum),
             "uncertainty": uncertainty_settings(self, parameters, context),
         }

@@ -137,7 +137,10 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
             QgsProcessingParameterEnum(
                 self.METHOD,
                 self.tr("Method"),
-                options=[self.tr("Exact engine (prisms, DEM-driven)"), self.tr("Ring-and-sector (Hammer 1939 zones B-M)")],
+                options=[
+                    self.tr("Exact engine (prisms, DEM-driven)"),
+                    self.tr("Ring-and-sector (Hammer 1939 zones B-M)"),
+                ],
                 defaultValue=EXACT,
             )
         )
@@ -319,7 +322,9 @@ class TerrainCorrectionAlgorithm(StationAlgorithm):
         computed = int(np.isfinite(result["tc_total"]).sum())
         flagged = sum(1 for f in table.flags if f)
         feedback.pushInfo(
-            self.tr("{} stations: terrain correction computed for {}, {} flagged.").format(len(table), computed, flagged)
+            self.tr("{} stations: terrain correction computed for {}, {} flagged.").format(
+                len(table), computed, flagged
+            )
         )
         settings = {
             "method": "exact engine" if method == EXACT else "ring-and-sector (Hammer 1939)",

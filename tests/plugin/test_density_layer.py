@@ -4,6 +4,7 @@
 from __future__ import annotations
 
 import hashlib
+from pathlib import Path
 
 import numpy as np
 import pytest
@@ -27,14 +28,14 @@ def _ring(box, epsg, steps=20):
     xs = np.concatenate([w + (e - w) * t, np.full(steps, e), e - (e - w) * t, np.full(steps, w)])
     ys = np.concatenate([np.full(steps, s), s + (n - s) * t, np.full(steps, n), n - (n - s) * t])
     if epsg == 32632:
-        return list(zip(xs, ys))
+        return list(zip(xs, ys, strict=True))
     src, dst = osr.SpatialReference(), osr.SpatialReference()
     src.ImportFromEPSG(32632)
     dst.ImportFromEPSG(epsg)
     for ref in (src, dst):
         ref.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)
     tr = osr.CoordinateTransformation(src, dst)
-    return [tr.TransformPoint(float(x), float(y))[:2] for x, y in zip(xs, ys)]
+    return [tr.TransformPoint(float(x), float(y))[:2] for x, y in zip(xs, ys, strict=True)]
 
 
 def _write_polygons(path, boxes, values, epsg=32632, kind=None):
@@ -47,7 +48,7 @@ def _write_polygons(path, boxes, values, epsg=32632, kind=None):
     layer = ds.CreateLayer("geology", srs, kind or ogr.wkbPolygon)
     layer.CreateField(ogr.FieldDefn("rho", ogr.OFTReal))
     layer.CreateField(ogr.FieldDefn("name", ogr.OFTString))
-    for box, value in zip(boxes, values):
+    for box, value in zip(boxes, values, strict=True):
         feature = ogr.Feature(layer.GetLayerDefn())
         if value is None:
             feature.SetFieldNull("rho")
@@ -79,7 +80,7 @@ def _layer(path):
     return layer
 
 
-@pytest.fixture()
+@pytest.fixture
 def dem(tmp_path, dem_writer):
     from relief_gravity.plugin.raster_io import ElevationRaster
 
@@ -105,7 +106,7 @@ def _expected_units():
     X, Y = np.meshgrid(cx, cy)
 
     def inside(box):
-        return (X > box[0]) & (X < box[1]) & (Y > box[2]) & (Y < box[3])
+        return (box[0] < X) & (box[1] > X) & (box[2] < Y) & (box[3] > Y)
 
     out = np.zeros((ROWS, COLS), dtype=int)
     out[inside(WEST_BLOCK)] = 1
@@ -119,7 +120,7 @@ def test_two_polygons_rasterised_and_sampled_at_stations(qgis_processing, tmp_pa
     from relief_gravity.plugin.density_layer import density_units, rasterise_units, station_densities
 
     path = _write_polygons(tmp_path / "geology.gpkg", [WEST_BLOCK, EAST_BLOCK, LATE_PATCH], [2.2, 2.9, 2.2], epsg)
-    digest = hashlib.sha256(open(path, "rb").read()).hexdigest()
+    digest = hashlib.sha256(Path(path).read_bytes()).hexdigest()
     polygons = _read(path)
     assert polygons.given_in == "g/cm3"
     assert polygons.densities.tolist() == [2670.0, 2200.0, 2900.0]
@@ -138,7 +139,7 @@ def test_two_polygons_rasterised_and_sampled_at_stations(qgis_processing, tmp_pa
     grid = dem.elevation_grid()
     # The cell unit under each station agrees with the polygon lookup here (stations away from edges).
     assert engine_units.station_density(grid, xs[:4], ys[:4]).tolist() == [2200.0, 2900.0, 2200.0, 2670.0]
-    assert hashlib.sha256(open(path, "rb").read()).hexdigest() == digest
+    assert hashlib.sha256(Path(path).read_bytes()).hexdigest() == digest
 
 
 def test_kg_per_m3_field_and_null_density(qgis_processing, tmp_path, dem, collecting_feedback):
@@ -158,7 +159,7 @@ def test_kg_per_m3_field_and_null_density(qgis_processing, tmp_path, dem, collec
 
 
 @pytest.mark.parametrize(
-    "values, message",
+    ("values", "message"),
     [([2.2, 2900.0], "one unit for every polygon"), ([None, None], "No polygon of DENSITY_LAYER has a density"), ([26.0, 27.0], "neither")],
 )
 def test_bad_densities_give_sentences(qgis_processing, tmp_path, values, message):

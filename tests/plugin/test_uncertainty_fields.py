@@ -108,3 +108,15 @@ def test_bad_density_interval_is_refused(provider, stations_gpkg, hill_dem, low,
         params["DENSITY_HIGH"] = high
     with pytest.raises(QgsProcessingException, match=match):
         _run(params)
+
+
+def test_a_fine_dem_covering_half_the_survey_falls_back_on_the_regional(provider, stations_gpkg, hill_dem, dem_writer, tmp_path):
+    """Stations beyond the fine DEM get their correction from the regional DEM, flagged tc_regional_only."""
+    path, (west, north, cell, heights) = hill_dem
+    half = dem_writer(tmp_path / "half.tif", heights[:, :60], west, north, cell)  # 494-500 km east only
+    layer = _run({"INPUT": str(stations_gpkg), "DEM": str(half), "REGIONAL_DEM": str(path), "OUTER_RADIUS": 5000.0})["OUTPUT"]
+    x = np.array([f.geometry().asPoint().x() for f in layer.getFeatures()])
+    flags = [f["qc_flag"] for f in layer.getFeatures()]
+    assert np.all(np.isfinite(_values(layer, "cba")))
+    for xi, flag in zip(x, flags, strict=True):
+        assert ("tc_regional_only" in flag) == (xi > west + 60 * cell), (xi, flag)

@@ -10,6 +10,7 @@ every cell counts whole.
 
 from __future__ import annotations
 
+import itertools
 import math
 from dataclasses import replace
 
@@ -18,7 +19,13 @@ import pytest
 
 from relief_gravity.algorithms import reduce_gravity
 from relief_gravity.algorithms.constants import GRAVITATIONAL_CONSTANT, SI_TO_MGAL
-from relief_gravity.algorithms.terrain import ElevationGrid, TerrainCancelled, TerrainModel, prism_gravity, terrain_correction
+from relief_gravity.algorithms.terrain import (
+    ElevationGrid,
+    TerrainCancelled,
+    TerrainModel,
+    prism_gravity,
+    terrain_correction,
+)
 from relief_gravity.algorithms.terrain._geology import (
     DensityUnits,
     density_table_to_kg_m3,
@@ -61,8 +68,8 @@ def test_two_flat_topped_blocks_against_analytic_prisms():
     # excess 50-150 m above the station.
     a = (-150.0, 150.0, -100.0, 100.0)
     b = (160.0, 400.0, -300.0, 200.0)
-    in_a = (X > a[0]) & (X < a[1]) & (Y > a[2]) & (Y < a[3])
-    in_b = (X > b[0]) & (X < b[1]) & (Y > b[2]) & (Y < b[3])
+    in_a = (a[0] < X) & (a[1] > X) & (a[2] < Y) & (a[3] > Y)
+    in_b = (b[0] < X) & (b[1] > X) & (b[2] < Y) & (b[3] > Y)
     heights = np.where(in_a, 50.0, np.where(in_b, 150.0, 0.0))
     units = DensityUnits([2670.0, 2000.0, 3000.0], np.where(in_a, 1, np.where(in_b, 2, 0)))
     r = terrain_correction_by_units([0.0], [0.0], [50.0], grid_of(heights), None, units, FLAT)
@@ -125,7 +132,7 @@ def test_field_innermost_values_pass_through_unchanged():
 def split_case(boundary_x):
     """Smooth relief; unit 1 (2200) east of ``boundary_x``, default 2670 west of it."""
     heights = smooth_relief()
-    east = X > boundary_x
+    east = boundary_x < X
     return heights, DensityUnits([2670.0, 2200.0], east.astype(int)), np.where(east, 2200.0, 2670.0)
 
 
@@ -206,7 +213,7 @@ def test_progress_and_cancel():
     heights, units, _ = split_case(200.0)
     seen = []
     terrain_correction_by_units([0.0], [0.0], [450.0], grid_of(heights), None, units, FLAT, progress=seen.append)
-    assert seen[-1] == 1.0 and all(0.0 <= a <= b <= 1.0 for a, b in zip(seen, seen[1:]))
+    assert seen[-1] == 1.0 and all(0.0 <= a <= b <= 1.0 for a, b in itertools.pairwise(seen))
     with pytest.raises(TerrainCancelled):
         terrain_correction_by_units([0.0], [0.0], [450.0], grid_of(heights), None, units, FLAT, is_cancelled=lambda: True)
 
@@ -238,7 +245,7 @@ def test_bad_inputs_give_sentences():
 
 
 @pytest.mark.parametrize(
-    "values, expected, unit",
+    ("values", "expected", "unit"),
     [([2.67, 2.2], [2670.0, 2200.0], "g/cm3"), ([2670, 1900], [2670.0, 1900.0], "kg/m3"), ([0.5, 5.0], [500.0, 5000.0], "g/cm3")],
 )
 def test_density_table_units(values, expected, unit):
@@ -247,7 +254,7 @@ def test_density_table_units(values, expected, unit):
 
 
 @pytest.mark.parametrize(
-    "values, message",
+    ("values", "message"),
     [([2670.0, 26.7], "26.7 is not in 500-5000 kg/m"), ([2.67, 26.7], "26.7 is not in 0.5-5 g/cm"),
      ([26.7], "neither"), ([np.nan], "no polygon"), ([2670000.0], "neither")],
 )

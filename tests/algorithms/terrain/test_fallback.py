@@ -1,0 +1,87 @@
+# SPDX-License-Identifier: GPL-2.0-or-later
+"""The regional DEM where the fine DEM has no data (algorithms/terrain/_fallback.py)."""
+
+import numpy as np
+
+from relief_gravity.algorithms.terrain import ElevationGrid, TerrainModel, terrain_correction
+from relief_gravity.algorithms.terrain._fallback import filled_grid, holes_near, terrain_correction_with_fallback
+
+CELL, N = 50.0, 120  # 6 km fine DEM
+WEST, NORTH = 0.0, N * CELL
+
+
+def _surface(x, y):
+    """Invented relief: a 300 m hill on a 100 m plain (m)."""
+    return 100.0 + 300.0 * np.exp(-((x - 3000.0) ** 2 + (y - 3200.0) ** 2) / (2 * 900.0**2))
+
+
+def _grids(hole=None):
+    xc = WEST + (np.arange(N) + 0.5) * CELL
+    yc = NORTH - (np.arange(N) + 0.5) * CELL
+    fine = _surface(xc[None, :], yc[:, None])
+    if hole is not None:
+        fine[hole] = np.nan
+    rc = 250.0  # regional: the same surface on 250 m cells over 20 km
+    n_r = 80
+    rx = -7000.0 + (np.arange(n_r) + 0.5) * rc
+    ry = 13000.0 - (np.arange(n_r) + 0.5) * rc
+    regional = _surface(rx[None, :], ry[:, None])
+    return (ElevationGrid.from_array(fine, WEST, NORTH, CELL, CELL),
+            ElevationGrid.from_array(regional, -7000.0, 13000.0, rc, rc))
+
+
+MODEL = TerrainModel(inner_radius=895.0, outer_radius=5000.0, curvature=False)
+
+
+def test_without_a_regional_dem_the_engine_runs_unchanged():
+    fine, _ = _grids()
+    x, y = np.array([2500.0, 3300.0]), np.array([2800.0, 3500.0])
+    h = _surface(x, y)
+    a = terrain_correction(x, y, h, fine, None, MODEL)
+    b = terrain_correction_with_fallback(x, y, h, fine, None, MODEL)
+    np.testing.assert_array_equal(a.tc_total, b.tc_total)
+    assert a.flags == b.flags
+
+
+def test_a_void_near_the_station_is_filled_and_flagged():
+    hole = (slice(50, 70), slice(62, 82))  # 1 km x 1 km void about 300-1300 m east of the station
+    full, regional = _grids()
+    holed, _ = _grids(hole)
+    x, y = np.array([3000.0, 3000.0]), np.array([3000.0, 600.0])
+    h = _surface(x, y)
+    reference = terrain_correction(x, y, h, full, regional, MODEL).tc_total
+    silent = terrain_correction(x, y, h, holed, regional, MODEL)
+    filled = terrain_correction_with_fallback(x, y, h, holed, regional, MODEL)
+    # Left out, the void lowers the correction; filled from the regional DEM
+    # (the same surface on coarser cells) it comes back to within 2 % of the
+    # full fine DEM's value.
+    assert reference[0] - silent.tc_total[0] > 0.02
+    assert abs(filled.tc_total[0] - reference[0]) < 0.02 * reference[0]
+    assert "tc_regional_fill" in filled.flags[0]
+    assert "tc_gap_inner" not in filled.flags[0]
+    # The other station has the void beyond its inner zone: not flagged, but
+    # its outer zone is filled too and comes back to the full DEM's value.
+    assert filled.flags[1] == []
+    assert abs(filled.tc_total[1] - reference[1]) < 0.1 * abs(silent.tc_total[1] - reference[1])
+
+
+def test_a_station_outside_the_fine_dem_is_computed_from_the_regional_alone():
+    fine, regional = _grids()
+    x, y = np.array([3000.0, 9000.0]), np.array([3000.0, 3000.0])
+    h = _surface(x, y)
+    result = terrain_correction_with_fallback(x, y, h, fine, regional, MODEL)
+    alone = terrain_correction(x[1:], y[1:], h[1:], regional, None, MODEL)
+    assert np.all(np.isfinite(result.tc_total))
+    np.testing.assert_allclose(result.tc_total[1], alone.tc_total[0], rtol=1e-12)
+    assert "tc_regional_only" in result.flags[1] and "outside_dem" not in result.flags[1]
+    assert "tc_regional_only" not in result.flags[0]
+
+
+def test_holes_near_and_filled_grid():
+    z = np.zeros((9, 9))
+    z[4, 6] = np.nan
+    g = ElevationGrid.from_array(z, 0, 90, 10, 10)
+    assert holes_near(g, np.array([45.0]), np.array([45.0]), 25.0).tolist() == [True]
+    assert holes_near(g, np.array([45.0]), np.array([45.0]), 15.0).tolist() == [False]
+    regional = ElevationGrid.from_array(np.full((3, 3), 5.0), -100, 200, 100, 100)
+    assert abs(filled_grid(g, regional).read_window(4, 6, 1, 1)[0, 0] - 5.0) < 1e-12
