@@ -22,7 +22,8 @@ import numpy as np
 
 from ..algorithms import reduce_gravity
 from ..algorithms.datums import mismatch_tolerance
-from ..algorithms.terrain import TerrainModel, hammer_terrain_correction, terrain_correction
+from ..algorithms.terrain import TerrainModel, hammer_terrain_correction
+from ..algorithms.terrain._fallback import terrain_correction_with_fallback
 
 EXACT, RING_SECTOR = 0, 1
 
@@ -104,7 +105,8 @@ def terrain_chunk(
             result["tc_inner"] = result["tc_inner"] + extra
             result["tc_total"] = result["tc_total"] + extra
         return result
-    engine = terrain_correction(x, y, heights, fine, regional, model, workers=1)
+    # Main's route: the regional DEM fills fine NoData cells and serves stations off the fine DEM.
+    engine = terrain_correction_with_fallback(x, y, heights, fine, regional, model, workers=1)
     return {
         "tc_inner": np.asarray(engine.tc_inner, dtype=float),
         "tc_outer": np.asarray(engine.tc_outer, dtype=float),

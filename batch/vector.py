@@ -173,6 +173,20 @@ def geographic_wkt() -> str:
     return srs.ExportToWkt()
 
 
+def _output_field(original, columns, texts):
+    """The output's copy of an input field, as ``plugin/stations.py``'s ``output_fields``.
+
+    A reused result field of another type becomes a real number; the flag and
+    note fields are always unlimited text (they grow with every run).
+    """
+    name = original.GetName()
+    if name in texts:
+        return ogr.FieldDefn(name, ogr.OFTString)
+    if name in columns and original.GetType() != ogr.OFTReal:
+        return ogr.FieldDefn(name, ogr.OFTReal)
+    return original
+
+
 def write_output(
     source_path: str,
     layer_name: str | None,
@@ -200,16 +214,14 @@ def write_output(
         out = out_ds.CreateLayer(Path(out_path).stem, srs, lyr.GetGeomType())
         in_defn = lyr.GetLayerDefn()
         for i in range(in_defn.GetFieldCount()):
-            out.CreateField(in_defn.GetFieldDefn(i))
+            out.CreateField(_output_field(in_defn.GetFieldDefn(i), columns, texts))
         out_defn = out.GetLayerDefn()
         indices = {}
         for name in [*columns, *texts]:
             index = out_defn.GetFieldIndex(name)
             if index < 0:
-                fd = ogr.FieldDefn(name, ogr.OFTReal if name in columns else ogr.OFTString)
-                if name in texts:
-                    fd.SetWidth(254)
-                out.CreateField(fd)
+                # Flags and notes are unlimited text, as the plugin writes them.
+                out.CreateField(ogr.FieldDefn(name, ogr.OFTReal if name in columns else ogr.OFTString))
                 out_defn = out.GetLayerDefn()
                 index = out_defn.GetFieldIndex(name)
             elif on_reused is not None:
