@@ -93,10 +93,19 @@ def terrain_chunk(
     )
     if method == RING_SECTOR:
         hammer = hammer_terrain_correction(
-            x, y, heights, fine, density=model.reference_density, zones=zones, regional=regional, inner_radius=inner_radius
+            x,
+            y,
+            heights,
+            fine,
+            density=model.reference_density,
+            zones=zones,
+            regional=regional,
+            inner_radius=inner_radius,
         )
         scale = model.density_factors(n) / model.reference_density
-        result = {key: np.array(getattr(hammer, key), dtype=float) * scale for key in ("tc_inner", "tc_outer", "tc_total")}
+        result = {
+            key: np.array(getattr(hammer, key), dtype=float) * scale for key in ("tc_inner", "tc_outer", "tc_total")
+        }
         result["zones"] = {k: np.asarray(v, dtype=float) * scale for k, v in hammer.zones.items()}
         result["flags"] = [[c for c in str(f).split(";") if c] for f in hammer.flags]
         if innermost_tc is not None:
@@ -175,7 +184,9 @@ def reduce_chunk(
         )
 
 
-def uncertainty_chunk(chunk: dict, grid, heights_reduced, density, reduced: dict, truncation, options: dict, cfg: dict) -> dict:
+def uncertainty_chunk(
+    chunk: dict, grid, heights_reduced, density, reduced: dict, truncation, options: dict, cfg: dict
+) -> dict:
     """``tc_sigma``, ``cba_sigma`` and the components (mGal), as ``plugin/uncertainty_run.py``.
 
     ``grid`` is the fine DEM, None when the terrain correction came from a
@@ -195,7 +206,13 @@ def uncertainty_chunk(chunk: dict, grid, heights_reduced, density, reduced: dict
     terrain_nodes = None
     if grid is not None:
         near = near_terrain_spread(
-            chunk["x"], chunk["y"], np.asarray(chunk["heights"], float), grid, density, cfg["dem_sigma"], height_sigma,
+            chunk["x"],
+            chunk["y"],
+            np.asarray(chunk["heights"], float),
+            grid,
+            density,
+            cfg["dem_sigma"],
+            height_sigma,
             radius=cfg["inner_radius"],
         )
         terrain_nodes = near.height_nodes

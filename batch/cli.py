@@ -1,5 +1,5 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
-"""``python3 -m relief_gravity.batch terrain|reduce ...``"""
+"""The command line: ``python3 -m relief_gravity.batch terrain|reduce ...``."""
 
 from __future__ import annotations
 
@@ -33,6 +33,9 @@ def main(argv=None, *, on_chunk=None) -> int:
         return 1
     except KeyboardInterrupt:
         folder = parts_dir(values["OUTPUT"])
-        print(f"\nInterrupted. Computed chunks are kept in {folder}; run the same command again to resume.", file=sys.stderr)
+        print(
+            f"\nInterrupted. Computed chunks are kept in {folder}; run the same command again to resume.",
+            file=sys.stderr,
+        )
         return 130
     return 0

@@ -51,7 +51,8 @@ def code_of(reason: str) -> str:
     for pattern, code in _PATTERNS:
         if pattern.match(text):
             return code
-    raise KeyError(f"no flag code for the reason {text!r}")
+    msg = f"no flag code for the reason {text!r}"
+    raise KeyError(msg)
 
 
 def codes_of(joined: str) -> list[str]:

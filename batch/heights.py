@@ -77,7 +77,8 @@ def egm96_at(longitude, latitude) -> np.ndarray:
     path = find_egm96()
     if path is None:
         msg = (
-            f"The EGM96 geoid grid {EGM96_FILE} was not found in PROJ's search paths ({', '.join(proj_search_paths())}). "
+            f"The EGM96 geoid grid {EGM96_FILE} was not found in PROJ's search paths "
+            f"({', '.join(proj_search_paths())}). "
             "Install PROJ's grid data (Debian: proj-data), or give the geoid heights with --height-datum geoid-given "
             "and --geoid-field or --geoid-raster, or set both datums to the ellipsoid."
         )
@@ -103,10 +104,16 @@ def check_datum_options(v: dict) -> None:
     given = v.get("HEIGHT_DATUM") == datums.STATION_GEOID_GIVEN
     field, raster = bool(v.get("GEOID_FIELD")), bool(v.get("GEOID_RASTER"))
     if given and field == raster:
-        msg = "--height-datum geoid-given takes the geoid height from a field or a raster: give exactly one of --geoid-field and --geoid-raster."
+        msg = (
+            "--height-datum geoid-given takes the geoid height from a field or a raster: "
+            "give exactly one of --geoid-field and --geoid-raster."
+        )
         raise BatchError(msg)
     if not given and (field or raster):
-        msg = "A geoid height field or raster is given but --height-datum does not use it: set --height-datum geoid-given, or leave them out."
+        msg = (
+            "A geoid height field or raster is given but --height-datum does not use it: "
+            "set --height-datum geoid-given, or leave them out."
+        )
         raise BatchError(msg)
 
 
@@ -137,9 +144,15 @@ def check_dem_values(path: str, label: str) -> None:
             f"(gdal_translate -a_nodata {problem.value:.6g}) and run again."
         )
     elif problem.kind == "too_high":
-        msg = f"The {label} {path} reaches {problem.value:.6g}, higher than any point on Earth in metres: it looks like feet or centimetres. Convert it to metres and run again."
+        msg = (
+            f"The {label} {path} reaches {problem.value:.6g}, higher than any point on Earth in metres: it looks "
+            "like feet or centimetres. Convert it to metres and run again."
+        )
     else:
-        msg = f"The {label} {path} goes down to {problem.value:.6g}, deeper than any point on Earth in metres: an untagged void value or a unit error. Set its NoData value or convert it to metres."
+        msg = (
+            f"The {label} {path} goes down to {problem.value:.6g}, deeper than any point on Earth in metres: an "
+            "untagged void value or a unit error. Set its NoData value or convert it to metres."
+        )
     raise BatchError(msg)
 
 
@@ -148,7 +161,10 @@ def observed_mgal(raw: np.ndarray, units: int, field: str):
     problem = check_gravity(raw, units)
     if problem is not None:
         if problem.zeros:
-            msg = f"Every observed gravity value in {field} is 0: the field holds no readings. Choose the field with observed (absolute) gravity."
+            msg = (
+                f"Every observed gravity value in {field} is 0: the field holds no readings. Choose the field with "
+                "observed (absolute) gravity."
+            )
         elif problem.likely_units is not None:
             msg = (
                 f"Observed gravity in {field} reads {problem.median:.6g} mGal (median) with --gravity-units "
@@ -157,8 +173,10 @@ def observed_mgal(raw: np.ndarray, units: int, field: str):
             )
         else:
             msg = (
-                f"Observed gravity in {field} reads {problem.median:.6g} mGal (median), far from Earth's 975,000-984,000 "
-                "mGal in any unit: relative meter readings or another quantity? The reduction needs absolute observed gravity."
+                f"Observed gravity in {field} reads {problem.median:.6g} mGal (median), far from Earth's "
+                "975,000-984,000 "
+                "mGal in any unit: relative meter readings or another quantity? "
+                "The reduction needs absolute observed gravity."
             )
         raise BatchError(msg)
     observed = gravity_to_mgal(raw, units)
@@ -228,6 +246,7 @@ def _scale_sentence(scale: str, declared_units: int, raw, dem) -> str:
         )
     unit, factor = ("feet", 0.3048) if scale == "inverse_feet" else ("centimetres", 0.01)
     return (
-        f"The elevation raster looks like heights in {unit} (about {1.0 / factor:.4g} times the station heights in metres: "
+        f"The elevation raster looks like heights in {unit} (about {1.0 / factor:.4g} times the station heights in "
+        "metres: "
         f"DEM median {dm:.1f} against {st:.1f} m). Convert it to metres (value × {factor}) and run again."
     )

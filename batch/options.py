@@ -32,11 +32,13 @@ class Param:
 
     @property
     def option(self) -> str:
+        """The command-line option, ``--stations`` for INPUT, else ``--name-in-lower-case``."""
         special = {"INPUT": "--stations", "OUTPUT": "--output"}
         return special.get(self.name, "--" + self.name.lower().replace("_", "-"))
 
     @property
     def dest(self) -> str:
+        """The option's attribute name in argparse's namespace."""
         return self.option[2:].replace("-", "_")
 
 
@@ -68,12 +70,27 @@ _DEM_REGIONAL_RADII = (
 )
 _DENSITY = Param("DENSITY", "number", "reduction density (kg/m3)", 2670.0)
 _DENSITY_LAYER = (
-    Param("DENSITY_LAYER", "polygons", "geology polygons with densities (not supported by the batch runner)", optional=True),
+    Param(
+        "DENSITY_LAYER",
+        "polygons",
+        "geology polygons with densities (not supported by the batch runner)",
+        optional=True,
+    ),
     Param("DENSITY_LAYER_FIELD", "field", "density field of the geology polygons", optional=True),
 )
 _UNCERTAINTY = (
-    Param("HEIGHT_SIGMA", "number", "station height error, one sigma (m)", 0.05, optional=True, minimum=0.0, maximum=1000.0),
-    Param("HEIGHT_SIGMA_FIELD", "field", "station height error field (m; replaces the number where set)", optional=True),
+    Param(
+        "HEIGHT_SIGMA",
+        "number",
+        "station height error, one sigma (m)",
+        0.05,
+        optional=True,
+        minimum=0.0,
+        maximum=1000.0,
+    ),
+    Param(
+        "HEIGHT_SIGMA_FIELD", "field", "station height error field (m; replaces the number where set)", optional=True
+    ),
     Param(
         "G_SIGMA",
         "number",
@@ -83,9 +100,29 @@ _UNCERTAINTY = (
         minimum=0.0,
         maximum=1000.0,
     ),
-    Param("DEM_SIGMA", "number", "DEM vertical random error per cell, one sigma (m)", 1.0, optional=True, minimum=0.0, maximum=1000.0),
-    Param("DENSITY_LOW", "number", "reduction density, lower bound of its 95%% interval (kg/m3)", optional=True, minimum=0.0),
-    Param("DENSITY_HIGH", "number", "reduction density, upper bound of its 95%% interval (kg/m3)", optional=True, minimum=0.0),
+    Param(
+        "DEM_SIGMA",
+        "number",
+        "DEM vertical random error per cell, one sigma (m)",
+        1.0,
+        optional=True,
+        minimum=0.0,
+        maximum=1000.0,
+    ),
+    Param(
+        "DENSITY_LOW",
+        "number",
+        "reduction density, lower bound of its 95%% interval (kg/m3)",
+        optional=True,
+        minimum=0.0,
+    ),
+    Param(
+        "DENSITY_HIGH",
+        "number",
+        "reduction density, upper bound of its 95%% interval (kg/m3)",
+        optional=True,
+        minimum=0.0,
+    ),
 )
 
 TERRAIN = (
@@ -98,17 +135,34 @@ TERRAIN = (
     _DENSITY,
     *_DENSITY_LAYER,
     Param("INNERMOST_TC_FIELD", "field", "field-estimated innermost-ring correction (mGal)", optional=True),
-    Param("WATER_DENSITY", "number", "treat cells below sea level as water of this density (kg/m3)", optional=True, minimum=0.0),
+    Param(
+        "WATER_DENSITY",
+        "number",
+        "treat cells below sea level as water of this density (kg/m3)",
+        optional=True,
+        minimum=0.0,
+    ),
     Param("METHOD", "enum", "exact engine or ring-and-sector (Hammer 1939 zones B-M)", 0, ("exact", "ring-sector")),
     Param("ZONE_FIELDS", "bool", "ring-and-sector: one field per Hammer zone", False),
-    Param("ZONES", "string", "ring-and-sector: Hammer zones (contiguous letters out of B-M, or a range such as B-M)", "BCDEFGHIJKLM"),
+    Param(
+        "ZONES",
+        "string",
+        "ring-and-sector: Hammer zones (contiguous letters out of B-M, or a range such as B-M)",
+        "BCDEFGHIJKLM",
+    ),
     Param("OUTPUT", "sink", "output file (.gpkg, or .parquet where GDAL has the driver)"),
 )
 
 REDUCE = (
     Param("INPUT", "source", "station file (GeoPackage, Parquet, any OGR point layer)"),
     Param("GRAVITY_FIELD", "field", "observed gravity field (in --gravity-units)"),
-    Param("GRAVITY_UNITS", "enum", "units of observed gravity (um-s2: micrometres per second squared)", 0, ("mgal", "um-s2", "gal", "m-s2")),
+    Param(
+        "GRAVITY_UNITS",
+        "enum",
+        "units of observed gravity (um-s2: micrometres per second squared)",
+        0,
+        ("mgal", "um-s2", "gal", "m-s2"),
+    ),
     Param("HEIGHT_FIELD", "field", "station height field (empty: sample the DEM)", optional=True),
     _HEIGHT_UNITS,
     Param("DEM", "raster", "elevation raster (GeoTIFF, VRT mosaic, ...; metres)", optional=True),
@@ -124,7 +178,12 @@ REDUCE = (
     *_DEM_REGIONAL_RADII,
     *_UNCERTAINTY,
     *_DENSITY_LAYER,
-    Param("ORTHOMETRIC_REDUCTION", "bool", "reduce with orthometric heights (legacy practice; the standard uses ellipsoidal heights)", False),
+    Param(
+        "ORTHOMETRIC_REDUCTION",
+        "bool",
+        "reduce with orthometric heights (legacy practice; the standard uses ellipsoidal heights)",
+        False,
+    ),
     Param("OUTPUT", "sink", "output file (.gpkg, or .parquet where GDAL has the driver)"),
 )
 
@@ -140,14 +199,20 @@ DEFAULT_MEMORY = "2GiB"
 
 def _add_param(parser: argparse.ArgumentParser, p: Param) -> None:
     if p.kind == "enum":
-        parser.add_argument(p.option, dest=p.dest, choices=p.words, default=p.words[p.default], help=p.help + " (default %(default)s)")
+        parser.add_argument(
+            p.option, dest=p.dest, choices=p.words, default=p.words[p.default], help=p.help + " (default %(default)s)"
+        )
     elif p.kind == "bool":
-        parser.add_argument(p.option, dest=p.dest, action=argparse.BooleanOptionalAction, default=p.default, help=p.help)
+        parser.add_argument(
+            p.option, dest=p.dest, action=argparse.BooleanOptionalAction, default=p.default, help=p.help
+        )
     elif p.kind == "number":
         suffix = " (default %(default)s)" if p.default is not None else ""
         parser.add_argument(p.option, dest=p.dest, type=float, default=p.default, metavar="X", help=p.help + suffix)
     elif p.kind == "string":
-        parser.add_argument(p.option, dest=p.dest, default=p.default, metavar="TEXT", help=p.help + " (default %(default)s)")
+        parser.add_argument(
+            p.option, dest=p.dest, default=p.default, metavar="TEXT", help=p.help + " (default %(default)s)"
+        )
     else:
         required = not p.optional
         metavar = {"field": "FIELD", "raster": "RASTER", "source": "FILE", "sink": "OUT", "polygons": "FILE"}[p.kind]
@@ -157,6 +222,7 @@ def _add_param(parser: argparse.ArgumentParser, p: Param) -> None:
 
 
 def build_parser() -> argparse.ArgumentParser:
+    """The argument parser of both commands (one sub-command each)."""
     parser = argparse.ArgumentParser(
         prog="python3 -m relief_gravity.batch",
         description="Relief Gravity batch runner: the terrain correction and the Bouguer reduction of "
@@ -168,10 +234,27 @@ def build_parser() -> argparse.ArgumentParser:
         for param in params:
             _add_param(p, param)
         run = p.add_argument_group("running")
-        run.add_argument("--workers", type=int, default=os.cpu_count() or 1, metavar="N", help="worker processes of the local cluster (default: the cores, %(default)s)")
-        run.add_argument("--scheduler", metavar="ADDRESS", help="use the dask.distributed scheduler at ADDRESS instead of a local cluster")
-        run.add_argument("--chunk-size", type=int, default=DEFAULT_CHUNK, metavar="K", help="stations per task (default %(default)s)")
-        run.add_argument("--memory-limit", default=DEFAULT_MEMORY, metavar="BYTES", help="memory limit per local worker, e.g. 2GiB (default %(default)s)")
+        run.add_argument(
+            "--workers",
+            type=int,
+            default=os.cpu_count() or 1,
+            metavar="N",
+            help="worker processes of the local cluster (default: the cores, %(default)s)",
+        )
+        run.add_argument(
+            "--scheduler",
+            metavar="ADDRESS",
+            help="use the dask.distributed scheduler at ADDRESS instead of a local cluster",
+        )
+        run.add_argument(
+            "--chunk-size", type=int, default=DEFAULT_CHUNK, metavar="K", help="stations per task (default %(default)s)"
+        )
+        run.add_argument(
+            "--memory-limit",
+            default=DEFAULT_MEMORY,
+            metavar="BYTES",
+            help="memory limit per local worker, e.g. 2GiB (default %(default)s)",
+        )
         run.add_argument("--overwrite", action="store_true", help="replace an existing output file")
         run.add_argument("--quiet", action="store_true", help="no progress bar")
     return parser
@@ -191,4 +274,5 @@ def processing_values(command: str, args: argparse.Namespace) -> dict:
 
 
 def param(command: str, name: str) -> Param:
+    """The parameter ``name`` of ``command`` ("terrain" or "reduce")."""
     return next(p for p in COMMANDS[command][1] if p.name == name)

@@ -24,7 +24,8 @@ import numpy as np
 def partition(x: np.ndarray, y: np.ndarray, size: int) -> list[np.ndarray]:
     """Index arrays (sorted, disjoint, covering every station) of compact chunks."""
     if size < 1:
-        raise ValueError(f"chunk size must be >= 1, got {size}")
+        msg = f"chunk size must be >= 1, got {size}"
+        raise ValueError(msg)
     x = np.asarray(x, dtype=float)
     y = np.asarray(y, dtype=float)
     ok = np.isfinite(x) & np.isfinite(y)

@@ -51,24 +51,38 @@ def _check_numbers(command: str, v: dict) -> None:
         value = v.get(p.name)
         if p.kind == "number" and value is not None:
             if not np.isfinite(value):
-                raise BatchError(f"{p.option} must be a number, got {value}.")
+                msg = f"{p.option} must be a number, got {value}."
+                raise BatchError(msg)
             if p.minimum is not None and value < p.minimum:
-                raise BatchError(f"{p.option} must be at least {p.minimum:g}, got {value:g}.")
+                msg = f"{p.option} must be at least {p.minimum:g}, got {value:g}."
+                raise BatchError(msg)
             if p.maximum is not None and value > p.maximum:
-                raise BatchError(f"{p.option} must be at most {p.maximum:g}, got {value:g}.")
+                msg = f"{p.option} must be at most {p.maximum:g}, got {value:g}."
+                raise BatchError(msg)
     problem = _density_sentence(v["DENSITY"], "DENSITY")
     if problem:
         raise BatchError(problem)
     inner, outer = v["INNER_RADIUS"], v["OUTER_RADIUS"]
     if not 0 < inner < outer:
-        raise BatchError(f"The inner zone radius ({inner} m) must be positive and smaller than the outer zone radius ({outer} m).")
+        msg = f"The inner zone radius ({inner} m) must be positive and smaller than the outer zone radius ({outer} m)."
+        raise BatchError(msg)
 
 
 def _labels(command: str, v: dict) -> dict:
     keys = {
-        "terrain": {"HEIGHT_FIELD": "station height", "INNERMOST_TC_FIELD": "innermost-ring correction", "GEOID_FIELD": "geoid height"},
-        "reduce": {"GRAVITY_FIELD": "observed gravity", "HEIGHT_FIELD": "station height", "DENSITY_FIELD": "density", "TC_FIELD": "terrain correction",
-                   "GEOID_FIELD": "geoid height", "HEIGHT_SIGMA_FIELD": "station height error"},
+        "terrain": {
+            "HEIGHT_FIELD": "station height",
+            "INNERMOST_TC_FIELD": "innermost-ring correction",
+            "GEOID_FIELD": "geoid height",
+        },
+        "reduce": {
+            "GRAVITY_FIELD": "observed gravity",
+            "HEIGHT_FIELD": "station height",
+            "DENSITY_FIELD": "density",
+            "TC_FIELD": "terrain correction",
+            "GEOID_FIELD": "geoid height",
+            "HEIGHT_SIGMA_FIELD": "station height error",
+        },
     }[command]
     return {v[k]: label for k, label in keys.items() if v.get(k)}
 
@@ -86,12 +100,15 @@ def _check_output(v: dict, overwrite: bool, resuming: bool) -> None:
     output_driver(out)
     source = v["INPUT"].split("|")[0]
     if os.path.abspath(out) == os.path.abspath(source):
-        raise BatchError("The output must be a new file: the station file is never altered.")
+        msg = "The output must be a new file: the station file is never altered."
+        raise BatchError(msg)
     folder = os.path.dirname(os.path.abspath(out))
     if not os.path.isdir(folder) or not os.access(folder, os.W_OK):
-        raise BatchError(f"The output folder {folder} does not exist or is not writable.")
+        msg = f"The output folder {folder} does not exist or is not writable."
+        raise BatchError(msg)
     if os.path.exists(out) and not overwrite and not resuming:
-        raise BatchError(f"The output {out} exists; add --overwrite to replace it, or choose another name.")
+        msg = f"The output {out} exists; add --overwrite to replace it, or choose another name."
+        raise BatchError(msg)
 
 
 def _density_sentence(value: float, setting: str) -> str:
@@ -134,7 +151,10 @@ def _check_options(command: str, v: dict) -> None:
             msg = "Give both bounds of the density interval (--density-low and --density-high), or neither."
             raise BatchError(msg)
         if low is not None and not 0 < low <= high:
-            msg = f"The density interval {low} to {high} kg/m³ is impossible: the lower bound must be positive and not above the upper bound."
+            msg = (
+                f"The density interval {low} to {high} kg/m³ is impossible: the lower bound must be positive and "
+                "not above the upper bound."
+            )
             raise BatchError(msg)
 
 
@@ -159,7 +179,8 @@ def _densities(v: dict, st, n: int, flags: dict, plan_warnings: list) -> np.ndar
     odd = np.isfinite(values) & ((values < low) | (values > high))
     if np.any(odd):
         plan_warnings.append(
-            f"{int(odd.sum())} station(s) have a reduction density outside {low}-{high} kg/m³ (e.g. {float(values[odd][0])}); check the units."
+            f"{int(odd.sum())} station(s) have a reduction density outside {low}-{high} kg/m³ (e.g. "
+            f"{float(values[odd][0])}); check the units."
         )
         _flag_where(flags, odd, "density_unusual")
     return values
@@ -193,16 +214,27 @@ def prepare(command: str, v: dict, *, overwrite: bool = False, resuming: bool = 
         raise BatchError(problem)
     height_field = v.get("HEIGHT_FIELD")
     if command == "reduce" and not height_field and not v.get("DEM"):
-        raise BatchError("Choose a station height field or an elevation raster to sample heights from.")
+        msg = "Choose a station height field or an elevation raster to sample heights from."
+        raise BatchError(msg)
     dem = open_checked(v["DEM"], "elevation raster") if v.get("DEM") else None
     regional = open_checked(v["REGIONAL_DEM"], "regional elevation raster") if v.get("REGIONAL_DEM") else None
 
     srs = layer_srs(lyr)
     if srs is None:
-        raise BatchError("The station layer has no coordinate reference system. Assign its CRS so latitudes can be computed.")
+        msg = "The station layer has no coordinate reference system. Assign its CRS so latitudes can be computed."
+        raise BatchError(msg)
     if lyr.GetFeatureCount() == 0:
-        raise BatchError("The station layer has no features: there is nothing to reduce.")
-    keys = ("GRAVITY_FIELD", "HEIGHT_FIELD", "DENSITY_FIELD", "TC_FIELD", "INNERMOST_TC_FIELD", "GEOID_FIELD", "HEIGHT_SIGMA_FIELD")
+        msg = "The station layer has no features: there is nothing to reduce."
+        raise BatchError(msg)
+    keys = (
+        "GRAVITY_FIELD",
+        "HEIGHT_FIELD",
+        "DENSITY_FIELD",
+        "TC_FIELD",
+        "INNERMOST_TC_FIELD",
+        "GEOID_FIELD",
+        "HEIGHT_SIGMA_FIELD",
+    )
     names = [v[k] for k in keys if v.get(k)]
     defn = lyr.GetLayerDefn()
     has_g_sigma = command == "reduce" and defn.GetFieldIndex("g_sigma") >= 0
@@ -224,10 +256,12 @@ def prepare(command: str, v: dict, *, overwrite: bool = False, resuming: bool = 
         x, y = transform_points(srs, dem.crs_wkt, st.x, st.y)
         west, east, south, north = dem.extent
         if not np.any((x >= west) & (x <= east) & (y >= south) & (y <= north)):
-            raise BatchError(
-                f"No station lies on the elevation raster (raster extent {west:.6g}, {east:.6g}, {south:.6g}, {north:.6g} "
+            msg = (
+                f"No station lies on the elevation raster (raster extent {west:.6g}, {east:.6g}, {south:.6g}, "
+                f"{north:.6g} "
                 "in its own CRS). Check that the raster covers the survey and that both layers have the right CRS."
             )
+            raise BatchError(msg)
         check_dem_values(v["DEM"], "elevation raster")
     else:
         x, y = st.x.copy(), st.y.copy()
@@ -265,7 +299,8 @@ def prepare(command: str, v: dict, *, overwrite: bool = False, resuming: bool = 
         orthometric = bool(v["ORTHOMETRIC_REDUCTION"])
         reduction = heights.orthometric if orthometric else heights.ellipsoidal
         if orthometric and not np.isfinite(reduction).any() and np.isfinite(heights.ellipsoidal).any():
-            raise BatchError("Orthometric reduction needs geoid heights: PROJ's EGM96 grid or --geoid-field/--geoid-raster.")
+            msg = "Orthometric reduction needs geoid heights: PROJ's EGM96 grid or --geoid-field/--geoid-raster."
+            raise BatchError(msg)
         arrays["reduction_heights"] = reduction
         arrays["density"] = density
         arrays["tc_field"] = st.values[tc_field] if tc_field else None
@@ -295,7 +330,9 @@ def prepare(command: str, v: dict, *, overwrite: bool = False, resuming: bool = 
     }
     if command == "terrain":
         zones = "".join(z.letter for z in parse_zones(v.get("ZONES") or "BCDEFGHIJKLM"))
-        config.update(method=v["METHOD"], zone_fields=bool(v["ZONE_FIELDS"]), water_density=v.get("WATER_DENSITY"), zones=zones)
+        config.update(
+            method=v["METHOD"], zone_fields=bool(v["ZONE_FIELDS"]), water_density=v.get("WATER_DENSITY"), zones=zones
+        )
     else:
         low, high = v.get("DENSITY_LOW"), v.get("DENSITY_HIGH")
         config.update(
@@ -316,7 +353,7 @@ def prepare(command: str, v: dict, *, overwrite: bool = False, resuming: bool = 
             config["regional_warp"] = (regional.crs_wkt, dem.crs_wkt)
         else:
             config["regional"] = v["REGIONAL_DEM"]
-    ds = None
+    del ds
     return Plan(
         command=command,
         values=v,

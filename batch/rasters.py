@@ -32,15 +32,18 @@ class GdalRaster:
         try:
             self.dataset = gdal.Open(str(path), gdal.GA_ReadOnly)
         except RuntimeError as error:
-            raise BatchError(f"Could not open the elevation raster {path}: {error}") from error
+            msg = f"Could not open the elevation raster {path}: {error}"
+            raise BatchError(msg) from error
         if self.dataset is None:
-            raise BatchError(f"Could not open the elevation raster {path}.")
+            msg = f"Could not open the elevation raster {path}."
+            raise BatchError(msg)
         self.path = str(path)
         self.band = self.dataset.GetRasterBand(1)
         self.nodata = self.band.GetNoDataValue()
         x0, dx, rx, y0, ry, dy = self.dataset.GetGeoTransform()
         if rx != 0 or ry != 0:
-            raise BatchError(f"The elevation raster {path} is rotated; warp it to a north-up grid first.")
+            msg = f"The elevation raster {path} is rotated; warp it to a north-up grid first."
+            raise BatchError(msg)
         self.flipped = dy > 0
         self.x_origin = x0
         self.cell_x = abs(dx)
@@ -105,10 +108,12 @@ class GdalRaster:
 def open_checked(path: str, label: str) -> GdalRaster:
     """Open a raster in the driver and refuse what the plugin refuses."""
     if not os.path.exists(path) and not str(path).startswith("/vsi"):
-        raise BatchError(f"The {label} {path} does not exist.")
+        msg = f"The {label} {path} does not exist."
+        raise BatchError(msg)
     raster = GdalRaster(path)
     if not raster.crs_wkt:
-        raise BatchError(f"The {label} {path} has no coordinate reference system.")
+        msg = f"The {label} {path} has no coordinate reference system."
+        raise BatchError(msg)
     return raster
 
 

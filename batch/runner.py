@@ -51,6 +51,7 @@ class Progress:
         self.last = 0.0
 
     def line(self) -> str:
+        """The progress line: bar, stations done, rate and time left."""
         elapsed = time.monotonic() - self.t0
         rate = (self.done - self.start_done) / elapsed if elapsed > 0 else 0.0
         left = (self.total - self.done) / rate if rate > 0 else float("nan")
@@ -60,6 +61,7 @@ class Progress:
         return f"[{bar}] {self.done:,}/{self.total:,} stations  {rate:,.1f}/s  {eta} left"
 
     def add(self, n: int) -> None:
+        """Count ``n`` more stations done and show the line (at most every 0.2 s, 10 s without a terminal)."""
         self.done += n
         if not self.enabled:
             return
@@ -75,6 +77,7 @@ class Progress:
             self.last = now
 
     def close(self) -> None:
+        """End the progress line."""
         if self.enabled and self.tty:
             self.stream.write("\n")
 
@@ -91,9 +94,9 @@ def importable_path() -> str | None:
 
     root = Path(relief_gravity.__file__).resolve().parent
     spec = importlib.machinery.PathFinder.find_spec("relief_gravity", sys.path)
-    if spec is not None and spec.submodule_search_locations:
-        if Path(list(spec.submodule_search_locations)[0]).resolve() == root:
-            return None
+    locations = list(spec.submodule_search_locations or []) if spec is not None else []
+    if locations and Path(locations[0]).resolve() == root:
+        return None
     folder = tempfile.mkdtemp(prefix="relief_gravity_path_")
     os.symlink(root, os.path.join(folder, "relief_gravity"), target_is_directory=True)
     sys.path.insert(0, folder)
@@ -133,14 +136,19 @@ def start_client(scheduler: str | None, workers: int, memory_limit: str):
         {
             "distributed.scheduler.allowed-failures": ALLOWED_FAILURES,
             "distributed.worker.profile.enabled": False,
-            "distributed.nanny.pre-spawn-environ": {"OMP_NUM_THREADS": 1, "MKL_NUM_THREADS": 1, "OPENBLAS_NUM_THREADS": 1},
+            "distributed.nanny.pre-spawn-environ": {
+                "OMP_NUM_THREADS": 1,
+                "MKL_NUM_THREADS": 1,
+                "OPENBLAS_NUM_THREADS": 1,
+            },
         }
     )
     if scheduler:
         try:
             return Client(scheduler, timeout=dask.config.get("distributed.comm.timeouts.connect")), None
         except (OSError, TimeoutError) as error:
-            raise BatchError(f"Could not reach the Dask scheduler at {scheduler}: {error}") from error
+            msg = f"Could not reach the Dask scheduler at {scheduler}: {error}"
+            raise BatchError(msg) from error
     # With the dashboard off the scheduler still opens a small HTTP server;
     # when port 8787 is taken it picks another and warns: nothing to act on.
     warnings.filterwarnings("ignore", message="Port 8787 is already in use")
@@ -192,16 +200,19 @@ def run(command: str, values: dict, args, *, log=print, on_chunk=None) -> dict:
     parts = Parts(values["OUTPUT"])
     resuming = parts.exists()
     if args.workers < 1:
-        raise BatchError(f"--workers must be at least 1, got {args.workers}.")
+        msg = f"--workers must be at least 1, got {args.workers}."
+        raise BatchError(msg)
     if args.chunk_size < 1:
-        raise BatchError(f"--chunk-size must be at least 1, got {args.chunk_size}.")
+        msg = f"--chunk-size must be at least 1, got {args.chunk_size}."
+        raise BatchError(msg)
     from dask.utils import parse_bytes
 
     try:
         if parse_bytes(args.memory_limit) < 256 * 2**20:
             raise ValueError
     except (ValueError, TypeError):
-        raise BatchError(f"--memory-limit must be a size of at least 256MiB, such as 2GiB; got {args.memory_limit!r}.") from None
+        msg = f"--memory-limit must be a size of at least 256MiB, such as 2GiB; got {args.memory_limit!r}."
+        raise BatchError(msg) from None
     plan = prepare(command, values, overwrite=args.overwrite, resuming=resuming)
     for text in plan.warnings:
         log("Warning: " + text)
@@ -226,7 +237,11 @@ def run(command: str, values: dict, args, *, log=print, on_chunk=None) -> dict:
     log(
         f"{plan.n:,} stations in {len(chunks):,} chunks of up to {args.chunk_size} "
         f"(mean chunk extent {footprint(x, y, chunks):,.0f} CRS units); "
-        + (f"resuming: {len(results):,} chunks already computed in {parts.folder}." if resuming else f"parts in {parts.folder}.")
+        + (
+            f"resuming: {len(results):,} chunks already computed in {parts.folder}."
+            if resuming
+            else f"parts in {parts.folder}."
+        )
     )
     peaks: list = []
     if todo:
@@ -263,12 +278,13 @@ def _compute(plan, cfg, chunks, todo, results, parts, args, log, on_chunk) -> li
         for done, future in enumerate(running, start=1):
             try:
                 result = future.result()
-            except Exception as error:  # noqa: BLE001 - reported as a sentence
+            except Exception as error:
                 name = type(error).__name__
-                raise BatchError(
+                msg = (
                     f"A chunk failed ({name}: {error}). The {len(results):,} chunks computed so far are kept in "
                     f"{parts.folder}; run the same command again to resume."
-                ) from error
+                )
+                raise BatchError(msg) from error
             submit_next()
             parts.save(result)
             results[result["index"]] = result
@@ -294,8 +310,10 @@ def _compute(plan, cfg, chunks, todo, results, parts, args, log, on_chunk) -> li
 
 
 def _input_record(path: str, layer: str | None) -> dict | None:
-    """The station file's provenance record, None without one (GDAL raises
-    for a file it cannot open as a raster when exceptions are on)."""
+    """The station file's provenance record, None without one.
+
+    GDAL raises for a file it cannot open as a raster when exceptions are on.
+    """
     try:
         return provenance.read_record(path, layer)
     except RuntimeError:
@@ -320,7 +338,9 @@ def _assemble(plan, args, chunks, results, parts, peaks, resumed, log) -> dict:
         out,
         columns,
         {"qc_flag": qc, "qc_note": notes},
-        on_reused=lambda name: log(f"Warning: the input already has a field {name}; its values are replaced in the output copy."),
+        on_reused=lambda name: log(
+            f"Warning: the input already has a field {name}; its values are replaced in the output copy."
+        ),
     )
     algorithm = COMMANDS[plan.command][0]
     step = provenance.make_step(algorithm, plan.values, _settings(plan, args, len(chunks)))
@@ -344,6 +364,19 @@ def _assemble(plan, args, chunks, results, parts, peaks, resumed, log) -> dict:
     log(f"{plan.n:,} stations: {computed:,} {what}, {flagged:,} flagged. Output: {out}")
     if peaks:
         limit = "" if args.scheduler else f" (limit {args.memory_limit})"
-        log("Peak memory per worker: " + ", ".join(f"{p / 2**20:,.0f} MiB" for p, _ in peaks) + limit
-            + "; CPU time per worker: " + ", ".join(f"{c:,.1f} s" for _, c in peaks) + ".")
-    return {"stations": plan.n, "computed": computed, "flagged": flagged, "chunks": len(chunks), "resumed_chunks": resumed, "workers": peaks}
+        log(
+            "Peak memory per worker: "
+            + ", ".join(f"{p / 2**20:,.0f} MiB" for p, _ in peaks)
+            + limit
+            + "; CPU time per worker: "
+            + ", ".join(f"{c:,.1f} s" for _, c in peaks)
+            + "."
+        )
+    return {
+        "stations": plan.n,
+        "computed": computed,
+        "flagged": flagged,
+        "chunks": len(chunks),
+        "resumed_chunks": resumed,
+        "workers": peaks,
+    }

@@ -25,6 +25,7 @@ MANIFEST = "manifest.json"
 
 
 def parts_dir(output: str) -> Path:
+    """The folder of finished chunks beside the output (``<output>.parts``)."""
     return Path(os.path.abspath(output) + ".parts")
 
 
@@ -49,6 +50,7 @@ def raster_identity(path: str | None) -> list | None:
 
 
 def fingerprint(command: str, values: dict, chunk_size: int, stations_path: str, version: str) -> str:
+    """SHA-256 of what decides the chunks' results: command, options, chunking, inputs and version."""
     described = {
         "command": command,
         "values": {k: v for k, v in values.items() if k != "OUTPUT"},
@@ -77,6 +79,7 @@ class Parts:
         self.folder = parts_dir(output)
 
     def exists(self) -> bool:
+        """True when an earlier run left its manifest."""
         return (self.folder / MANIFEST).exists()
 
     def open(self, fp: str, n_chunks: int, n_stations: int) -> None:
@@ -89,18 +92,21 @@ class Parts:
             except ValueError:
                 found = {}
             if found != manifest:
-                raise BatchError(
+                msg = (
                     f"The folder {self.folder} holds the parts of another run (other stations, rasters or options). "
                     "Run the same command as before to resume it, or remove the folder to start again."
                 )
+                raise BatchError(msg)
             return
         self.folder.mkdir(parents=True, exist_ok=True)
         _atomic_write(path, json.dumps(manifest, sort_keys=True).encode())
 
     def part_path(self, index: int) -> Path:
+        """The file of chunk ``index``."""
         return self.folder / f"part-{index:06d}.npz"
 
     def save(self, result: dict) -> None:
+        """Write a finished chunk (atomically: a killed run leaves no half part)."""
         buffer = io.BytesIO()
         arrays = {"rows": np.asarray(result["rows"], np.int64), "qc_flag": np.asarray(result["qc_flag"], dtype=str)}
         arrays.update({"col_" + k: np.asarray(v, float) for k, v in result["columns"].items()})
@@ -122,4 +128,5 @@ class Parts:
             return None
 
     def file(self, name: str) -> Path:
+        """A file of the parts folder."""
         return self.folder / name

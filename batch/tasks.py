@@ -83,7 +83,11 @@ def run_chunk(chunk: dict, cfg: dict) -> dict:
             result = _terrain(chunk, cfg, density, None, adapters.EXACT)
             engine_flags = result["flags"]
             tc_total = result["tc_total"]
-            engine = {"tc_inner": result["tc_inner"], "tc_outer": result["tc_outer"], **_engine_columns(chunk, cfg, result, late)}
+            engine = {
+                "tc_inner": result["tc_inner"],
+                "tc_outer": result["tc_outer"],
+                **_engine_columns(chunk, cfg, result, late),
+            }
             truncation = result["tc_trunc"]
         else:
             tc_total = nan
@@ -95,7 +99,12 @@ def run_chunk(chunk: dict, cfg: dict) -> dict:
         }
         reduction_heights = np.asarray(chunk["reduction_heights"], float)
         reduced = adapters.reduce_chunk(
-            np.asarray(chunk["observed"], float), np.asarray(chunk["latitude"], float), reduction_heights, density, tc_total, **options
+            np.asarray(chunk["observed"], float),
+            np.asarray(chunk["latitude"], float),
+            reduction_heights,
+            density,
+            tc_total,
+            **options,
         )
         names = REDUCTION_FIELDS[: REDUCTION_FIELDS.index("tc_total")]
         columns = {k: np.asarray(reduced[k], float) for k in names}
@@ -104,9 +113,7 @@ def run_chunk(chunk: dict, cfg: dict) -> dict:
         columns.update(engine)
         grid = cached(cfg["dem"]).elevation_grid() if cfg.get("dem") and chunk.get("tc_field") is None else None
         columns.update(
-            adapters.uncertainty_chunk(
-                chunk, grid, reduction_heights, density, reduced, truncation, options, cfg
-            )
+            adapters.uncertainty_chunk(chunk, grid, reduction_heights, density, reduced, truncation, options, cfg)
         )
     qc = [
         as_qc_flag([*chunk["flags_a"][i], *chunk["flags_b"][i], *chunk["flags_c"][i], *engine_flags[i], *late[i]])

@@ -33,35 +33,42 @@ def output_driver(path: str) -> str:
     ext = Path(path).suffix.lower()
     name = FORMATS.get(ext)
     if name is None:
-        raise BatchError(f"The output {path} must end in .gpkg or .parquet (GeoPackage or GeoParquet).")
+        msg = f"The output {path} must end in .gpkg or .parquet (GeoPackage or GeoParquet)."
+        raise BatchError(msg)
     if ogr.GetDriverByName(name) is None:
-        raise BatchError(f"This GDAL ({gdal.__version__}) has no {name} driver: write a .gpkg instead.")
+        msg = f"This GDAL ({gdal.__version__}) has no {name} driver: write a .gpkg instead."
+        raise BatchError(msg)
     return name
 
 
 def open_layer(path: str, layer: str | None):
     """Open a station file read-only and pick its layer (the first by default)."""
     if not os.path.exists(path):
-        raise BatchError(f"The station file {path} does not exist.")
+        msg = f"The station file {path} does not exist."
+        raise BatchError(msg)
     try:
         ds = ogr.Open(str(path), 0)
     except RuntimeError as error:
-        raise BatchError(f"Could not open the station file {path}: {error}") from error
+        msg = f"Could not open the station file {path}: {error}"
+        raise BatchError(msg) from error
     if ds is None or ds.GetLayerCount() == 0:
-        raise BatchError(f"The station file {path} holds no vector layer GDAL can read.")
+        msg = f"The station file {path} holds no vector layer GDAL can read."
+        raise BatchError(msg)
     if layer:
         lyr = ds.GetLayerByName(layer)
         if lyr is None:
             names = ", ".join(ds.GetLayerByIndex(i).GetName() for i in range(ds.GetLayerCount()))
-            raise BatchError(f"The station file {path} has no layer named '{layer}'. Layers: {names}.")
+            msg = f"The station file {path} has no layer named '{layer}'. Layers: {names}."
+            raise BatchError(msg)
     else:
         lyr = ds.GetLayerByIndex(0)
     kind = ogr.GT_Flatten(lyr.GetGeomType())
     if kind not in (ogr.wkbPoint, ogr.wkbMultiPoint, ogr.wkbUnknown):
-        raise BatchError(
+        msg = (
             f"The layer '{lyr.GetName()}' of {path} holds {ogr.GeometryTypeToName(kind).lower()} geometries; "
             "gravity stations must be points."
         )
+        raise BatchError(msg)
     return ds, lyr
 
 
@@ -85,10 +92,14 @@ def field_problem(lyr, chosen: dict) -> str:
     for name, label in chosen.items():
         index = defn.GetFieldIndex(name)
         if index < 0:
-            return f"The station layer has no field named '{name}' (chosen as the {label} field). Available fields: {', '.join(names)}."
+            return (
+                f"The station layer has no field named '{name}' (chosen as the {label} field). "
+                f"Available fields: {', '.join(names)}."
+            )
         fd = defn.GetFieldDefn(index)
         if fd.GetType() not in NUMERIC or fd.GetSubType() == ogr.OFSTBoolean:
-            return f"The field '{name}' chosen as the {label} field is not numeric (it is {fd.GetFieldTypeName(fd.GetType())})."
+            kind = fd.GetFieldTypeName(fd.GetType())
+            return f"The field '{name}' chosen as the {label} field is not numeric (it is {kind})."
     return ""
 
 
@@ -112,6 +123,7 @@ class StationArrays:
     values: dict = field(default_factory=dict)
 
     def __len__(self) -> int:
+        """Number of stations."""
         return len(self.x)
 
 
@@ -135,7 +147,9 @@ def read_arrays(lyr, srs, names) -> StationArrays:
         for n, i in index.items():
             cols[n].append(_as_float(feature.GetField(i)) if feature.IsFieldSetAndNotNull(i) else math.nan)
     lyr.ResetReading()
-    return StationArrays(np.array(xs, float), np.array(ys, float), srs, {n: np.array(v, float) for n, v in cols.items()})
+    return StationArrays(
+        np.array(xs, float), np.array(ys, float), srs, {n: np.array(v, float) for n, v in cols.items()}
+    )
 
 
 def transform_points(srs, dst_wkt: str, x: np.ndarray, y: np.ndarray):
@@ -168,6 +182,7 @@ def transform_points(srs, dst_wkt: str, x: np.ndarray, y: np.ndarray):
 
 
 def geographic_wkt() -> str:
+    """WKT of WGS 84 longitude/latitude (EPSG:4326)."""
     srs = osr.SpatialReference()
     srs.ImportFromEPSG(4326)
     return srs.ExportToWkt()
@@ -195,9 +210,11 @@ def write_output(
     texts: dict,
     on_reused=None,
 ) -> str:
-    """Copy every station of the input with ``columns`` (float arrays, NaN ->
-    NULL) and ``texts`` (lists of str) appended, into a temporary file next to
-    ``out_path``; returns that file's path (the caller renames it).
+    """Copy every station of the input with the results appended, into a temporary file.
+
+    ``columns`` are float arrays (NaN -> NULL), ``texts`` lists of str; the
+    temporary file is next to ``out_path``; returns its path (the caller
+    renames it).
     """
     driver_name = output_driver(out_path)
     ds, lyr = open_layer(source_path, layer_name)
@@ -256,5 +273,5 @@ def write_output(
             os.remove(temp)
         raise
     out_ds = None
-    ds = None
+    del ds
     return temp

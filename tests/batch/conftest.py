@@ -45,7 +45,7 @@ def write_layer(path: Path, xs, ys, columns: dict, epsg: int | None = 32632, geo
     for name, values in columns.items():
         kind = ogr.OFTString if any(isinstance(v, str) for v in values) else ogr.OFTReal
         lyr.CreateField(ogr.FieldDefn(name, kind))
-    for i, (x, y) in enumerate(zip(xs, ys)):
+    for i, (x, y) in enumerate(zip(xs, ys, strict=True)):
         f = ogr.Feature(lyr.GetLayerDefn())
         for name, values in columns.items():
             v = values[i]

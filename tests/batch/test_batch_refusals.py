@@ -21,7 +21,7 @@ def _run(argv, capsys):
     return code, err
 
 
-@pytest.fixture()
+@pytest.fixture
 def base(small_survey, tmp_path):
     s = small_survey
     return {
@@ -111,7 +111,7 @@ CASES = [
 ]
 
 
-@pytest.mark.parametrize("command,changes,expected", CASES, ids=[f"{c}-{e[:28]}" for c, _, e in CASES])
+@pytest.mark.parametrize(("command", "changes", "expected"), CASES, ids=[f"{c}-{e[:28]}" for c, _, e in CASES])
 def test_refused_with_a_sentence(command, changes, expected, base, tmp_path, capsys, layer_writer, raster_writer, small_survey, file_digest):
     made = _inputs(tmp_path, layer_writer, raster_writer, small_survey)
     argv = base[command]

@@ -64,7 +64,7 @@ def _digest(path):
 
 
 def test_reference_run_is_complete(reference, rows_of, small_survey):
-    names, rows = rows_of(reference)
+    _, rows = rows_of(reference)
     assert len(rows) == small_survey["n"]
     assert sum(r["cba"] is not None for r in rows) > 200
     # The 8 km DEM does not fill the 6 km disc around most stations; the
@@ -161,7 +161,7 @@ def test_partition_is_compact_complete_and_stable():
     # Compact: a chunk of 64 of ~4950 spread stations covers about 1/77 of the area.
     areas = [np.ptp(x[c]) * np.ptp(y[c]) for c in placed]
     assert np.median(areas) < 100_000 * 50_000 / 77 * 2.0
-    assert all(np.array_equal(a, b) for a, b in zip(chunks, partition(x, y, 64)))
+    assert all(np.array_equal(a, b) for a, b in zip(chunks, partition(x, y, 64), strict=True))
 
 
 def test_every_engine_reason_has_a_flag_code():

@@ -47,9 +47,9 @@ def assert_same_as_plugin(plugin_out, batch_out):
     missing = [n for n in p_names if n not in b_names]
     assert not missing, missing
     # The batch output adds qc_note (the codes' meanings) where the plugin has none.
-    assert b_names == (p_names if "qc_note" in p_names else p_names + ["qc_note"])
+    assert b_names == (p_names if "qc_note" in p_names else [*p_names, "qc_note"])
     worst, compared = 0.0, 0
-    for i, (p, b) in enumerate(zip(p_rows, b_rows)):
+    for i, (p, b) in enumerate(zip(p_rows, b_rows, strict=True)):
         assert p["__xy"] == b["__xy"], i
         for name in p_names:
             a, c = p[name], b[name]

@@ -65,8 +65,8 @@ def test_every_parameter_has_an_option_of_the_same_kind(provider, command):
 @pytest.mark.parametrize("command", list(COMMANDS))
 def test_option_names_follow_the_parameter_names(command):
     parser = build_parser()
-    sub = parser._subparsers._group_actions[0].choices[command]  # noqa: SLF001 - argparse has no public accessor
-    options = {o for action in sub._actions for o in action.option_strings}  # noqa: SLF001
+    sub = parser._subparsers._group_actions[0].choices[command]
+    options = {o for action in sub._actions for o in action.option_strings}
     for p in COMMANDS[command][1]:
         expected = {"INPUT": "--stations", "OUTPUT": "--output"}.get(p.name, "--" + p.name.lower().replace("_", "-"))
         assert expected in options
