@@ -74,3 +74,24 @@ def pytest_collection_modifyitems(config, items):
     for item in items:
         if "tests/plugin" in str(item.fspath).replace("\\", "/"):
             item.add_marker(skip)
+
+
+@pytest.fixture(scope="session")
+def dask_address():
+    """Address of a dask.distributed LocalCluster of 2 worker processes shared
+    by the batch-runner tests (started once; workers import this checkout)."""
+    pytest.importorskip("distributed", reason="python3-distributed not installed (tools/setup.sh installs it)")
+    import logging
+
+    from distributed import LocalCluster
+
+    from relief_gravity.batch.runner import importable_path
+
+    folder = importable_path()
+    cluster = LocalCluster(n_workers=2, threads_per_worker=1, processes=True, dashboard_address=None, silence_logs=logging.ERROR)
+    yield cluster.scheduler_address
+    cluster.close()
+    if folder:
+        import shutil
+
+        shutil.rmtree(folder, ignore_errors=True)

@@ -13,7 +13,9 @@ import zipfile
 from pathlib import Path
 
 ROOT = Path(__file__).resolve().parent.parent
-INCLUDED_TOP = ("__init__.py", "metadata.txt", "LICENSE", "README.md", "algorithms", "plugin", "icons", "i18n")
+INCLUDED_TOP = (
+    "__init__.py", "metadata.txt", "LICENSE", "README.md", "algorithms", "plugin", "icons", "i18n", "batch", "docs",
+)
 EXCLUDED_SUFFIXES = (".pyc", ".pro", ".ts")
 EXCLUDED_PARTS = {"__pycache__", "tests", ".pytest_cache"}
 

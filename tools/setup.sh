@@ -13,7 +13,8 @@ PACKAGES="$PACKAGES python3-matplotlib chromium"
 PACKAGES="$PACKAGES python3-xarray python3-pooch python3-sklearn python3-dask"
 # Test-only references for the Earth tide (Sun and Moon positions; tidegravity's times).
 PACKAGES="$PACKAGES python3-astropy python3-pandas"
-
+# Batch runner (relief_gravity.batch): Dask and distributed, Debian builds over Debian's numpy.
+PACKAGES="$PACKAGES python3-dask python3-distributed"
 missing=""
 for p in $PACKAGES; do
     dpkg-query -W -f='${Status}' "$p" 2>/dev/null | grep -q "install ok installed" || missing="$missing $p"

@@ -113,6 +113,7 @@ def terrain_correction_with_fallback(
     *,
     progress: Callable[[float], None] | None = None,
     is_cancelled: Callable[[], bool] | None = None,
+    workers: int | None = None,
 ) -> TerrainResult:
     """The engine's terrain correction, with the regional DEM where the fine one has no data.
 
@@ -122,6 +123,9 @@ def terrain_correction_with_fallback(
         As for :func:`~._engine.terrain_correction`.
     progress, is_cancelled : callable, optional
         Passed to the engine.
+    workers : int, optional
+        Passed to the engine (the batch runner sets 1: Dask already runs
+        one task per core).
 
     Returns
     -------
@@ -144,10 +148,13 @@ def terrain_correction_with_fallback(
     y = np.asarray(y, dtype=float)
     h = np.asarray(station_height, dtype=float)
     if regional is None:
-        return terrain_correction(x, y, h, fine, None, model, progress=progress, is_cancelled=is_cancelled)
+        return terrain_correction(
+            x, y, h, fine, None, model, progress=progress, is_cancelled=is_cancelled, workers=workers
+        )
     holes = holes_near(fine, x, y, model.inner_radius)
     result = terrain_correction(
-        x, y, h, filled_grid(fine, regional), regional, model, progress=progress, is_cancelled=is_cancelled
+        x, y, h, filled_grid(fine, regional), regional, model,
+        progress=progress, is_cancelled=is_cancelled, workers=workers,
     )
     flags = [list(codes) for codes in result.flags]
     not_on_fine = np.array([any(code in NOT_ON_FINE for code in codes) for codes in flags], dtype=bool)
@@ -160,7 +167,8 @@ def terrain_correction_with_fallback(
     if served.any():
         index = np.flatnonzero(served)
         alone = terrain_correction(
-            x[index], y[index], h[index], regional, None, model.for_stations(index), is_cancelled=is_cancelled
+            x[index], y[index], h[index], regional, None, model.for_stations(index),
+            is_cancelled=is_cancelled, workers=workers,
         )
         for name, values in arrays.items():
             values[index] = np.asarray(getattr(alone, name), dtype=float)

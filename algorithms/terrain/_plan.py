@@ -375,7 +375,10 @@ def plan_grid(
     >>> [k for k, _ in p.levels], p.windows[0][0].tolist()
     ([0, 1], [24])
     """
-    metrics = tile_metrics(grid, float(np.min(y)), float(np.max(y)), outer_radius)
+    # Geographic grids: the metrics of the whole latitude band of the tile
+    # lattice, not of these stations, so a station's levels (and its result)
+    # do not depend on the other stations of the run (batch chunks).
+    metrics = tile_metrics(grid, *_band_range(grid, float(np.min(y)), float(np.max(y))), outer_radius)
     levels = level_radii(metrics, outer_radius, refinement)
     row, col = station_cells(grid, x, y)
     windows = []
@@ -434,6 +437,34 @@ def plan_grid(
     return GridPlan(grid, levels, windows, stats, [block_table(grid, lvl, origin) for lvl in stats], is_fine, exclude)
 
 
+def _band_range(grid: ElevationGrid, y_lo: float, y_hi: float) -> tuple[float, float]:
+    """Latitude range of the tile-lattice bands holding ``y_lo`` to ``y_hi`` (geographic grids).
+
+    Projected grids: the range unchanged.
+
+    Examples
+    --------
+    >>> g = ElevationGrid.from_array([[0.0]], 0, 46.0, 1.0, 1.0, geographic=True)
+    >>> lo, hi = _band_range(g, 45.9, 45.95)
+    >>> lo < 45.9 and 45.95 < hi <= 46.0
+    True
+    """
+    if not grid.geographic:
+        return y_lo, y_hi
+    span_y = math.degrees(TILE_SPAN / MEAN_EARTH_RADIUS)
+    top = math.floor((grid.y_origin - y_hi) / span_y)
+    bottom = math.floor((grid.y_origin - y_lo) / span_y)
+    return grid.y_origin - (bottom + 1) * span_y, grid.y_origin - top * span_y
+
+
+def _band_span_x(span_y: float, ty: np.ndarray, y_origin: float) -> np.ndarray:
+    """Tile width (degrees) of each latitude band: TILE_SPAN at the band's poleward edge."""
+    north = y_origin - ty * span_y
+    south = north - span_y
+    poleward = np.minimum(np.maximum(np.abs(north), np.abs(south)), 90.0)
+    return span_y / np.maximum(np.cos(np.radians(poleward)), 0.05)
+
+
 def tiles(grid: ElevationGrid, x: np.ndarray, y: np.ndarray, todo: np.ndarray) -> list[np.ndarray]:
     """Indices of the stations to compute, grouped into tiles of ``TILE_SPAN``.
 
@@ -447,16 +478,14 @@ def tiles(grid: ElevationGrid, x: np.ndarray, y: np.ndarray, todo: np.ndarray) -
     if idx.size == 0:
         return []
     span = TILE_SPAN
-    if grid.geographic:
-        span_y = math.degrees(span / MEAN_EARTH_RADIUS)
-        span_x = span_y / max(math.cos(math.radians(float(np.max(np.abs(y[idx]))))), 0.05)
-    else:
-        span_x = span_y = span
+    span_y = math.degrees(span / MEAN_EARTH_RADIUS) if grid.geographic else span
     # Tiles are cells of a lattice anchored at the raster's corner, so a
     # station's tile (and the tile's origin, see plan_grid) does not depend on
-    # the other stations of the run.
-    tx = np.floor((x[idx] - grid.x_origin) / span_x).astype(np.int64)
+    # the other stations of the run. Geographic grids: bands of latitude, each
+    # with its own tile width in longitude.
     ty = np.floor((grid.y_origin - y[idx]) / span_y).astype(np.int64)
+    span_x = _band_span_x(span_y, ty, grid.y_origin) if grid.geographic else span
+    tx = np.floor((x[idx] - grid.x_origin) / span_x).astype(np.int64)
     key = (tx - tx.min()) * (int(ty.max() - ty.min()) + 1) + (ty - ty.min())
     return [idx[key == kk] for kk in np.unique(key)]
 

@@ -33,7 +33,7 @@ import numpy as np
 
 from .._reduction import reduce_gravity
 from ._near_terrain import NearTerrainSpread
-from ._quadrature import normal_nodes
+from ._quadrature import normal_nodes, weighted_sum
 
 #: Component field names, in report order (each at most 10 characters).
 COMPONENTS = ("sigma_g", "sigma_h", "sigma_dem", "sigma_inn", "sigma_mis", "sigma_trn", "sigma_rho")
@@ -130,8 +130,9 @@ def height_component(
     )
     if terrain_nodes is not None:
         change = change + np.where(np.isfinite(terrain_nodes), terrain_nodes, 0.0)
-    mean = np.tensordot(wi, change, axes=1)
-    return np.sqrt(np.tensordot(wi, (change - mean) ** 2, axes=1))
+    # Element by element, so a station's value does not depend on the others computed with it.
+    mean = weighted_sum(wi, change)
+    return np.sqrt(weighted_sum(wi, (change - mean) ** 2))
 
 
 def uncertainty_budget(
@@ -219,6 +220,6 @@ def terrain_height_spread(terrain_nodes: np.ndarray) -> np.ndarray:
     """
     _xi, wi = normal_nodes(terrain_nodes.shape[0])
     values = np.where(np.isfinite(terrain_nodes), terrain_nodes, 0.0)
-    mean = np.tensordot(wi, values, axes=1)
-    spread = np.sqrt(np.tensordot(wi, (values - mean) ** 2, axes=1))
+    mean = weighted_sum(wi, values)
+    spread = np.sqrt(weighted_sum(wi, (values - mean) ** 2))
     return np.where(np.all(np.isfinite(terrain_nodes), axis=0), spread, np.nan)

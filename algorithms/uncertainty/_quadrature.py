@@ -84,3 +84,36 @@ def normal_spread(f: Callable[[np.ndarray], np.ndarray], sigma: float | np.ndarr
     mean = np.sum(wk * values, axis=0)
     var = np.sum(wk * (values - mean) ** 2, axis=0)
     return mean, np.sqrt(np.maximum(var, 0.0))
+
+
+def weighted_sum(weights: np.ndarray, values: np.ndarray) -> np.ndarray:
+    """``sum_k weights[k] * values[k]`` over the first axis, one element at a time.
+
+    The same result as ``np.tensordot(weights, values, axes=1)`` up to
+    rounding, but each output element depends only on its own column: a
+    matrix product (BLAS) may round a column differently with the array's
+    length or alignment, so a station's value would depend on which other
+    stations were computed with it (the batch runner's chunks).
+
+    Parameters
+    ----------
+    weights : numpy.ndarray
+        Shape ``(n,)``.
+    values : numpy.ndarray
+        Shape ``(n, ...)``.
+
+    Returns
+    -------
+    numpy.ndarray
+        Shape ``values.shape[1:]``.
+
+    Examples
+    --------
+    >>> weighted_sum(np.array([0.25, 0.75]), np.array([[4.0, 8.0], [0.0, 4.0]])).tolist()
+    [1.0, 5.0]
+    """
+    values = np.asarray(values, dtype=float)
+    total = np.zeros(values.shape[1:])
+    for w, row in zip(np.asarray(weights, dtype=float), values):
+        total = total + w * row
+    return total

@@ -42,7 +42,7 @@ def test_zip_has_one_top_folder_and_no_tests_or_caches(tmp_path):
     archive = Path(built.stdout.strip().splitlines()[-1])
     names = zipfile.ZipFile(archive).namelist()
     assert {n.split("/")[0] for n in names} == {"relief_gravity"}
-    for required in ("relief_gravity/__init__.py", "relief_gravity/metadata.txt", "relief_gravity/LICENSE", "relief_gravity/plugin/provider.py", "relief_gravity/algorithms/__init__.py"):
+    for required in ("relief_gravity/__init__.py", "relief_gravity/metadata.txt", "relief_gravity/LICENSE", "relief_gravity/plugin/provider.py", "relief_gravity/algorithms/__init__.py", "relief_gravity/batch/__main__.py", "relief_gravity/docs/batch.md"):
         assert required in names
     assert not [n for n in names if "/tests/" in n or "__pycache__" in n or n.endswith(".pyc") or "/bench/" in n or "/.venv" in n]
     assert any(n.endswith(".qm") for n in names)
