@@ -23,7 +23,7 @@ import numpy as np
 from ..algorithms import reduce_gravity
 from ..algorithms.datums import mismatch_tolerance
 from ..algorithms.terrain import TerrainModel, hammer_terrain_correction
-from ..algorithms.terrain._fallback import terrain_correction_with_fallback
+from ..algorithms.terrain._fallback import numerical_error, terrain_correction_with_fallback
 
 EXACT, RING_SECTOR = 0, 1
 
@@ -50,6 +50,7 @@ def terrain_chunk(
     method: int,
     zones: str = "BCDEFGHIJKLM",
     reference_density: float | None = None,
+    engine_check: bool = False,
 ) -> dict:
     """Terrain correction of a chunk of stations (mGal), as ``compute_terrain`` of the plugin.
 
@@ -116,7 +117,11 @@ def terrain_chunk(
         return result
     # Main's route: the regional DEM fills fine NoData cells and serves stations off the fine DEM.
     engine = terrain_correction_with_fallback(x, y, heights, fine, regional, model, workers=1)
+    extra = {}
+    if engine_check:
+        extra["tc_numerr"] = numerical_error(x, y, heights, fine, regional, model, engine, workers=1)
     return {
+        **extra,
         "tc_inner": np.asarray(engine.tc_inner, dtype=float),
         "tc_outer": np.asarray(engine.tc_outer, dtype=float),
         "tc_total": np.asarray(engine.tc_total, dtype=float),

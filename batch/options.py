@@ -150,6 +150,12 @@ TERRAIN = (
         "ring-and-sector: Hammer zones (contiguous letters out of B-M, or a range such as B-M)",
         "BCDEFGHIJKLM",
     ),
+    Param(
+        "ENGINE_CHECK",
+        "bool",
+        "also write tc_numerr, the engine's own error against a refined evaluation (about 4x the time)",
+        False,
+    ),
     Param("OUTPUT", "sink", "output file (.gpkg, or .parquet where GDAL has the driver)"),
 )
 
@@ -182,6 +188,12 @@ REDUCE = (
         "ORTHOMETRIC_REDUCTION",
         "bool",
         "reduce with orthometric heights (legacy practice; the standard uses ellipsoidal heights)",
+        False,
+    ),
+    Param(
+        "ENGINE_CHECK",
+        "bool",
+        "also write tc_numerr, the engine's own error against a refined evaluation (about 4x the time)",
         False,
     ),
     Param("OUTPUT", "sink", "output file (.gpkg, or .parquet where GDAL has the driver)"),

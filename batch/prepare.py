@@ -327,6 +327,7 @@ def prepare(command: str, v: dict, *, overwrite: bool = False, resuming: bool = 
         "outer_radius": v["OUTER_RADIUS"],
         "density": v["DENSITY"],
         "reference_density": reference_density_of(density),
+        "engine_check": bool(v.get("ENGINE_CHECK")),
     }
     if command == "terrain":
         zones = "".join(z.letter for z in parse_zones(v.get("ZONES") or "BCDEFGHIJKLM"))

@@ -42,6 +42,7 @@ def _terrain(chunk: dict, cfg: dict, density, innermost, method):
         method=method,
         zones=cfg.get("zones", HAMMER_ZONE_LETTERS),
         reference_density=cfg["reference_density"],
+        engine_check=cfg.get("engine_check", False),
     )
 
 
@@ -51,7 +52,10 @@ def _engine_columns(chunk: dict, cfg: dict, result: dict, late: list) -> dict:
     off = adapters.mismatch(grid, chunk["x"], chunk["y"], result["dem_diff"])
     for i in np.flatnonzero(off).tolist():
         late[i].append("height_dem_mismatch")
-    return {"dem_diff": result["dem_diff"], "tc_cover": result["coverage"], "tc_trunc": result["tc_trunc"]}
+    columns = {"dem_diff": result["dem_diff"], "tc_cover": result["coverage"], "tc_trunc": result["tc_trunc"]}
+    if "tc_numerr" in result:
+        columns["tc_numerr"] = result["tc_numerr"]
+    return columns
 
 
 def run_chunk(chunk: dict, cfg: dict) -> dict:

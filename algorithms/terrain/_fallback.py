@@ -193,6 +193,7 @@ def numerical_error(
     *,
     refinement: float = 2.0,
     is_cancelled: Callable[[], bool] | None = None,
+    workers: int | None = None,
 ) -> np.ndarray:
     """The engine's own error per station: its result against a refined evaluation (mGal).
 
@@ -211,6 +212,8 @@ def numerical_error(
         Factor on the coarsening distances of the refined run.
     is_cancelled : callable, optional
         Passed to the engine.
+    workers : int, optional
+        Threads of the engine (None: its default).
 
     Returns
     -------
@@ -230,5 +233,6 @@ def numerical_error(
     refined = terrain_correction_with_fallback(
         x, y, station_height, fine, regional, replace(model, refinement=model.refinement * refinement),
         is_cancelled=is_cancelled,
+        workers=workers,
     )
     return np.abs(np.asarray(result.tc_total, dtype=float) - np.asarray(refined.tc_total, dtype=float))

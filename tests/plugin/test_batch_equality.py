@@ -201,10 +201,11 @@ CASES = {
         ["terrain", "--stations", "ll", "--height-field", "h", "--dem", "dem", "--regional-dem", "regional_utm",
          "--water-density", "1030", "--innermost-tc-field", "inner", "--inner-radius", "1500", "--outer-radius", "30000"],
     ),
-    "terrain: exact engine on a lon/lat DEM": (
+    "terrain: exact engine on a lon/lat DEM, with the engine's own error": (
         "reliefgravity:terraincorrection",
-        {"INPUT": "ll", "HEIGHT_FIELD": "h", "DEM": "dem_geo", "OUTER_RADIUS": 15000.0},
-        ["terrain", "--stations", "ll", "--height-field", "h", "--dem", "dem_geo", "--outer-radius", "15000"],
+        {"INPUT": "ll", "HEIGHT_FIELD": "h", "DEM": "dem_geo", "OUTER_RADIUS": 15000.0, "ENGINE_CHECK": True},
+        ["terrain", "--stations", "ll", "--height-field", "h", "--dem", "dem_geo", "--outer-radius", "15000",
+         "--engine-check"],
     ),
 }
 
