@@ -11,11 +11,7 @@ and interpolated with ``algorithms.datums.bilinear_global`` (as the plugin).
 
 from __future__ import annotations
 
-import contextlib
-import os
 from dataclasses import dataclass
-from functools import lru_cache
-from pathlib import Path
 
 import numpy as np
 
@@ -28,48 +24,11 @@ from ..algorithms.plausibility import (
     gravity_to_mgal,
     height_scale_problem,
 )
+from ..plugin.egm96_grid import EGM96_FILE, egm96_values, find_egm96, proj_search_paths
 from .errors import BatchError
 
-EGM96_FILE = "egm96_15.gtx"
 #: Words of --gravity-units in GRAVITY_UNITS order, for the sentences.
 _UNIT_WORDS = ("mgal", "um-s2", "gal", "m-s2")
-
-
-def proj_search_paths() -> list[str]:
-    """Folders PROJ looks in for grids (GDAL's view first, then the environment)."""
-    from osgeo import osr
-
-    folders = []
-    with contextlib.suppress(AttributeError, RuntimeError):
-        folders += list(osr.GetPROJSearchPaths() or [])
-    for name in ("PROJ_DATA", "PROJ_LIB"):
-        value = os.environ.get(name)
-        if value:
-            folders += value.split(os.pathsep)
-    folders += ["/usr/share/proj", "/usr/local/share/proj"]
-    return list(dict.fromkeys(f for f in folders if f))
-
-
-def find_egm96() -> str | None:
-    """Path of PROJ's EGM96 grid, or None."""
-    for folder in proj_search_paths():
-        candidate = Path(folder) / EGM96_FILE
-        if candidate.is_file():
-            return str(candidate)
-    return None
-
-
-@lru_cache(maxsize=2)
-def _egm96_nodes(path: str):
-    from osgeo import gdal
-
-    dataset = gdal.Open(path, gdal.GA_ReadOnly)
-    x0, dx, _, y0, _, dy = dataset.GetGeoTransform()
-    values = dataset.GetRasterBand(1).ReadAsArray().astype(float)
-    nodata = dataset.GetRasterBand(1).GetNoDataValue()
-    if nodata is not None:
-        values[values == nodata] = np.nan
-    return values, x0 + dx / 2.0, y0 + dy / 2.0, dx
 
 
 def egm96_at(longitude, latitude) -> np.ndarray:
@@ -83,8 +42,7 @@ def egm96_at(longitude, latitude) -> np.ndarray:
             "and --geoid-field or --geoid-raster, or set both datums to the ellipsoid."
         )
         raise BatchError(msg)
-    values, west, north, step = _egm96_nodes(path)
-    return datums.bilinear_global(values, longitude, latitude, west, north, step)
+    return egm96_values(longitude, latitude)
 
 
 def check_geoid_values(values: np.ndarray, source: str) -> None:

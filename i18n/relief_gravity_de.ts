@@ -949,12 +949,12 @@
   <context>
     <name>GeoidHeights</name>
     <message>
-      <location filename="../plugin/geoid.py" line="80" />
+      <location filename="../plugin/geoid.py" line="36" />
       <source>The EGM96 geoid grid {} was not found in PROJ's search paths ({}). Install PROJ's grid data (Debian: proj-data), or give the geoid heights in a field or raster (HEIGHT_DATUM = orthometric with GEOID_FIELD or GEOID_RASTER), or set both datums to the ellipsoid.</source>
       <translation>Das EGM96-Geoidgitter {} wurde in den Suchpfaden von PROJ ({}) nicht gefunden. Installieren Sie die Gitterdaten von PROJ (Debian: proj-data), geben Sie die Geoidhöhen in einem Feld oder Raster an (HEIGHT_DATUM = orthometrisch mit GEOID_FIELD oder GEOID_RASTER) oder setzen Sie beide Höhenbezüge auf das Ellipsoid.</translation>
     </message>
     <message>
-      <location filename="../plugin/geoid.py" line="96" />
+      <location filename="../plugin/geoid.py" line="51" />
       <source>The geoid heights from {} reach {:.6g} m; geoid heights lie within ±{:g} m of the ellipsoid everywhere on Earth. Check that it holds geoid heights in metres.</source>
       <translation>Die Geoidhöhen aus {} erreichen {:.6g} m; Geoidhöhen liegen überall auf der Erde innerhalb ±{:g} m um das Ellipsoid. Prüfen Sie, ob es Geoidhöhen in Metern enthält.</translation>
     </message>

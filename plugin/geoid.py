@@ -1,69 +1,25 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
 """Geoid heights at stations: PROJ's EGM96 grid, a user raster or a field.
 
-The EGM96 grid is the file ``egm96_15.gtx`` that PROJ installs (with QGIS
-on most systems); it is found through PROJ's search paths and read with
-GDAL, never downloaded. The interpolation is bilinear on its 15' nodes
-(``algorithms.datums.bilinear_global``), as PROJ does for .gtx grids.
+The EGM96 grid (PROJ's ``egm96_15.gtx``, found through PROJ's search paths,
+never downloaded) is read by ``plugin/egm96_grid.py``, shared with the batch
+runner; this module adds the plugin's sentences.
 """
 
 from __future__ import annotations
 
-import contextlib
-import os
-from functools import lru_cache
-from pathlib import Path
-
 import numpy as np
-from osgeo import gdal, osr
 from qgis.core import QgsProcessingException
 from qgis.PyQt.QtCore import QCoreApplication
 
-from ..algorithms.datums import GEOID_LIMIT, bilinear_global
+from ..algorithms.datums import GEOID_LIMIT
+from .egm96_grid import EGM96_FILE, egm96_values, find_egm96, proj_search_paths
 
-EGM96_FILE = "egm96_15.gtx"
+__all__ = ["EGM96_FILE", "check_geoid_values", "egm96_at", "find_egm96", "proj_search_paths"]
 
 
 def _tr(text: str) -> str:
     return QCoreApplication.translate("GeoidHeights", text)
-
-
-def proj_search_paths() -> list[str]:
-    """Folders PROJ looks in for grids (GDAL's view first, then the environment)."""
-    folders = []
-    with contextlib.suppress(AttributeError, RuntimeError):
-        folders += list(osr.GetPROJSearchPaths() or [])
-    for name in ("PROJ_DATA", "PROJ_LIB"):
-        value = os.environ.get(name)
-        if value:
-            folders += value.split(os.pathsep)
-    folders += ["/usr/share/proj", "/usr/local/share/proj"]
-    unique = []
-    for folder in folders:
-        if folder and folder not in unique:
-            unique.append(folder)
-    return unique
-
-
-def find_egm96() -> str | None:
-    """Path of PROJ's EGM96 grid, or None when no search path holds it."""
-    for folder in proj_search_paths():
-        candidate = Path(folder) / EGM96_FILE
-        if candidate.is_file():
-            return str(candidate)
-    return None
-
-
-@lru_cache(maxsize=2)
-def _egm96_nodes(path: str):
-    dataset = gdal.Open(path, gdal.GA_ReadOnly)
-    x0, dx, _, y0, _, dy = dataset.GetGeoTransform()
-    values = dataset.GetRasterBand(1).ReadAsArray().astype(float)
-    nodata = dataset.GetRasterBand(1).GetNoDataValue()
-    if nodata is not None:
-        values[values == nodata] = np.nan
-    # The .gtx geotransform gives cell edges; nodes sit at cell centres.
-    return values, x0 + dx / 2.0, y0 + dy / 2.0, dx
 
 
 def egm96_at(longitude, latitude) -> np.ndarray:
@@ -84,8 +40,7 @@ def egm96_at(longitude, latitude) -> np.ndarray:
                 "datums to the ellipsoid."
             ).format(EGM96_FILE, ", ".join(proj_search_paths()))
         )
-    values, west, north, step = _egm96_nodes(path)
-    return bilinear_global(values, longitude, latitude, west, north, step)
+    return egm96_values(longitude, latitude)
 
 
 def check_geoid_values(values: np.ndarray, source: str) -> None:
