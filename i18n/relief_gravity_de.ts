@@ -913,22 +913,22 @@
   <context>
     <name>ElevationRaster</name>
     <message>
-      <location filename="../plugin/raster_io.py" line="30" />
+      <location filename="../plugin/raster_io.py" line="32" />
       <source>Could not open the elevation raster {}: {}</source>
       <translation>Das Höhenraster {} konnte nicht geöffnet werden: {}</translation>
     </message>
     <message>
-      <location filename="../plugin/raster_io.py" line="121" />
+      <location filename="../plugin/raster_io.py" line="51" />
       <source>The elevation raster {} has no coordinate reference system.</source>
       <translation>Das Höhenraster {} hat kein Koordinatenbezugssystem.</translation>
     </message>
     <message>
-      <location filename="../plugin/raster_io.py" line="38" />
+      <location filename="../plugin/raster_io.py" line="29" />
       <source>The elevation raster {} is rotated; warp it to a north-up grid first.</source>
       <translation>Das Höhenraster {} ist gedreht; transformieren Sie es zuerst in ein nordorientiertes Gitter.</translation>
     </message>
     <message>
-      <location filename="../plugin/raster_io.py" line="110" />
+      <location filename="../plugin/raster_io.py" line="40" />
       <source>The raster {} is not a GDAL raster; save it as a GeoTIFF first.</source>
       <translation>Das Raster {} ist kein GDAL-Raster; speichern Sie es zuerst als GeoTIFF.</translation>
     </message>
