@@ -5,20 +5,6 @@ The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
 (rows run south, NoData becomes NaN, point heights by the engine's one
 sampler) with this runner's sentences; any raster GDAL opens works, a VRT
 mosaic of many tiles included, and only the windows asked for are read.
-"""Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The same reading and sampling rules as ``plugin/raster_io.py`` (which needs
-QGIS for its layer glue): rows always run south, NoData and non-finite cells
-become NaN, a station height is the bilinear surface through the four cell
-centres around it (NaN when a corner has no data). Any raster GDAL opens
-works, a VRT mosaic of many tiles included; only the windows asked for are
-read.
-"""Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
-(rows run south, NoData becomes NaN, point heights by the engine's one
-sampler) with this runner's sentences; any raster GDAL opens works, a VRT
-mosaic of many tiles included, and only the windows asked for are read.
 """
 
 from __future__ import annotations
@@ -35,19 +21,7 @@ GDAL_CACHE_BYTES = 128 * 1024 * 1024
 
 
 class GdalRaster(WindowedRaster):
-    """Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
-(rows run south, NoData becomes NaN, point heights by the engine's one
-sampler) with this runner's sentences; any raster GDAL opens works, a VRT
-mosaic of many tiles included, and only the windows asked for are read.
-"""The plugin's windowed raster (``plugin/gdal_raster.py``) with the batch runner's sentences."""Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
-(rows run south, NoData becomes NaN, point heights by the engine's one
-sampler) with this runner's sentences; any raster GDAL opens works, a VRT
-mosaic of many tiles included, and only the windows asked for are read.
-"""
+    """The plugin's windowed raster (``plugin/gdal_raster.py``) with the batch runner's sentences."""
 
     def __init__(self, path: str):
         try:
@@ -63,19 +37,7 @@ mosaic of many tiles included, and only the windows asked for are read.
 
 
 def open_checked(path: str, label: str) -> GdalRaster:
-    """Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
-(rows run south, NoData becomes NaN, point heights by the engine's one
-sampler) with this runner's sentences; any raster GDAL opens works, a VRT
-mosaic of many tiles included, and only the windows asked for are read.
-"""Open a raster in the driver and refuse what the plugin refuses."""Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
-(rows run south, NoData becomes NaN, point heights by the engine's one
-sampler) with this runner's sentences; any raster GDAL opens works, a VRT
-mosaic of many tiles included, and only the windows asked for are read.
-"""
+    """Open a raster in the driver and refuse what the plugin refuses."""
     if not os.path.exists(path) and not str(path).startswith("/vsi"):
         msg = f"The {label} {path} does not exist."
         raise BatchError(msg)
@@ -87,19 +49,7 @@ mosaic of many tiles included, and only the windows asked for are read.
 
 
 def same_crs(wkt_a: str, wkt_b: str) -> bool:
-    """Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
-(rows run south, NoData becomes NaN, point heights by the engine's one
-sampler) with this runner's sentences; any raster GDAL opens works, a VRT
-mosaic of many tiles included, and only the windows asked for are read.
-"""True when two WKT strings describe the same CRS."""Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
-(rows run south, NoData becomes NaN, point heights by the engine's one
-sampler) with this runner's sentences; any raster GDAL opens works, a VRT
-mosaic of many tiles included, and only the windows asked for are read.
-"""
+    """True when two WKT strings describe the same CRS."""
     a, b = osr.SpatialReference(), osr.SpatialReference()
     a.ImportFromWkt(wkt_a)
     b.ImportFromWkt(wkt_b)
@@ -107,19 +57,7 @@ mosaic of many tiles included, and only the windows asked for are read.
 
 
 def warp_to(path: str, src_wkt: str, dst_wkt: str, target: str) -> str:
-    """Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
-(rows run south, NoData becomes NaN, point heights by the engine's one
-sampler) with this runner's sentences; any raster GDAL opens works, a VRT
-mosaic of many tiles included, and only the windows asked for are read.
-"""Reproject a raster (bilinear) to ``target`` with the plugin's options."""Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
-(rows run south, NoData becomes NaN, point heights by the engine's one
-sampler) with this runner's sentences; any raster GDAL opens works, a VRT
-mosaic of many tiles included, and only the windows asked for are read.
-"""
+    """Reproject a raster (bilinear) to ``target`` with the plugin's options."""
     options = gdal.WarpOptions(
         dstSRS=dst_wkt,
         srcSRS=src_wkt,
@@ -140,19 +78,7 @@ _OPEN: dict = {}
 
 
 def cached(path: str) -> GdalRaster:
-    """Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
-(rows run south, NoData becomes NaN, point heights by the engine's one
-sampler) with this runner's sentences; any raster GDAL opens works, a VRT
-mosaic of many tiles included, and only the windows asked for are read.
-"""A raster opened once per worker process (GDAL datasets are per process)."""Elevation rasters for the batch runner: GDAL windows, no QGIS.
-
-The raster class is the plugin's own GDAL-only ``plugin/gdal_raster.py``
-(rows run south, NoData becomes NaN, point heights by the engine's one
-sampler) with this runner's sentences; any raster GDAL opens works, a VRT
-mosaic of many tiles included, and only the windows asked for are read.
-"""
+    """A raster opened once per worker process (GDAL datasets are per process)."""
     raster = _OPEN.get(path)
     if raster is None:
         gdal.SetCacheMax(GDAL_CACHE_BYTES)
