@@ -316,3 +316,66 @@ def _likely_fix(sign: int, height_datum: int, dem_datum: int) -> tuple[str, int]
         # with a DEM of unknown datum is the common case this hint serves.
         return "DEM_DATUM", DEM_ELLIPSOID
     return "HEIGHT_DATUM", STATION_EGM96
+
+
+@dataclass(frozen=True)
+class StationHeights:
+    """Station heights in the three datums a run needs (m).
+
+    Attributes
+    ----------
+    in_dem : numpy.ndarray
+        In the DEM's datum (for the terrain correction).
+    ellipsoidal : numpy.ndarray
+        Above the ellipsoid (the reduction standard's heights).
+    orthometric : numpy.ndarray
+        Above the geoid (legacy reductions); NaN without a geoid height.
+    """
+
+    in_dem: np.ndarray
+    ellipsoidal: np.ndarray
+    orthometric: np.ndarray
+
+
+def convert_heights(raw, offsets: DatumOffsets, height_datum: int, dem_at_station=None, egm96=None) -> StationHeights:
+    """Station heights in the DEM's datum, above the ellipsoid and above the geoid.
+
+    Parameters
+    ----------
+    raw : array_like or None
+        Station heights (m) in their declared datum; None: take the DEM's
+        height at the station (``dem_at_station``, in the DEM's datum; NaN
+        where there is none).
+    offsets : DatumOffsets
+        From :func:`datum_offsets` (``ellipsoidal = height + offset``).
+    height_datum : int
+        The stations' datum (``STATION_ELLIPSOIDAL`` ...).
+    dem_at_station : array_like, optional
+        The DEM's height at each station (m), None without a DEM.
+    egm96 : array_like, optional
+        EGM96 geoid height (m) at each station, for the orthometric height
+        of ellipsoidal stations.
+
+    Returns
+    -------
+    StationHeights
+
+    Examples
+    --------
+    >>> off = datum_offsets(STATION_EGM96, DEM_EGM96, egm96=np.array([40.0]))
+    >>> h = convert_heights(np.array([100.0]), off, STATION_EGM96)
+    >>> float(h.in_dem[0]), float(h.ellipsoidal[0]), float(h.orthometric[0])
+    (100.0, 140.0, 100.0)
+    """
+    if raw is None:
+        in_dem = np.array(dem_at_station, dtype=float)
+        ellipsoidal = in_dem + offsets.dem
+    else:
+        raw = np.asarray(raw, dtype=float)
+        in_dem = raw + offsets.station - offsets.dem
+        ellipsoidal = raw + offsets.station
+    if height_datum == STATION_ELLIPSOIDAL:
+        orthometric = ellipsoidal - (np.asarray(egm96, dtype=float) if egm96 is not None else np.nan)
+    else:
+        orthometric = ellipsoidal - offsets.station
+    return StationHeights(np.asarray(in_dem, float), np.asarray(ellipsoidal, float), np.asarray(orthometric, float))

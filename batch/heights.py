@@ -170,22 +170,17 @@ def prepare_heights(raw, height_datum, dem_datum, given_geoid, lon, lat, dem_at_
     missing = (~np.isfinite(station_offset) | ~np.isfinite(dem_offset)) & np.isfinite(lat)
     from_dem = None
     if raw is None:
-        in_dem = np.array(dem_at_station, dtype=float) if dem_at_station is not None else np.full(n, np.nan)
-        from_dem = np.isfinite(in_dem)
-        ellipsoidal = in_dem + dem_offset
+        at_station = np.array(dem_at_station, dtype=float) if dem_at_station is not None else np.full(n, np.nan)
+        from_dem = np.isfinite(at_station)
     else:
         raw = np.asarray(raw, dtype=float)
-        in_dem = raw + station_offset - dem_offset
-        ellipsoidal = raw + station_offset
+        at_station = dem_at_station
         if dem_at_station is not None:
             scale = height_scale_problem(raw, np.asarray(dem_at_station) + dem_offset - station_offset)
             if scale is not None:
                 raise BatchError(_scale_sentence(scale, declared_units, raw, dem_at_station))
-    if height_datum == datums.STATION_ELLIPSOIDAL:
-        orthometric = ellipsoidal - (egm96 if egm96 is not None else np.nan)
-    else:
-        orthometric = ellipsoidal - station_offset
-    return Heights(in_dem, ellipsoidal, orthometric, missing, from_dem)
+    converted = datums.convert_heights(raw, offsets, height_datum, at_station, egm96)
+    return Heights(converted.in_dem, converted.ellipsoidal, converted.orthometric, missing, from_dem)
 
 
 def _scale_sentence(scale: str, declared_units: int, raw, dem) -> str:

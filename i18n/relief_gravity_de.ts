@@ -1947,7 +1947,7 @@
       <translation>Ellipsoidische Höhen (z. B. aus GNSS)</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="272" />
+      <location filename="../plugin/heights.py" line="267" />
       <source>Give a regional elevation raster (REGIONAL_DEM) reaching {:.1f} km around every station.</source>
       <translation>Geben Sie ein regionales Höhenraster (REGIONAL_DEM) an, das {:.1f} km um jede Station reicht.</translation>
     </message>
@@ -1967,84 +1967,84 @@
       <translation>Wie die Stationshöhen</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="148" />
+      <location filename="../plugin/heights.py" line="143" />
       <source>The elevation raster looks like heights in {} (about {:.4g} times the station heights in metres: DEM median {:.1f} against {:.1f} m). Convert it to metres (Raster Calculator: value × {}) and run again.</source>
       <translation>Das Höhenraster scheint Höhen in {} zu enthalten (etwa das {:.4g}-Fache der Stationshöhen in Metern: DGM-Median {:.1f} gegenüber {:.1f} m). Rechnen Sie es in Meter um (Rasterrechner: Wert × {}) und starten Sie erneut.</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="274" />
+      <location filename="../plugin/heights.py" line="269" />
       <source>The regional elevation raster does not reach {:.1f} km around these stations; extend it.</source>
       <translation>Das regionale Höhenraster reicht nicht {:.1f} km um diese Stationen; erweitern Sie es.</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="142" />
+      <location filename="../plugin/heights.py" line="137" />
       <source>The station heights look like metres declared in another unit (median {:.1f} m after conversion against a DEM median of {:.1f} m): set HEIGHT_UNITS to metres.</source>
       <translation>Die Stationshöhen sehen aus wie Meter, die in einer anderen Einheit angegeben wurden (Median {:.1f} m nach Umrechnung gegenüber einem DGM-Median von {:.1f} m): setzen Sie HEIGHT_UNITS auf Meter.</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="136" />
+      <location filename="../plugin/heights.py" line="131" />
       <source>The station heights look like {} read as metres (median {:.1f} against a DEM median of {:.1f} m at the stations): set HEIGHT_UNITS to {}.</source>
       <translation>Die Stationshöhen sehen aus wie als Meter gelesene {} (Median {:.1f} gegenüber einem DGM-Median von {:.1f} m an den Stationen): setzen Sie HEIGHT_UNITS auf {}.</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="169" />
+      <location filename="../plugin/heights.py" line="164" />
       <source>The {} {} cannot be read to the end (damaged or truncated file?): {}</source>
       <translation>{} {} kann nicht bis zum Ende gelesen werden (beschädigte oder abgeschnittene Datei?): {}</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="186" />
+      <location filename="../plugin/heights.py" line="181" />
       <source>The {} {} goes down to {:.6g}, deeper than any point on Earth in metres: an untagged void value or a unit error. Set its NoData value or convert it to metres.</source>
       <translation>{} {} reicht hinab bis {:.6g}, tiefer als jeder Punkt der Erde in Metern: ein nicht gekennzeichneter Leerwert oder ein Einheitenfehler. Setzen Sie seinen NoData-Wert oder rechnen Sie es in Meter um.</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="175" />
+      <location filename="../plugin/heights.py" line="170" />
       <source>The {} {} has cells of {:.6g} but no NoData value: they look like voids and would be taken as heights. Set the raster's NoData value to {:.6g} (Raster &gt; Conversion &gt; Translate, 'Assign a specified NoData value') and run again.</source>
       <translation>{} {} hat Zellen mit {:.6g}, aber keinen NoData-Wert: sie sehen wie Lücken aus und würden als Höhen genommen. Setzen Sie den NoData-Wert des Rasters auf {:.6g} (Raster &gt; Konvertierung &gt; Übersetzen, 'Einen bestimmten NoData-Wert zuweisen') und starten Sie erneut.</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="166" />
+      <location filename="../plugin/heights.py" line="161" />
       <source>The {} {} holds no valid heights (every cell is NoData).</source>
       <translation>{} {} enthält keine gültigen Höhen (jede Zelle ist NoData).</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="181" />
+      <location filename="../plugin/heights.py" line="176" />
       <source>The {} {} reaches {:.6g}, higher than any point on Earth in metres: it looks like feet or centimetres. Convert it to metres and run again.</source>
       <translation>{} {} erreicht {:.6g}, höher als jeder Punkt der Erde in Metern: es sieht nach Fuß oder Zentimetern aus. Rechnen Sie es in Meter um und starten Sie erneut.</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="231" />
+      <location filename="../plugin/heights.py" line="226" />
       <source>above</source>
       <translation>über</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="231" />
+      <location filename="../plugin/heights.py" line="226" />
       <source>below</source>
       <translation>unter</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="135" />
-      <location filename="../plugin/heights.py" line="146" />
+      <location filename="../plugin/heights.py" line="130" />
+      <location filename="../plugin/heights.py" line="141" />
       <source>centimetres</source>
       <translation>Zentimeter</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="135" />
-      <location filename="../plugin/heights.py" line="146" />
+      <location filename="../plugin/heights.py" line="130" />
+      <location filename="../plugin/heights.py" line="141" />
       <source>feet</source>
       <translation>Fuß</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="233" />
+      <location filename="../plugin/heights.py" line="228" />
       <source>{:.0%} of the stations lie about one geoid height ({:.1f} m) {} the DEM: a datum setting is likely wrong. Try {} = '{}'. (Either the station heights or the DEM are on another datum than declared; see docs/datums.md.)</source>
       <translation>{:.0%} der Stationen liegen etwa eine Geoidhöhe ({:.1f} m) {} dem DGM: wahrscheinlich ist ein Höhenbezug falsch eingestellt. Versuchen Sie {} = '{}'. (Entweder die Stationshöhen oder das DGM beziehen sich auf ein anderes Höhenbezugssystem als angegeben; siehe docs/datums.md.)</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="218" />
+      <location filename="../plugin/heights.py" line="213" />
       <source>{} station(s) differ from the DEM by more than the local relief explains (largest {:.1f} m; flagged height_dem_mismatch, see dem_diff).</source>
       <translation>{} Station(en) weichen stärker vom DGM ab, als das örtliche Relief erklärt (größte Abweichung {:.1f} m; markiert mit height_dem_mismatch, siehe dem_diff).</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="277" />
+      <location filename="../plugin/heights.py" line="272" />
       <source>{} station(s) have elevation data over only part of the correction area (lowest tc_cover {:.2f}); their terrain correction misses the far terrain (flagged tc_partial). {}</source>
       <translation>{} Station(en) haben Höhendaten nur über einen Teil des Korrektionsgebiets (kleinstes tc_cover {:.2f}); ihrer Geländekorrektion fehlt das ferne Gelände (markiert mit tc_partial). {}</translation>
     </message>

@@ -101,25 +101,20 @@ def prepare_heights(table, raw, height_datum, dem_datum, given_geoid, placed, fe
 
     dem = placed.raster.sample_bilinear(placed.x, placed.y) if placed is not None else None
     if raw is None:
-        in_dem = np.array(dem, dtype=float) if dem is not None else np.full(n, np.nan)
-        table.flag_where(np.isfinite(in_dem), "height_from_dem")
-        table.flag_where(~np.isfinite(in_dem), "no_height")
-        ellipsoidal = in_dem + dem_offset
+        at_station = np.array(dem, dtype=float) if dem is not None else np.full(n, np.nan)
+        table.flag_where(np.isfinite(at_station), "height_from_dem")
+        table.flag_where(~np.isfinite(at_station), "no_height")
     else:
         raw = np.asarray(raw, dtype=float)
-        in_dem = raw + station_offset - dem_offset
-        ellipsoidal = raw + station_offset
+        at_station = dem
         if dem is not None:
             # Compared in the stations' own datum, so a wrong unit scales
             # the geoid height too and the two stay comparable.
             scale = height_scale_problem(raw, np.asarray(dem) + dem_offset - station_offset)
             if scale is not None:
                 raise QgsProcessingException(_height_scale_sentence(scale, declared_units, raw, dem))
-    if height_datum == datums.STATION_ELLIPSOIDAL:
-        orthometric = ellipsoidal - (egm96 if egm96 is not None else np.nan)
-    else:
-        orthometric = ellipsoidal - station_offset
-    return Heights(in_dem, ellipsoidal, orthometric, dem, egm96, offsets)
+    converted = datums.convert_heights(raw, offsets, height_datum, at_station, egm96)
+    return Heights(converted.in_dem, converted.ellipsoidal, converted.orthometric, dem, egm96, offsets)
 
 
 def _height_scale_sentence(scale: str, declared_units: int, raw, dem) -> str:
