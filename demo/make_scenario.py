@@ -390,6 +390,64 @@ def write_stations(path, ids, x, y, fields):
     gdal.SetConfigOption("OGR_CURRENT_DATE", None)
 
 
+def basin_floor_outline(n=181):
+    """Vertices (x, y in the demo's CRS) of the basin floor's mapped edge (``basin_radius == 1``), closed."""
+    t = np.linspace(0.0, 2.0 * np.pi, n)
+    across, along = 4500.0 * np.cos(t), 8000.0 * np.sin(t)
+    s = np.radians(STRIKE_DEG)
+    u = across * np.cos(s) + along * np.sin(s) - 6000.0
+    v = -across * np.sin(s) + along * np.cos(s) - 1000.0
+    u[-1], v[-1] = u[0], v[0]
+    return CENTRE_E + u, CENTRE_N + v
+
+
+def write_geology(path):
+    """Write the invented surface geology map: basin-floor alluvium and the bedrock around it.
+
+    Only a map of what crops out: the scenario's rock at the surface is
+    2670 kg/m^3 everywhere (the light fill lies below ``SEDIMENT_TOP``), so
+    the layer carries unit names and no densities. The demo uses it to leave
+    the basin-floor stations out of the density estimate.
+    """
+    path.unlink(missing_ok=True)
+    gdal.SetConfigOption("OGR_CURRENT_DATE", "2026-01-01T00:00:00.000Z")
+    ds = ogr.GetDriverByName("GPKG").CreateDataSource(str(path))
+    layer = ds.CreateLayer(
+        "geology", _srs(EPSG), ogr.wkbPolygon,
+        options=["DESCRIPTION=Corvahl demo survey - INVENTED surface geology for demonstration and tests only"],
+    )
+    for name in ("unit", "description"):
+        layer.CreateField(ogr.FieldDefn(name, ogr.OFTString))
+    bx, by = basin_floor_outline()
+    floor = ogr.Geometry(ogr.wkbLinearRing)
+    for a, b in zip(bx, by, strict=True):
+        floor.AddPoint_2D(float(a), float(b))
+    w, e = CENTRE_E - FINE_HALF, CENTRE_E + FINE_HALF
+    s_, n_ = CENTRE_N - FINE_HALF, CENTRE_N + FINE_HALF
+    frame = ogr.Geometry(ogr.wkbLinearRing)
+    for a, b in ((w, s_), (w, n_), (e, n_), (e, s_), (w, s_)):
+        frame.AddPoint_2D(a, b)
+    alluvium = ogr.Geometry(ogr.wkbPolygon)
+    alluvium.AddGeometry(floor)
+    bedrock = ogr.Geometry(ogr.wkbPolygon)
+    bedrock.AddGeometry(frame)
+    bedrock.AddGeometry(floor.Clone())
+    rows = (
+        ("alluvium", "Brennmoor Basin floor: alluvium over the basin fill", alluvium),
+        ("bedrock", "granite and gneiss of the Corvahl Range and the hills", bedrock),
+    )
+    layer.StartTransaction()
+    for unit, text, geometry in rows:
+        feature = ogr.Feature(layer.GetLayerDefn())
+        feature.SetField("unit", unit)
+        feature.SetField("description", text)
+        feature.SetGeometry(geometry)
+        layer.CreateFeature(feature)
+    layer.CommitTransaction()
+    ds = None
+    gdal.SetConfigOption("OGR_CURRENT_DATE", None)
+
+
 def latitudes(x, y):
     """Geodetic latitude (degrees) of UTM 32N positions, through OSR."""
     transform = osr.CoordinateTransformation(_srs(EPSG), _srs(4326))
@@ -463,6 +521,7 @@ def main(argv=None):
         args.out / f"{NAME}_regional.tif", regional, regional_grid.west, regional_grid.north, REGIONAL_CELL,
         note + "; regional DEM, 1 km, block means of the fine DEM inside its footprint",
     )
+    write_geology(args.out / f"{NAME}_geology.gpkg")
     write_stations(
         args.out / f"{NAME}_stations.gpkg", ids, x, y,
         {"obs_grav": obs, "elev_m": elev, "body_mgal": body, "terrain_mgal": terrain},

@@ -64,7 +64,7 @@ def demo_files() -> dict:
     Returns
     -------
     dict
-        ``dem``, ``regional``, ``stations``, ``readings`` and ``calibration`` paths.
+        ``dem``, ``regional``, ``stations``, ``readings``, ``calibration`` and ``geology`` paths.
     """
     def one(pattern):
         found = sorted(DATA.glob(pattern))
@@ -78,6 +78,7 @@ def demo_files() -> dict:
         "stations": one("*_field_stations.gpkg"),
         "readings": one("*_readings.csv"),
         "calibration": one("*_calibration.csv"),
+        "geology": one("*_geology.gpkg"),
     }
 
 
@@ -206,12 +207,17 @@ def main(argv: list[str]) -> int:
         title="Complete Bouguer anomaly (invented demo survey)",
     )
 
-    # Density from the data (Parasnis, planar regional) and the residual anomaly.
-    density = processing.run("reliefgravity:densityestimate", {
+    # Density from the data (Parasnis, planar regional): over every station,
+    # then as a processor would, leaving out the stations on the mapped
+    # basin-floor alluvium (its fill is not the rock being estimated).
+    density_inputs = {
         "INPUT": str(files["stations"]), "GRAVITY_FIELD": "obs_grav", "HEIGHT_FIELD": "elev_m",
         "DEM": str(files["dem"]), "REGIONAL_DEM": str(files["regional"]), "DEM_DATUM": 1,
-        "PLOT": str(output / "density_fit.png")},
-        feedback=feedback)
+    }
+    density_all = processing.run("reliefgravity:densityestimate", {**density_inputs, "PLOT": None}, feedback=feedback)
+    alluvium = f"{files['geology']}|layername=geology|subset=\"unit\" = 'alluvium'"
+    density = processing.run("reliefgravity:densityestimate", {
+        **density_inputs, "EXCLUDE_AREAS": alluvium, "PLOT": str(output / "density_fit.png")}, feedback=feedback)
     residual_path = output / "cba_residual.tif"
     processing.run("reliefgravity:regionalresidual", {"INPUT": str(grid_path), "METHOD": 0, "ORDER": 1, "ROBUST": 2,
                    "REGIONAL": str(output / "cba_regional.tif"), "RESIDUAL": str(residual_path)}, feedback=feedback)
@@ -245,9 +251,13 @@ def main(argv: list[str]) -> int:
           f" correlation with the buried bodies {np.corrcoef(cba[ok], body[ok])[0, 1]:.4f}")
     print(f"  cba - true body anomaly     : mean {residual.mean():+.3f}, rms about the mean"
           f" {np.sqrt(np.mean(residual_centred**2)):.3f}, max {np.abs(residual_centred).max():.3f} mGal")
-    print(f"  density from the data       : {density['DENSITY']:.0f} kg/m3 (95 % {density['DENSITY_LOW']:.0f}"
-          f" to {density['DENSITY_HIGH']:.0f}; Parasnis, planar regional); the demo was built with 2670"
-          "; biased high because the light basin fill and the dense intrusion follow the relief")
+    print(f"  density, every station      : {density_all['DENSITY']:.0f} kg/m3 (95 % {density_all['DENSITY_LOW']:.0f}"
+          f" to {density_all['DENSITY_HIGH']:.0f}; Parasnis, planar regional): biased high, the light basin"
+          " fill lies under the valley floor")
+    print(f"  density, off the alluvium   : {density['DENSITY']:.0f} kg/m3 (95 % {density['DENSITY_LOW']:.0f}"
+          f" to {density['DENSITY_HIGH']:.0f}; {density['STATIONS_USED']} stations on mapped bedrock);"
+          f" the demo was built with 2670 ({(density['DENSITY'] / 2670.0 - 1.0) * 100:+.1f} %, the buried"
+          " intrusion under the range is not mapped)")
     cba_sigma = attribute_array(layer, "cba_sigma")
     numerr = attribute_array(layer, "tc_numerr")
     print(f"  uncertainty of cba (mGal)   : median {np.nanmedian(cba_sigma):.3f}, largest {np.nanmax(cba_sigma):.3f}"

@@ -41,6 +41,7 @@ from ...algorithms.density import (
 )
 from ..heights import check_dem_values, prepare_heights
 from ..raster_io import raster_path
+from ..station_areas import inside_any, read_area_polygons
 from ..terrain_run import EXACT, compute_terrain, place_stations
 from .base import StationAlgorithm, is_unset
 from .bouguer_reduction import HEIGHT_FORMULAS, NORMAL_FORMULAS, gravity_unit_names, observed_gravity_mgal
@@ -80,6 +81,7 @@ class DensityEstimateAlgorithm(StationAlgorithm):
     REGIONAL_TREND = "REGIONAL_TREND"
     PROFILES = "PROFILES"
     BUFFER = "BUFFER"
+    EXCLUDE_AREAS = "EXCLUDE_AREAS"
     PLOT = "PLOT"
     DENSITY_LOW = "DENSITY_LOW"
     DENSITY_HIGH = "DENSITY_HIGH"
@@ -113,6 +115,9 @@ class DensityEstimateAlgorithm(StationAlgorithm):
             "<p><b>Regional term</b> (both methods): none, planar (default) or quadratic in the "
             "coordinates, fitted with the density so that a regional gradient does not leak into "
             "it.</p>"
+            "<p><b>Areas left out</b> (optional polygons): stations inside them are left out of the "
+            "fit, e.g. those on mapped valley fill or on a mapped intrusion, whose density is not the "
+            "one being estimated.</p>"
             "<p>Outputs DENSITY, DENSITY_LOW and DENSITY_HIGH (95 %) can feed the reduction's "
             "density in a model; PLOT is a PNG of the fit. The log warns when the relief is too "
             "small, when relief and regional trend cannot be told apart, and when low and high "
@@ -177,6 +182,14 @@ class DensityEstimateAlgorithm(StationAlgorithm):
                 defaultValue=250.0,
                 parentParameterName=self.INPUT,
                 minValue=0.0,
+            )
+        )
+        self.addParameter(
+            QgsProcessingParameterFeatureSource(
+                self.EXCLUDE_AREAS,
+                self.tr("Areas whose stations are left out (e.g. mapped valley fill; optional)"),
+                [QgsProcessing.TypeVectorPolygon],
+                optional=True,
             )
         )
         self.add_standard_parameters()
@@ -286,11 +299,14 @@ class DensityEstimateAlgorithm(StationAlgorithm):
         usable = np.isfinite(faa) & np.isfinite(unit) & np.isfinite(x) & np.isfinite(y) & np.isfinite(heights)
         if groups is not None:
             usable &= groups >= 0
+        excluded = self._excluded(parameters, context, source, table, feedback)
+        usable &= ~excluded
         left_out = len(table) - int(usable.sum())
         if left_out:
             feedback.pushInfo(
                 self.tr(
-                    "{} of {} stations left out (no anomaly, no terrain correction or outside the profile buffers)."
+                    "{} of {} stations left out (no anomaly, no terrain correction, outside the profile buffers "
+                    "or inside the excluded areas)."
                 ).format(left_out, len(table))
             )
         idx = np.flatnonzero(usable)
@@ -350,6 +366,26 @@ class DensityEstimateAlgorithm(StationAlgorithm):
             return placed.x, placed.y
         lat0 = math.radians(float(np.nanmean(placed.y)))
         return placed.x * METRES_PER_DEGREE * math.cos(lat0), placed.y * METRES_PER_DEGREE
+
+    def _excluded(self, parameters, context, source, table, feedback) -> np.ndarray:
+        """True for the stations inside EXCLUDE_AREAS (all False when the parameter is unset)."""
+        if is_unset(parameters.get(self.EXCLUDE_AREAS)):
+            return np.zeros(len(table), dtype=bool)
+        areas = self.parameterAsSource(parameters, self.EXCLUDE_AREAS, context)
+        if areas is None:
+            raise QgsProcessingException(self.invalidSourceError(parameters, self.EXCLUDE_AREAS))
+        polygons = read_area_polygons(areas, source.sourceCrs(), context.transformContext(), self.EXCLUDE_AREAS)
+        inside = inside_any(polygons, np.asarray(table.x, float), np.asarray(table.y, float))
+        if inside.all():
+            raise QgsProcessingException(
+                self.tr("Every station lies inside EXCLUDE_AREAS: no station is left to estimate the density from.")
+            )
+        feedback.pushInfo(
+            self.tr("{} of {} stations lie inside EXCLUDE_AREAS and are left out of the fit.").format(
+                int(inside.sum()), len(table)
+            )
+        )
+        return inside
 
     def _profile_groups(self, parameters, context, source, table, feedback):
         """Profile index of each station (-1 outside every buffer) and distance along it, or (None, None)."""

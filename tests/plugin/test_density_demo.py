@@ -45,3 +45,29 @@ def test_demo_without_bodies_gives_back_the_build_density(provider, tmp_path):
     )
     assert result["DENSITY"] == pytest.approx(BUILT_WITH, abs=3.0), result
     assert result["DENSITY_HIGH"] - result["DENSITY_LOW"] < 5.0
+
+
+def test_demo_off_the_mapped_alluvium_comes_close_to_the_build_density(provider):
+    """The demo's own procedure: Parasnis (planar) without the stations on the basin-floor alluvium.
+
+    Over every station the light basin fill under the valley floor biases the
+    estimate high (measured 2903, 95 % 2834-2971). Leaving out the stations on
+    the mapped alluvium (demo/data/corvahl_geology.gpkg) gives 2732 (2716-2749),
+    2.3 % high: the dense intrusion under the range is not mapped and still
+    follows the relief. Bound 3 % (common practice, no source: densities are
+    rarely chosen closer than about 50 kg/m^3).
+    """
+    import processing
+
+    stations = DATA / "corvahl_stations.gpkg"
+    geology = DATA / "corvahl_geology.gpkg"
+    if not stations.exists() or not geology.exists():
+        pytest.skip("demo data missing; regenerate with demo/make_scenario.py")
+    common = {"INPUT": str(stations), "GRAVITY_FIELD": "obs_grav", "HEIGHT_FIELD": "elev_m", "DEM": str(DATA / "corvahl_dem.tif"),
+              "REGIONAL_DEM": str(DATA / "corvahl_regional.tif"), "DEM_DATUM": 1, "METHOD": 0, "REGIONAL_TREND": 1, "PLOT": None}
+    every = processing.run("reliefgravity:densityestimate", common)
+    alluvium = f"{geology}|layername=geology|subset=\"unit\" = 'alluvium'"
+    bedrock = processing.run("reliefgravity:densityestimate", {**common, "EXCLUDE_AREAS": alluvium})
+    assert bedrock["STATIONS_USED"] < every["STATIONS_USED"] == 351
+    assert abs(bedrock["DENSITY"] - BUILT_WITH) < 0.03 * BUILT_WITH, bedrock
+    assert abs(bedrock["DENSITY"] - BUILT_WITH) < abs(every["DENSITY"] - BUILT_WITH) / 2

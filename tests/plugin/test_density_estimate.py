@@ -185,3 +185,84 @@ def test_orthometric_heights_with_a_geoid_dem_give_the_same_density(survey):
     same = run(survey, "plain", DEM_DATUM=2)
     both_geoid = run(survey, "plain", HEIGHT_DATUM=1, DEM_DATUM=0)
     assert both_geoid["DENSITY"] == pytest.approx(same["DENSITY"], rel=0.02)
+
+
+def _polygons(path, rings, epsg=32632):
+    """A polygon GeoPackage with one feature per ring (a list of (x, y) in ``epsg``)."""
+    srs = osr.SpatialReference()
+    srs.ImportFromEPSG(epsg)
+    srs.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)
+    ds = ogr.GetDriverByName("GPKG").CreateDataSource(str(path))
+    layer = ds.CreateLayer("areas", srs, ogr.wkbPolygon)
+    for ring in rings:
+        feature = ogr.Feature(layer.GetLayerDefn())
+        text = ", ".join(f"{a} {b}" for a, b in [*ring, ring[0]])
+        feature.SetGeometry(ogr.CreateGeometryFromWkt(f"POLYGON (({text}))"))
+        layer.CreateFeature(feature)
+    ds = None
+    return str(path)
+
+
+#: The western part of the survey, where the ``patch`` survey's rock differs.
+PATCH = [(WEST, NORTH - 9500), (WEST, NORTH - 2500), (WEST + 5000, NORTH - 2500), (WEST + 5000, NORTH - 9500)]
+
+
+@pytest.fixture(scope="module")
+def patch_survey(survey, points_writer):
+    """The plain survey, plus rock lighter by 300 kg/m^3 at the surface in the west (x < WEST + 5 km)."""
+    import processing  # noqa: F401 - the provider is loaded by the survey's users
+
+    layer = ogr.Open(survey["plain"])
+    rows = [(f.GetGeometryRef().GetX(), f.GetGeometryRef().GetY(), f.GetField("g_obs"), f.GetField("h")) for f in layer.GetLayer(0)]
+    layer = None
+    x, y, g, h = (np.array(c) for c in zip(*rows))
+    west = x < WEST + 5000
+    # A slab-like deficit growing with height: what a lighter unit at the surface does to faa.
+    g = g - 300.0 * 4.193e-5 * (h - 300.0) * west
+    path = points_writer(survey["folder"] / "patch.gpkg", x, y, {"g_obs": [float(v) for v in g], "h": [float(v) for v in h]})
+    return {**survey, "patch": path, "west": int(west.sum())}
+
+
+def test_stations_inside_excluded_areas_are_left_out(provider, patch_survey, tmp_path, collecting_feedback):
+    areas = _polygons(tmp_path / "areas.gpkg", [PATCH])
+    before = digest(patch_survey["patch"]), digest(areas)
+    biased = run(patch_survey, "patch", METHOD=0, REGIONAL_TREND=1, PLOT=None)
+    assert not biased["DENSITY_LOW"] < TRUE_DENSITY < biased["DENSITY_HIGH"], biased
+    result = run(patch_survey, "patch", feedback=collecting_feedback, METHOD=0, REGIONAL_TREND=1, EXCLUDE_AREAS=areas, PLOT=None)
+    assert result["STATIONS_USED"] == 140 - patch_survey["west"]
+    assert result["DENSITY_LOW"] < TRUE_DENSITY < result["DENSITY_HIGH"], result
+    assert any(f"{patch_survey['west']} of 140 stations lie inside EXCLUDE_AREAS" in m for m in collecting_feedback.infos)
+    assert (digest(patch_survey["patch"]), digest(areas)) == before
+    nettleton = run(patch_survey, "patch", METHOD=1, REGIONAL_TREND=1, EXCLUDE_AREAS=areas, PLOT=None)
+    assert nettleton["DENSITY_LOW"] < TRUE_DENSITY < nettleton["DENSITY_HIGH"], nettleton
+
+
+def test_excluded_areas_in_another_crs_select_the_same_stations(provider, patch_survey, tmp_path):
+    src = osr.SpatialReference()
+    src.ImportFromEPSG(32632)
+    dst = osr.SpatialReference()
+    dst.ImportFromEPSG(4326)
+    dst.SetAxisMappingStrategy(osr.OAMS_TRADITIONAL_GIS_ORDER)
+    to_degrees = osr.CoordinateTransformation(src, dst)
+    # Densified edges, so the reprojected polygon follows the projected one to centimetres.
+    ring = []
+    for (a, b), (c, d) in zip(PATCH, PATCH[1:] + PATCH[:1]):
+        for t in np.linspace(0.0, 1.0, 50, endpoint=False):
+            ring.append(to_degrees.TransformPoint(a + t * (c - a), b + t * (d - b))[:2])
+    areas = _polygons(tmp_path / "areas_4326.gpkg", [ring], epsg=4326)
+    result = run(patch_survey, "patch", METHOD=0, REGIONAL_TREND=1, EXCLUDE_AREAS=areas, PLOT=None)
+    assert result["STATIONS_USED"] == 140 - patch_survey["west"]
+
+
+def test_bad_excluded_areas_are_refused_with_a_sentence(provider, survey, tmp_path, points_writer):
+    from qgis.core import QgsProcessingException
+
+    empty = _polygons(tmp_path / "empty.gpkg", [])
+    with pytest.raises(QgsProcessingException, match="EXCLUDE_AREAS has no polygon"):
+        run(survey, "plain", EXCLUDE_AREAS=empty, PLOT=None)
+    everything = _polygons(tmp_path / "all.gpkg", [[(WEST, NORTH - 12000), (WEST, NORTH), (WEST + 12000, NORTH), (WEST + 12000, NORTH - 12000)]])
+    with pytest.raises(QgsProcessingException, match="Every station lies inside EXCLUDE_AREAS"):
+        run(survey, "plain", EXCLUDE_AREAS=everything, PLOT=None)
+    points = points_writer(tmp_path / "points.gpkg", [WEST + 100.0], [NORTH - 100.0], {"v": [1.0]})
+    with pytest.raises(QgsProcessingException):
+        run(survey, "plain", EXCLUDE_AREAS=points, PLOT=None)
