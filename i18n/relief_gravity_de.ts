@@ -561,290 +561,305 @@
   <context>
     <name>DensityEstimateAlgorithm</name>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="435" />
-      <location filename="../plugin/toolbox/density_estimate.py" line="479" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="471" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="515" />
       <source>95 % interval</source>
       <translation>95-%-Intervall</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="101" />
-      <source>&lt;p&gt;Estimates the reduction density (kg/m³) from the stations themselves. The slab, curvature and terrain terms are computed once at 1 kg/m³ with the same standard and terrain engine as the Bouguer reduction (they are linear in density): B = slab + curvature - terrain correction per kg/m³, and the Bouguer anomaly at density ρ is faa - ρB.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Parasnis (1952)&lt;/b&gt;: least-squares regression faa = ρB + regional term; the interval is the Student-t interval of the slope.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Nettleton (1939)&lt;/b&gt;: the density whose Bouguer anomaly is uncorrelated with the station heights, over the whole survey or, with a &lt;b&gt;profile line layer&lt;/b&gt;, within a &lt;b&gt;buffer&lt;/b&gt; of each line (pooled over the lines); the interval is a bootstrap over stations (2000 resamples, seeded).&lt;/p&gt;&lt;p&gt;&lt;b&gt;Regional term&lt;/b&gt; (both methods): none, planar (default) or quadratic in the coordinates, fitted with the density so that a regional gradient does not leak into it.&lt;/p&gt;&lt;p&gt;Outputs DENSITY, DENSITY_LOW and DENSITY_HIGH (95 %) can feed the reduction's density in a model; PLOT is a PNG of the fit. The log warns when the relief is too small, when relief and regional trend cannot be told apart, and when low and high stations disagree (geology that follows the topography biases both methods).&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</source>
-      <translation>&lt;p&gt;Schätzt die Reduktionsdichte (kg/m³) aus den Stationen selbst. Platten-, Krümmungs- und Geländeterm werden einmal für 1 kg/m³ mit demselben Standard und demselben Geländeverfahren wie die Bouguer-Reduktion berechnet (sie sind linear in der Dichte): B = Platte + Krümmung - Geländekorrektion je kg/m³, und die Bouguer-Anomalie bei der Dichte ρ ist faa - ρB.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Parasnis (1952)&lt;/b&gt;: Regression nach kleinsten Quadraten faa = ρB + Regionalterm; das Intervall ist das Student-t-Intervall der Steigung.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Nettleton (1939)&lt;/b&gt;: die Dichte, deren Bouguer-Anomalie nicht mit den Stationshöhen korreliert, über die ganze Vermessung oder, mit einem &lt;b&gt;Profillinienlayer&lt;/b&gt;, innerhalb eines &lt;b&gt;Puffers&lt;/b&gt; um jede Linie (über die Linien zusammengefasst); das Intervall ist ein Bootstrap über die Stationen (2000 Stichproben, mit festem Startwert).&lt;/p&gt;&lt;p&gt;&lt;b&gt;Regionalterm&lt;/b&gt; (beide Verfahren): keiner, eben (Standard) oder quadratisch in den Koordinaten, gemeinsam mit der Dichte angepasst, damit ein regionaler Gradient nicht in sie einfließt.&lt;/p&gt;&lt;p&gt;Die Ausgaben DENSITY, DENSITY_LOW und DENSITY_HIGH (95 %) können in einem Modell die Dichte der Reduktion speisen; PLOT ist ein PNG der Anpassung. Das Protokoll warnt, wenn das Relief zu gering ist, wenn Relief und regionaler Trend nicht zu trennen sind und wenn tiefe und hohe Stationen nicht übereinstimmen (eine Geologie, die der Topographie folgt, verfälscht beide Verfahren).&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</translation>
+      <location filename="../plugin/toolbox/density_estimate.py" line="103" />
+      <source>&lt;p&gt;Estimates the reduction density (kg/m³) from the stations themselves. The slab, curvature and terrain terms are computed once at 1 kg/m³ with the same standard and terrain engine as the Bouguer reduction (they are linear in density): B = slab + curvature - terrain correction per kg/m³, and the Bouguer anomaly at density ρ is faa - ρB.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Parasnis (1952)&lt;/b&gt;: least-squares regression faa = ρB + regional term; the interval is the Student-t interval of the slope.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Nettleton (1939)&lt;/b&gt;: the density whose Bouguer anomaly is uncorrelated with the station heights, over the whole survey or, with a &lt;b&gt;profile line layer&lt;/b&gt;, within a &lt;b&gt;buffer&lt;/b&gt; of each line (pooled over the lines); the interval is a bootstrap over stations (2000 resamples, seeded).&lt;/p&gt;&lt;p&gt;&lt;b&gt;Regional term&lt;/b&gt; (both methods): none, planar (default) or quadratic in the coordinates, fitted with the density so that a regional gradient does not leak into it.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Areas left out&lt;/b&gt; (optional polygons): stations inside them are left out of the fit, e.g. those on mapped valley fill or on a mapped intrusion, whose density is not the one being estimated.&lt;/p&gt;&lt;p&gt;Outputs DENSITY, DENSITY_LOW and DENSITY_HIGH (95 %) can feed the reduction's density in a model; PLOT is a PNG of the fit. The log warns when the relief is too small, when relief and regional trend cannot be told apart, and when low and high stations disagree (geology that follows the topography biases both methods).&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</source>
+      <translation>&lt;p&gt;Schätzt die Reduktionsdichte (kg/m³) aus den Stationen selbst. Platten-, Krümmungs- und Geländeterm werden einmal für 1 kg/m³ mit demselben Standard und demselben Geländeverfahren wie die Bouguer-Reduktion berechnet (sie sind linear in der Dichte): B = Platte + Krümmung - Geländekorrektion je kg/m³, und die Bouguer-Anomalie bei der Dichte ρ ist faa - ρB.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Parasnis (1952)&lt;/b&gt;: Regression nach kleinsten Quadraten faa = ρB + Regionalterm; das Intervall ist das Student-t-Intervall der Steigung.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Nettleton (1939)&lt;/b&gt;: die Dichte, deren Bouguer-Anomalie nicht mit den Stationshöhen korreliert, über die ganze Vermessung oder, mit einem &lt;b&gt;Profillinienlayer&lt;/b&gt;, innerhalb eines &lt;b&gt;Puffers&lt;/b&gt; um jede Linie (über die Linien zusammengefasst); das Intervall ist ein Bootstrap über die Stationen (2000 Stichproben, mit festem Startwert).&lt;/p&gt;&lt;p&gt;&lt;b&gt;Regionalterm&lt;/b&gt; (beide Verfahren): keiner, eben (Standard) oder quadratisch in den Koordinaten, gemeinsam mit der Dichte angepasst, damit ein regionaler Gradient nicht in sie einfließt.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Ausgelassene Flächen&lt;/b&gt; (optionale Polygone): Stationen darin gehen nicht in die Anpassung ein, z. B. solche auf kartierter Talfüllung oder auf einer kartierten Intrusion, deren Dichte nicht die gesuchte ist.&lt;/p&gt;&lt;p&gt;Die Ausgaben DENSITY, DENSITY_LOW und DENSITY_HIGH (95 %) können in einem Modell die Dichte der Reduktion speisen; PLOT ist ein PNG der Anpassung. Das Protokoll warnt, wenn das Relief zu gering ist, wenn Relief und regionaler Trend nicht zu trennen sind und wenn tiefe und hohe Stationen nicht übereinstimmen (eine Geologie, die der Topographie folgt, verfälscht beide Verfahren).&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="437" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="190" />
+      <source>Areas whose stations are left out (e.g. mapped valley fill; optional)</source>
+      <translation>Flächen, deren Stationen ausgelassen werden (z. B. kartierte Talfüllung; optional)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/density_estimate.py" line="473" />
       <source>Bouguer and terrain term per unit density (mGal per g/cm³)</source>
       <translation>Bouguer- und Geländeterm je Dichteeinheit (mGal je g/cm³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="457" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="493" />
       <source>Bouguer anomaly against height</source>
       <translation>Bouguer-Anomalie gegen Höhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="487" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="523" />
       <source>Bouguer anomaly minus regional, centred (mGal)</source>
       <translation>Bouguer-Anomalie minus Regionalfeld, zentriert (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="176" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="181" />
       <source>Buffer around the profile lines</source>
       <translation>Puffer um die Profillinien</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="299" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="315" />
       <source>Cancelled by the user.</source>
       <translation>Vom Benutzer abgebrochen.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="482" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="518" />
       <source>Correlation with height</source>
       <translation>Korrelation mit der Höhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="315" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="331" />
       <source>Density {:.0f} kg/m³, 95 % interval {:.0f} to {:.0f} kg/m³ from {} stations ({}).</source>
       <translation>Dichte {:.0f} kg/m³, 95-%-Intervall {:.0f} bis {:.0f} kg/m³ aus {} Stationen ({}).</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="468" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="504" />
       <source>Distance along the profile (m)</source>
       <translation>Abstand entlang des Profils (m)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="145" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="150" />
       <source>Elevation raster (DEM, metres)</source>
       <translation>Höhenraster (DGM, Meter)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="193" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="206" />
       <source>Estimated density (kg/m³)</source>
       <translation>Geschätzte Dichte (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="95" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="97" />
       <source>Estimates the Bouguer reduction density from the stations, with a 95 % interval and a figure.</source>
       <translation>Schätzt die Bouguer-Reduktionsdichte aus den Stationen, mit 95-%-Intervall und Abbildung.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="187" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="381" />
+      <source>Every station lies inside EXCLUDE_AREAS: no station is left to estimate the density from.</source>
+      <translation>Jede Station liegt in EXCLUDE_AREAS: keine Station bleibt, aus der sich die Dichte schätzen ließe.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/density_estimate.py" line="200" />
       <source>Figure of the estimate</source>
       <translation>Abbildung der Schätzung</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="438" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="474" />
       <source>Free-air anomaly minus regional term (mGal)</source>
       <translation>Freiluftanomalie minus Regionalterm (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="488" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="524" />
       <source>Height (m)</source>
       <translation>Höhe (m)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="194" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="207" />
       <source>Lower bound of the 95 % interval (kg/m³)</source>
       <translation>Untere Grenze des 95-%-Intervalls (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="149" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="154" />
       <source>Method</source>
       <translation>Verfahren</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="152" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="157" />
       <source>Nettleton (1939) least correlation with topography</source>
       <translation>Nettleton (1939), geringste Korrelation mit der Topographie</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="308" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="324" />
       <source>Nettleton correlation, {} regional term, {} group(s); bootstrap percentile interval, {} resamples</source>
       <translation>Nettleton-Korrelation, Regionalterm {}, {} Gruppe(n); Bootstrap-Perzentilintervall, {} Stichproben</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="483" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="519" />
       <source>Nettleton: {:.0f} kg/m³ ({:.0f} to {:.0f})</source>
       <translation>Nettleton: {:.0f} kg/m³ ({:.0f} bis {:.0f})</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="312" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="328" />
       <source>No density can be estimated: {}</source>
       <translation>Es kann keine Dichte geschätzt werden: {}</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="161" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="166" />
       <source>None (constant)</source>
       <translation>Keiner (konstant)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="127" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="132" />
       <source>Observed gravity field (mGal)</source>
       <translation>Feld der gemessenen Schwere (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="188" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="201" />
       <source>PNG files (*.png)</source>
       <translation>PNG-Dateien (*.png)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="151" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="156" />
       <source>Parasnis (1952) regression</source>
       <translation>Parasnis (1952), Regression</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="303" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="319" />
       <source>Parasnis regression, {} regional term; Student-t interval, {} degrees of freedom</source>
       <translation>Parasnis-Regression, Regionalterm {}; Student-t-Intervall, {} Freiheitsgrade</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="439" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="475" />
       <source>Parasnis: {:.0f} kg/m³ ({:.0f} to {:.0f})</source>
       <translation>Parasnis: {:.0f} kg/m³ ({:.0f} bis {:.0f})</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="161" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="166" />
       <source>Planar</source>
       <translation>Eben</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="364" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="400" />
       <source>Profile buffers need stations in a projected CRS (metres); reproject the station layer first.</source>
       <translation>Profilpuffer brauchen Stationen in einem projizierten KBS (Meter); projizieren Sie den Stationslayer zuerst um.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="168" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="173" />
       <source>Profile lines (Nettleton; empty = whole survey)</source>
       <translation>Profillinien (Nettleton; leer = ganze Vermessung)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="222" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="235" />
       <source>Profile lines are used by Nettleton's method only: choose it, or leave the profiles empty.</source>
       <translation>Profillinien werden nur vom Nettleton-Verfahren verwendet: wählen Sie es oder lassen Sie die Profile leer.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="469" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="505" />
       <source>Profile {} ({} stations)</source>
       <translation>Profil {} ({} Stationen)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="161" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="166" />
       <source>Quadratic</source>
       <translation>Quadratisch</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="92" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="94" />
       <source>Reduction density from the data (Parasnis, Nettleton)</source>
       <translation>Reduktionsdichte aus den Daten (Parasnis, Nettleton)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="160" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="165" />
       <source>Regional term fitted with the density</source>
       <translation>Mit der Dichte angepasster Regionalterm</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="415" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="451" />
       <source>Relief {:.0f} m (standard deviation after the regional term); low and high stations agree.</source>
       <translation>Relief {:.0f} m (Standardabweichung nach dem Regionalterm); tiefe und hohe Stationen stimmen überein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="456" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="492" />
       <source>Station height (m)</source>
       <translation>Stationshöhe (m)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="139" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="144" />
       <source>Station height field (above the ellipsoid; empty = sample the elevation raster)</source>
       <translation>Feld der Stationshöhe (über dem Ellipsoid; leer = aus dem Höhenraster)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="198" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="211" />
       <source>Stations used</source>
       <translation>Verwendete Stationen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="390" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="426" />
       <source>Stations within {:g} of each profile line: {}.</source>
       <translation>Stationen innerhalb {:g} um jede Profillinie: {}.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="226" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="239" />
       <source>The buffer around the profile lines must be more than 0.</source>
       <translation>Der Puffer um die Profillinien muss größer als 0 sein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="217" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="230" />
       <source>The inner zone radius ({} m) must be positive and smaller than the outer zone radius ({} m).</source>
       <translation>Der Radius der Innenzone ({} m) muss positiv und kleiner als der Radius der Außenzone ({} m) sein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="376" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="412" />
       <source>The profile layer has no line.</source>
       <translation>Der Profillayer enthält keine Linie.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="481" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="517" />
       <source>Trial density (kg/m³)</source>
       <translation>Versuchsdichte (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="133" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="138" />
       <source>Units of observed gravity</source>
       <translation>Einheit der gemessenen Schwere</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="196" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="209" />
       <source>Upper bound of the 95 % interval (kg/m³)</source>
       <translation>Obere Grenze des 95-%-Intervalls (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="235" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="248" />
       <source>elevation raster</source>
       <translation>Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="480" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="516" />
       <source>estimate {:.0f} kg/m³</source>
       <translation>Schätzung {:.0f} kg/m³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="434" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="470" />
       <source>fit: {:.0f} kg/m³</source>
       <translation>Anpassung: {:.0f} kg/m³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="98" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="100" />
       <source>gravity,density,bouguer,Parasnis,Nettleton,regression,correlation,bootstrap</source>
       <translation>Schwere,Dichte,Bouguer,Parasnis,Nettleton,Regression,Korrelation,Bootstrap</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="210" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="223" />
       <source>observed gravity</source>
       <translation>gemessene Schwere</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="238" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="251" />
       <source>regional elevation raster</source>
       <translation>regionales Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="210" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="223" />
       <source>station height</source>
       <translation>Stationshöhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="433" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="469" />
       <source>stations</source>
       <translation>Stationen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="486" />
+      <location filename="../plugin/toolbox/density_estimate.py" line="522" />
       <source>{:.0f} kg/m³</source>
       <translation>{:.0f} kg/m³</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/density_estimate.py" line="292" />
-      <source>{} of {} stations left out (no anomaly, no terrain correction or outside the profile buffers).</source>
-      <translation>{} von {} Stationen ausgelassen (keine Anomalie, keine Geländekorrektion oder außerhalb der Profilpuffer).</translation>
+      <location filename="../plugin/toolbox/density_estimate.py" line="307" />
+      <source>{} of {} stations left out (no anomaly, no terrain correction, outside the profile buffers or inside the excluded areas).</source>
+      <translation>{} von {} Stationen ausgelassen (keine Anomalie, keine Geländekorrektion, außerhalb der Profilpuffer oder in den ausgelassenen Flächen).</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/density_estimate.py" line="384" />
+      <source>{} of {} stations lie inside EXCLUDE_AREAS and are left out of the fit.</source>
+      <translation>{} von {} Stationen liegen in EXCLUDE_AREAS und gehen nicht in die Anpassung ein.</translation>
     </message>
   </context>
   <context>
@@ -1927,6 +1942,29 @@
       <location filename="../plugin/shipped_models.py" line="58" />
       <source>Models</source>
       <translation>Modelle</translation>
+    </message>
+  </context>
+  <context>
+    <name>StationAreas</name>
+    <message>
+      <location filename="../plugin/station_areas.py" line="66" />
+      <source>A polygon of {} cannot be reprojected to the stations' CRS: {}</source>
+      <translation>Ein Polygon von {} lässt sich nicht in das KBS der Stationen umprojizieren: {}</translation>
+    </message>
+    <message>
+      <location filename="../plugin/station_areas.py" line="55" />
+      <source>{} has no coordinate reference system.</source>
+      <translation>{} hat kein Koordinatenbezugssystem.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/station_areas.py" line="72" />
+      <source>{} has no polygon.</source>
+      <translation>{} enthält kein Polygon.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/station_areas.py" line="53" />
+      <source>{} must be a polygon layer.</source>
+      <translation>{} muss ein Polygonlayer sein.</translation>
     </message>
   </context>
   <context>
