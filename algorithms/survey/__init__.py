@@ -14,6 +14,7 @@ from ._calibration import (
     instrument_height_correction,
 )
 from ._drift import linear_drift
+from ._ephemeris import delta_t_seconds, moon_ecliptic, moon_position, sun_position
 from ._network import (
     LoopClosure,
     NetworkResult,
@@ -23,6 +24,7 @@ from ._network import (
     times_going_backwards,
 )
 from ._tide import DEFAULT_GRAVIMETRIC_FACTOR, TideParts, longman_tide, longman_tide_parts
+from ._tide_positions import meeus_tide, meeus_tide_parts, station_position
 from ._times import ACCEPTED_FORMS, ReadingTime, julian_centuries_1900, parse_time, utc_hours_to_iso
 
 __all__ = [
@@ -39,6 +41,7 @@ __all__ = [
     "TideParts",
     "adjust_network",
     "counter_to_mgal",
+    "delta_t_seconds",
     "duplicate_readings",
     "instrument_height_correction",
     "julian_centuries_1900",
@@ -46,7 +49,13 @@ __all__ = [
     "longman_tide",
     "longman_tide_parts",
     "loop_closures",
+    "meeus_tide",
+    "meeus_tide_parts",
+    "moon_ecliptic",
+    "moon_position",
     "parse_time",
+    "station_position",
+    "sun_position",
     "tied_stations",
     "times_going_backwards",
     "utc_hours_to_iso",

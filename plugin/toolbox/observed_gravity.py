@@ -36,6 +36,7 @@ from ...algorithms.survey import (
     linear_drift,
     longman_tide,
     loop_closures,
+    meeus_tide,
     times_going_backwards,
     utc_hours_to_iso,
 )
@@ -43,7 +44,12 @@ from ..readings_table import check_cancel, index_keys, key_text, number, read_ca
 from ..stations import output_fields, read_stations
 from .base import ReliefGravityAlgorithm
 
-TIDES = ("longman1959", "none")
+TIDES = ("longman1959", "none", "meeus1998")
+TIDE_SOURCES = {
+    "longman1959": "Longman 1959",
+    "none": "none (readings already corrected)",
+    "meeus1998": "Meeus 1998 positions, exact point-mass attraction",
+}
 DRIFTS = ("network", "linear", "none")
 STATION_FIELDS = ("g_obs", "g_sigma", "n_read", "qc_flag")
 READING_FIELDS = ("read_mgal", "ih_corr", "tide_corr", "drift_corr", "g_read", "residual", "t_utc", "loop", "qc_flag")
@@ -100,6 +106,8 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         return self.tr(
             "<p>Turns gravimeter readings (counter units or mGal) into observed gravity at each "
             "station of a point layer: calibration table or scale factor, Earth tide (Longman 1959, "
+            "or the Sun and Moon from Meeus's 1998 series with the exact attraction, within about "
+            "0.0001 mGal of a modern ephemeris where Longman's series errs by up to 0.003 mGal; "
             "added to the reading), reduction from the sensor to the station mark (0.3086 mGal/m or "
             "a measured gradient per station), then drift and ties to the stations of known gravity.</p>"
             "<p>Drift: least-squares adjustment of all readings (an offset and a linear drift rate "
@@ -165,7 +173,12 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         ))
         add(QgsProcessingParameterEnum(
             self.TIDE, self.tr("Earth tide"),
-            options=[self.tr("Longman (1959)"), self.tr("None (readings already corrected)")], defaultValue=0,
+            options=[
+                self.tr("Longman (1959)"),
+                self.tr("None (readings already corrected)"),
+                self.tr("Sun and Moon from Meeus (1998) series, exact attraction"),
+            ],
+            defaultValue=0,
         ))
         add(QgsProcessingParameterNumber(
             self.GRAVIMETRIC_FACTOR, self.tr("Gravimetric factor (1 + h - 3k/2)"),
@@ -271,8 +284,8 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         safe = np.clip(station, 0, None)
         lat = np.where(station >= 0, stations.latitude[safe], np.nan)
         lon = np.where(station >= 0, stations.longitude[safe], np.nan)
-        if tide_method == "longman1959":
-            tide = longman_tide(
+        if tide_method != "none":
+            tide = (longman_tide if tide_method == "longman1959" else meeus_tide)(
                 np.nan_to_num(lat), np.nan_to_num(lon), np.where(station >= 0, height[safe], 0.0),
                 readings.utc_hours, factor,
             )
@@ -494,7 +507,7 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
 
         settings = {
             "tide": tide_method,
-            "tide_source": "Longman 1959",
+            "tide_source": TIDE_SOURCES[tide_method],
             "gravimetric_factor": factor,
             "drift": drift_method,
             "calibration_rows": len(table.counter) if table else 0,

@@ -215,7 +215,7 @@ def patch_survey(survey, points_writer):
     layer = ogr.Open(survey["plain"])
     rows = [(f.GetGeometryRef().GetX(), f.GetGeometryRef().GetY(), f.GetField("g_obs"), f.GetField("h")) for f in layer.GetLayer(0)]
     layer = None
-    x, y, g, h = (np.array(c) for c in zip(*rows))
+    x, y, g, h = (np.array(c) for c in zip(*rows, strict=True))
     west = x < WEST + 5000
     # A slab-like deficit growing with height: what a lighter unit at the surface does to faa.
     g = g - 300.0 * 4.193e-5 * (h - 300.0) * west
@@ -246,7 +246,7 @@ def test_excluded_areas_in_another_crs_select_the_same_stations(provider, patch_
     to_degrees = osr.CoordinateTransformation(src, dst)
     # Densified edges, so the reprojected polygon follows the projected one to centimetres.
     ring = []
-    for (a, b), (c, d) in zip(PATCH, PATCH[1:] + PATCH[:1]):
+    for (a, b), (c, d) in zip(PATCH, PATCH[1:] + PATCH[:1], strict=True):
         for t in np.linspace(0.0, 1.0, 50, endpoint=False):
             ring.append(to_degrees.TransformPoint(a + t * (c - a), b + t * (d - b))[:2])
     areas = _polygons(tmp_path / "areas_4326.gpkg", [ring], epsg=4326)

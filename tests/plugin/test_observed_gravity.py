@@ -274,3 +274,26 @@ def test_qgis_process_runs_the_algorithm(provider, survey, qgis_process_env):
     g_cli = [number(r["g_obs"]) for r in table_of(out)]
     g_py = [number(r["g_obs"]) for r in table_of(python["OUTPUT"])]
     np.testing.assert_allclose(g_cli, g_py, atol=1e-9)
+
+
+def test_tide_from_meeus_positions_agrees_with_longman_within_its_error(provider, survey):
+    """TIDE=2: the Meeus (1998) Sun and Moon with the exact attraction.
+
+    The survey's readings were made with Longman's tide; Longman's series errs
+    by up to about 0.003 mGal (tests/algorithms/survey/test_tide_positions.py),
+    so the two tides differ by at most that, reading by reading, and g_obs by
+    less after the adjustment.
+    """
+    longman = run(params(survey, OUTPUT=str(survey["folder"] / "a.gpkg"), READINGS_OUTPUT=str(survey["folder"] / "ra.gpkg")))
+    meeus = run(params(survey, TIDE=2, OUTPUT=str(survey["folder"] / "b.gpkg"), READINGS_OUTPUT=str(survey["folder"] / "rb.gpkg")))
+    tide_a = np.array([number(r["tide_corr"]) for r in table_of(longman["READINGS_OUTPUT"])])
+    tide_b = np.array([number(r["tide_corr"]) for r in table_of(meeus["READINGS_OUTPUT"])])
+    assert np.all(np.isfinite(tide_b))
+    assert 0 < np.abs(tide_b - tide_a).max() < 0.003
+    g_a = np.array([number(r["g_obs"]) for r in table_of(longman["OUTPUT"])])
+    g_b = np.array([number(r["g_obs"]) for r in table_of(meeus["OUTPUT"])])
+    read = np.isfinite(g_a)
+    assert np.abs(g_b[read] - g_a[read]).max() < 0.003
+    from relief_gravity.plugin.provenance import read_record
+
+    assert read_record(meeus["OUTPUT"])["steps"][-1]["settings"]["tide"] == "meeus1998"
