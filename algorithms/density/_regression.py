@@ -21,7 +21,7 @@ from dataclasses import dataclass
 
 import numpy as np
 import numpy.typing as npt
-from scipy import stats
+from scipy.special import stdtrit
 
 REGIONAL_TERMS = ("none", "planar", "quadratic")
 
@@ -203,7 +203,7 @@ def parasnis_density(
     s2 = float(residual @ residual) / dof
     covariance = s2 * np.linalg.pinv(full.T @ full)
     se = float(np.sqrt(covariance[0, 0]))
-    t = float(stats.t.ppf(0.5 + confidence / 2, dof))
+    t = float(stdtrit(dof, 0.5 + confidence / 2))  # Student-t quantile (the inverse of its CDF)
     rho = float(coefficients[0])
     shared = 1.0 - float(np.sum(b_left**2)) / total if total > 0 else 1.0
     return ParasnisFit(
