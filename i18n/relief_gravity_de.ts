@@ -2238,76 +2238,76 @@
     <name>TerrainCorrectionAlgorithm</name>
     <message>
       <location filename="../plugin/toolbox/terrain_correction.py" line="68" />
-      <source>&lt;p&gt;Computes the terrain correction of every station (mGal, positive for relief above or below the station) and adds &lt;b&gt;tc_inner&lt;/b&gt;, &lt;b&gt;tc_outer&lt;/b&gt;, &lt;b&gt;tc_total&lt;/b&gt;, &lt;b&gt;dem_diff&lt;/b&gt; (station height minus DEM height, m: large values point to mislocated stations), &lt;b&gt;tc_cover&lt;/b&gt; (fraction of the zone area covered by the rasters) and &lt;b&gt;qc_flag&lt;/b&gt; to a copy of the layer.&lt;/p&gt;&lt;p&gt;Exact engine (default): the innermost ring is modelled from the station height and the local DEM surface (or replaced by a field estimate); the inner zone to the inner radius uses exact prisms at full DEM resolution; the outer zone to the outer radius uses progressively coarser cells, then the regional raster beyond the fine one, with Earth curvature. Geographic (degree) rasters work: distances are on the ground.&lt;/p&gt;&lt;p&gt;Ring-and-sector (Hammer 1939): the chosen contiguous zones out of B to M (2 m to 21.94 km, flat Earth; terrain beyond the last zone is not corrected, and the log says how far it reaches) with compartment mean heights from the DEM, and from the regional raster where the DEM has no data; zones narrower than a DEM cell hold the plane through the station with the DEM's slope. A zone counts to tc_inner when it ends within the inner zone radius; a zone the radius cuts is split there. For comparison with chart-based field practice; optionally one field per zone.&lt;/p&gt;&lt;p&gt;Station heights come from the height field (the height difference is always taken from the station's own height) or, when empty, from the DEM.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Datums&lt;/b&gt;: station heights are converted to the DEM's datum before the comparison (HEIGHT_DATUM, DEM_DATUM; EGM96 from PROJ's egm96_15.gtx). Stations differing from the DEM beyond the local relief are flagged height_dem_mismatch, and the log names the setting when most differ by about the geoid height.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Limits&lt;/b&gt;: density 500-5000 kg/m³; inner radius above 0 and below the outer radius (default 895 m, the outer edge of Hammer zone F); a regional elevation raster reaching 166.7 km is needed for the standard correction. qc_flag holds codes, qc_note their meaning.&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</source>
-      <translation>&lt;p&gt;Berechnet die Geländekorrektion jeder Station (mGal, positiv für Relief über oder unter der Station) und fügt einer Kopie des Layers &lt;b&gt;tc_inner&lt;/b&gt;, &lt;b&gt;tc_outer&lt;/b&gt;, &lt;b&gt;tc_total&lt;/b&gt;, &lt;b&gt;dem_diff&lt;/b&gt; (Stationshöhe minus DGM-Höhe, m: große Werte deuten auf falsch verortete Stationen), &lt;b&gt;tc_cover&lt;/b&gt; (von den Rastern abgedeckter Anteil der Zonenfläche) und &lt;b&gt;qc_flag&lt;/b&gt; hinzu.&lt;/p&gt;&lt;p&gt;Exaktes Verfahren (Standard): der innerste Ring wird aus der Stationshöhe und der örtlichen DGM-Oberfläche modelliert (oder durch eine Feldschätzung ersetzt); die Innenzone bis zum Innenradius verwendet exakte Prismen in voller DGM-Auflösung; die Außenzone bis zum Außenradius verwendet zunehmend gröbere Zellen, jenseits des feinen Rasters dann das regionale Raster, mit Erdkrümmung. Geographische Raster (in Grad) funktionieren: die Abstände werden auf der Erdoberfläche gemessen.&lt;/p&gt;&lt;p&gt;Ringe und Sektoren (Hammer 1939): die gewählten zusammenhängenden Zonen aus B bis M (2 m bis 21,94 km, ebene Erde; Gelände jenseits der letzten Zone wird nicht korrigiert, und das Protokoll gibt an, wie weit sie reicht) mit mittleren Kompartimenthöhen aus dem DGM und aus dem regionalen Raster, wo das DGM keine Daten hat; Zonen, die schmaler als eine DGM-Zelle sind, enthalten die Ebene durch die Station mit der Neigung des DGM. Eine Zone zählt zu tc_inner, wenn sie innerhalb des Innenzonenradius endet; eine vom Radius geschnittene Zone wird dort geteilt. Zum Vergleich mit der diagrammgestützten Feldpraxis; optional ein Feld je Zone.&lt;/p&gt;&lt;p&gt;Stationshöhen stammen aus dem Höhenfeld (der Höhenunterschied wird stets von der eigenen Höhe der Station aus genommen) oder, wenn es leer ist, aus dem DGM.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Höhenbezugssysteme&lt;/b&gt;: Stationshöhen werden vor dem Vergleich in den Höhenbezug des DGM umgerechnet (HEIGHT_DATUM, DEM_DATUM; EGM96 aus egm96_15.gtx von PROJ). Stationen, die stärker vom DGM abweichen, als das örtliche Relief erklärt, werden mit height_dem_mismatch markiert, und das Protokoll nennt die Einstellung, wenn die meisten um etwa die Geoidhöhe abweichen.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Grenzen&lt;/b&gt;: Dichte 500-5000 kg/m³; Innenradius über 0 und unter dem Außenradius (Standard 895 m, der äußere Rand der Hammer-Zone F); für die Standardkorrektion wird ein regionales Höhenraster benötigt, das bis 166,7 km reicht. qc_flag enthält Codes, qc_note deren Bedeutung.&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</translation>
+      <source>&lt;p&gt;Computes the terrain correction of every station (mGal, positive for relief above or below the station) and adds &lt;b&gt;tc_inner&lt;/b&gt;, &lt;b&gt;tc_outer&lt;/b&gt;, &lt;b&gt;tc_total&lt;/b&gt;, &lt;b&gt;dem_diff&lt;/b&gt; (station height minus DEM height, m: large values point to mislocated stations), &lt;b&gt;tc_cover&lt;/b&gt; (fraction of the zone area covered by the rasters) and &lt;b&gt;qc_flag&lt;/b&gt; to a copy of the layer.&lt;/p&gt;&lt;p&gt;Exact engine (default): the innermost ring is modelled from the station height and the local DEM surface (or replaced by a field estimate); the inner zone to the inner radius uses exact prisms at full DEM resolution; the outer zone to the outer radius uses progressively coarser cells, then the regional raster beyond the fine one, with Earth curvature. Geographic (degree) rasters work: distances are on the ground.&lt;/p&gt;&lt;p&gt;Ring-and-sector (Hammer 1939): the chosen contiguous zones out of B to M (2 m to 21.94 km, compartments lowered by the Earth-curvature drop; terrain beyond the last zone is not corrected, and the log says how far it reaches) with compartment mean heights from the DEM, and from the regional raster where the DEM has no data; zones narrower than a DEM cell hold the plane through the station with the DEM's slope. A zone counts to tc_inner when it ends within the inner zone radius; a zone the radius cuts is split there. For comparison with chart-based field practice; optionally one field per zone.&lt;/p&gt;&lt;p&gt;Station heights come from the height field (the height difference is always taken from the station's own height) or, when empty, from the DEM.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Datums&lt;/b&gt;: station heights are converted to the DEM's datum before the comparison (HEIGHT_DATUM, DEM_DATUM; EGM96 from PROJ's egm96_15.gtx). Stations differing from the DEM beyond the local relief are flagged height_dem_mismatch, and the log names the setting when most differ by about the geoid height.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Limits&lt;/b&gt;: density 500-5000 kg/m³; inner radius above 0 and below the outer radius (default 895 m, the outer edge of Hammer zone F); a regional elevation raster reaching 166.7 km is needed for the standard correction. qc_flag holds codes, qc_note their meaning.&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</source>
+      <translation>&lt;p&gt;Berechnet die Geländekorrektion jeder Station (mGal, positiv für Relief über oder unter der Station) und fügt einer Kopie des Layers &lt;b&gt;tc_inner&lt;/b&gt;, &lt;b&gt;tc_outer&lt;/b&gt;, &lt;b&gt;tc_total&lt;/b&gt;, &lt;b&gt;dem_diff&lt;/b&gt; (Stationshöhe minus DGM-Höhe, m: große Werte deuten auf falsch verortete Stationen), &lt;b&gt;tc_cover&lt;/b&gt; (von den Rastern abgedeckter Anteil der Zonenfläche) und &lt;b&gt;qc_flag&lt;/b&gt; hinzu.&lt;/p&gt;&lt;p&gt;Exaktes Verfahren (Standard): der innerste Ring wird aus der Stationshöhe und der örtlichen DGM-Oberfläche modelliert (oder durch eine Feldschätzung ersetzt); die Innenzone bis zum Innenradius verwendet exakte Prismen in voller DGM-Auflösung; die Außenzone bis zum Außenradius verwendet zunehmend gröbere Zellen, jenseits des feinen Rasters dann das regionale Raster, mit Erdkrümmung. Geographische Raster (in Grad) funktionieren: die Abstände werden auf der Erdoberfläche gemessen.&lt;/p&gt;&lt;p&gt;Ringe und Sektoren (Hammer 1939): die gewählten zusammenhängenden Zonen aus B bis M (2 m bis 21,94 km, Kompartimente um die Absenkung durch die Erdkrümmung tiefer gelegt; Gelände jenseits der letzten Zone wird nicht korrigiert, und das Protokoll gibt an, wie weit sie reicht) mit mittleren Kompartimenthöhen aus dem DGM und aus dem regionalen Raster, wo das DGM keine Daten hat; Zonen, die schmaler als eine DGM-Zelle sind, enthalten die Ebene durch die Station mit der Neigung des DGM. Eine Zone zählt zu tc_inner, wenn sie innerhalb des Innenzonenradius endet; eine vom Radius geschnittene Zone wird dort geteilt. Zum Vergleich mit der diagrammgestützten Feldpraxis; optional ein Feld je Zone.&lt;/p&gt;&lt;p&gt;Stationshöhen stammen aus dem Höhenfeld (der Höhenunterschied wird stets von der eigenen Höhe der Station aus genommen) oder, wenn es leer ist, aus dem DGM.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Höhenbezugssysteme&lt;/b&gt;: Stationshöhen werden vor dem Vergleich in den Höhenbezug des DGM umgerechnet (HEIGHT_DATUM, DEM_DATUM; EGM96 aus egm96_15.gtx von PROJ). Stationen, die stärker vom DGM abweichen, als das örtliche Relief erklärt, werden mit height_dem_mismatch markiert, und das Protokoll nennt die Einstellung, wenn die meisten um etwa die Geoidhöhe abweichen.&lt;/p&gt;&lt;p&gt;&lt;b&gt;Grenzen&lt;/b&gt;: Dichte 500-5000 kg/m³; Innenradius über 0 und unter dem Außenradius (Standard 895 m, der äußere Rand der Hammer-Zone F); für die Standardkorrektion wird ein regionales Höhenraster benötigt, das bis 166,7 km reicht. qc_flag enthält Codes, qc_note deren Bedeutung.&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="113" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="114" />
       <source>Elevation raster (DEM, metres)</source>
       <translation>Höhenraster (DGM, Meter)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="142" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="143" />
       <source>Exact engine (prisms, DEM-driven)</source>
       <translation>Exaktes Verfahren (Prismen, aus dem DGM)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="122" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="123" />
       <source>Field-estimated innermost-ring correction (mGal)</source>
       <translation>Im Feld geschätzte Korrektion des innersten Rings (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="206" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="207" />
       <source>Hammer zones: {}</source>
       <translation>Hammer-Zonen: {}</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="140" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="141" />
       <source>Method</source>
       <translation>Verfahren</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="143" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="144" />
       <source>Ring-and-sector (Hammer 1939 zones B-M)</source>
       <translation>Ringe und Sektoren (Hammer 1939, Zonen B-M)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="222" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="223" />
       <source>Ring-and-sector zones {} cover {:.1f} m to {:.2f} km; terrain nearer (except a field-estimated innermost correction) and beyond is not corrected.</source>
       <translation>Die Zonen {} der Ringe und Sektoren decken {:.1f} m bis {:.2f} km ab; näheres Gelände (außer einer im Feld geschätzten Korrektion des innersten Rings) und ferneres wird nicht korrigiert.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="216" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="217" />
       <source>Ring-and-sector zones {} reach {:.2f} km; terrain beyond is not corrected.</source>
       <translation>Die Zonen {} der Ringe und Sektoren reichen bis {:.2f} km; Gelände jenseits davon wird nicht korrigiert.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="157" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="158" />
       <source>Ring-and-sector: Hammer zones (contiguous letters out of B-M, or a range such as B-M)</source>
       <translation>Ringe und Sektoren: Hammer-Zonen (zusammenhängende Buchstaben aus B-M oder ein Bereich wie B-M)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="149" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="150" />
       <source>Ring-and-sector: one field per Hammer zone</source>
       <translation>Ringe und Sektoren: ein Feld je Hammer-Zone</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="106" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="107" />
       <source>Station height field (empty = sample the elevation raster)</source>
       <translation>Feld der Stationshöhe (leer = aus dem Höhenraster)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="167" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="168" />
       <source>Stations computed</source>
       <translation>Berechnete Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="168" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="169" />
       <source>Stations flagged</source>
       <translation>Markierte Stationen (Anzahl)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="164" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="165" />
       <source>Stations with terrain correction</source>
       <translation>Stationen mit Geländekorrektion</translation>
     </message>
@@ -2322,22 +2322,22 @@
       <translation>Geländekorrektion von Schwerestationen bis 166,7 km aus einem DGM, mit Erdkrümmung.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="130" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="131" />
       <source>Treat cells below sea level as water of this density (kg/m³)</source>
       <translation>Zellen unter dem Meeresspiegel als Wasser dieser Dichte behandeln (kg/m³)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="229" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="230" />
       <source>Zones {} are narrower than a DEM cell: they hold the plane through the station with the DEM's slope there instead of DEM heights.</source>
       <translation>Die Zonen {} sind schmaler als eine DGM-Zelle: sie enthalten die Ebene durch die Station mit der dortigen Neigung des DGM statt der DGM-Höhen.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="249" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="250" />
       <source>elevation raster</source>
       <translation>Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="183" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="184" />
       <source>geoid height</source>
       <translation>Geoidhöhe</translation>
     </message>
@@ -2347,22 +2347,22 @@
       <translation>Schwere,Geländekorrektion,Innenzone,Außenzone,Hammer-Zonen,DGM,Bouguer</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="182" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="183" />
       <source>innermost-ring correction</source>
       <translation>Korrektion des innersten Rings</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="251" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="252" />
       <source>regional elevation raster</source>
       <translation>regionales Höhenraster</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="181" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="182" />
       <source>station height</source>
       <translation>Stationshöhe</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/terrain_correction.py" line="327" />
+      <location filename="../plugin/toolbox/terrain_correction.py" line="328" />
       <source>{} stations: terrain correction computed for {}, {} flagged.</source>
       <translation>{} Stationen: Geländekorrektion für {} berechnet, {} markiert.</translation>
     </message>

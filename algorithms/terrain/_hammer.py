@@ -249,6 +249,7 @@ def hammer_terrain_correction(
     inner_radius: float = 2000.0,
     progress: Callable[[float], None] | None = None,
     is_cancelled: Callable[[], bool] | None = None,
+    curvature: bool = True,
 ) -> HammerResult:
     """Hammer (1939) ring-and-sector terrain correction from DEMs.
 
@@ -273,6 +274,9 @@ def hammer_terrain_correction(
     progress, is_cancelled : callable, optional
         Called with the fraction done (0-1); polled once per station, when
         True :class:`TerrainCancelled` is raised.
+    curvature : bool
+        Lower every compartment by the Earth-curvature drop s^2/2R, as the
+        zone engine does (default); False gives Hammer's flat charts.
 
     Returns
     -------
@@ -283,7 +287,10 @@ def hammer_terrain_correction(
     Each compartment of n in a ring r1..r2 whose mean height differs from the
     station by z gives :func:`ring_sector_correction`,
     :math:`T = (2\\pi G\\rho/n)[(r_2 - r_1) + \\sqrt{r_1^2 + z^2} - \\sqrt{r_2^2 + z^2}]`
-    (flat Earth: the chart ends at 21.94 km).
+    on a flat Earth (Hammer's charts, ``curvature=False``), or, by default,
+    with each sample lowered by s^2/2R and the compartment taken between the
+    lowered reference and the lowered terrain (the drop reaches 37.8 m at
+    21.94 km); a plain at the station's height on the sphere then gives 0.
 
     * Mean heights: bilinear DEM heights at sample points spread over the
       compartment at equal area (about one per fine cell, at most
@@ -342,6 +349,7 @@ def hammer_terrain_correction(
     plane = [z for z in chosen if not resolved_by(z, max(cw, ch))]
     sampled = [z for z in chosen if resolved_by(z, max(cw, ch))]
     samples = {z.letter: _compartment_samples(z, min(cw, ch)) for z in sampled}
+    drops = {k: (e * e + nn * nn) / (2.0 * MEAN_EARTH_RADIUS) for k, (e, nn) in samples.items()}
     reach = chosen[-1].outer
     full_area = sum(math.pi * (z.outer**2 - z.inner**2) for z in chosen)
 
@@ -394,12 +402,15 @@ def hammer_terrain_correction(
                 start += h.size
                 ok = np.isfinite(h)
                 count = ok.sum(axis=1)
+                drop = drops[zone.letter] if curvature else np.zeros(shape)
+                mean_drop = np.where(count > 0, np.where(ok, drop, 0.0).sum(axis=1) / np.maximum(count, 1), 0.0)
                 mean = np.where(count > 0, np.where(ok, h, 0.0).sum(axis=1) / np.maximum(count, 1), hs[i])
                 empty += int(np.sum(count == 0))
                 covered += math.pi * (zone.outer**2 - zone.inner**2) * float(count.sum()) / h.size
                 value = 0.0
                 for r1, r2, to_inner in _split(zone, inner_radius):
-                    t = float(np.sum(ring_sector_correction(r1, r2, zone.compartments, mean - hs[i], density)))
+                    lowered = mean - hs[i] - mean_drop
+                    t = float(np.sum(ring_sector_correction(r1, r2, zone.compartments, lowered, density, mean_drop)))
                     parts[to_inner] += t
                     value += t
                 per_zone[zone.letter][i] = value

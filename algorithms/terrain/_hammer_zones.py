@@ -194,7 +194,7 @@ def resolved_by(zone: HammerZone, cell: float) -> bool:
 
 
 def ring_sector_correction(
-    r1: float, r2: float, n_compartments: int, relief: npt.ArrayLike, density: float = 2670.0
+    r1: float, r2: float, n_compartments: int, relief: npt.ArrayLike, density: float = 2670.0, drop: npt.ArrayLike = 0.0
 ) -> np.ndarray:
     """Terrain correction of one ring compartment of uniform relief, in mGal.
 
@@ -209,11 +209,18 @@ def ring_sector_correction(
         (either sign gives a positive correction).
     density : float
         Density in kg/m^3.
+    drop : array_like
+        Earth-curvature drop of the reference surface over the compartment
+        (m, about s^2/2R at distance s; 0 for Hammer's flat charts). The
+        relief is then measured from the station's horizontal plane to the
+        lowered terrain, ``mean(h - s^2/2R) - h_station``.
 
     Returns
     -------
     numpy.ndarray
-        Correction of one compartment in mGal (>= 0).
+        Correction of one compartment in mGal (>= 0 on a flat Earth; with a
+        drop, terrain above the lowered reference but below the station
+        gives a negative value, as in the zone engine).
 
     Notes
     -----
@@ -221,6 +228,15 @@ def ring_sector_correction(
 
     .. math:: T = \\frac{2\\pi G\\rho}{n}\\left[(r_2 - r_1) + \\sqrt{r_1^2 + z^2}
               - \\sqrt{r_2^2 + z^2}\\right].
+
+    With the curvature drop d the compartment is the column between the
+    lowered reference at -d and the terrain at c = z - d (docs/terrain.md,
+    section 6), integrated over the ring sector:
+
+    .. math:: T = \\frac{2\\pi G\\rho}{n}\\left[S(d) - S(c)\\right],\\quad
+              S(x) = \\sqrt{r_2^2 + x^2} - \\sqrt{r_1^2 + x^2},
+
+    which is Hammer's bracket for d = 0.
 
     The bracket telescopes: for any r1 < R < r2 the two sub-rings of the same
     relief add up to the whole ring, which is how a zone is split at the inner
@@ -246,11 +262,15 @@ def ring_sector_correction(
         msg = f"n_compartments must be >= 1, got {n_compartments}"
         raise ValueError(msg)
     z = np.asarray(relief, dtype=float)
-    z2 = z * z
-    # (r2 - r1) + sqrt(r1^2+z^2) - sqrt(r2^2+z^2) written without cancellation.
-    a1, a2 = np.sqrt(r1 * r1 + z2), np.sqrt(r2 * r2 + z2)
+    d = np.asarray(drop, dtype=float)
+    c2, d2 = z * z, d * d
+    # S(d) - S(c) written without cancellation: (c^2 - d^2) times the
+    # difference of 1 / (sqrt(r^2 + d^2) + sqrt(r^2 + c^2)) at r1 and r2;
+    # for d = 0 it is Hammer's (r2 - r1) + sqrt(r1^2+z^2) - sqrt(r2^2+z^2).
+    b1 = np.sqrt(r1 * r1 + d2) + np.sqrt(r1 * r1 + c2)
+    b2 = np.sqrt(r2 * r2 + d2) + np.sqrt(r2 * r2 + c2)
     with np.errstate(divide="ignore", invalid="ignore"):
-        bracket = np.where(z2 > 0, z2 * (1.0 / (a1 + r1) - 1.0 / (a2 + r2)), 0.0)
+        bracket = np.where(c2 != d2, (c2 - d2) * (1.0 / b1 - 1.0 / b2), 0.0)
     return 2.0 * math.pi * GRAVITATIONAL_CONSTANT * density * SI_TO_MGAL / n_compartments * bracket
 
 
