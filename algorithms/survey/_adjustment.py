@@ -45,28 +45,72 @@ def _columns(station, loop, use, n_loops, drift_loops):
 
 
 def _design(station, loop, dt, use, known, station_col, offset_col, drift_col, reading_sigma, known_sigma):
+    """Sparse design matrix (CSR: at most three entries per reading), observations and weights."""
+    import scipy.sparse as sp  # here, not at import: loading the plugin stays quick
+
     rows = np.flatnonzero(use)
     knowns = [s for s in station_col if np.isfinite(known[s])]
     n_cols = len(station_col) + len(offset_col) + len(drift_col)
-    A = np.zeros((len(rows) + len(knowns), n_cols))
-    obs = np.zeros(len(rows) + len(knowns))
-    p = np.ones(len(rows) + len(knowns))
+    i_idx, j_idx, values = [], [], []
     for i, k in enumerate(rows):
-        A[i, station_col[int(station[k])]] = 1.0
-        A[i, offset_col[int(loop[k])]] = 1.0
+        i_idx += [i, i]
+        j_idx += [station_col[int(station[k])], offset_col[int(loop[k])]]
+        values += [1.0, 1.0]
         if int(loop[k]) in drift_col:
-            A[i, drift_col[int(loop[k])]] = dt[k]
+            i_idx.append(i)
+            j_idx.append(drift_col[int(loop[k])])
+            values.append(dt[k])
+    p = np.ones(len(rows) + len(knowns))
     for j, s in enumerate(knowns):
-        A[len(rows) + j, station_col[s]] = 1.0
+        i_idx.append(len(rows) + j)
+        j_idx.append(station_col[s])
+        values.append(1.0)
         p[len(rows) + j] = (reading_sigma / known_sigma) ** 2
+    A = sp.csr_matrix((values, (i_idx, j_idx)), shape=(len(rows) + len(knowns), n_cols))
+    obs = np.zeros(len(rows) + len(knowns))
     return rows, knowns, A, obs, p
 
 
 def _null_space(N, tolerance=1e-9):
+    """Eigenvectors of the unit-diagonal scaled N whose eigenvalues are below ``tolerance`` x the largest.
+
+    Only the largest eigenvalue and the small ones are computed (LAPACK's
+    subset drivers), not the whole decomposition.
+    """
+    import scipy.linalg  # here, not at import: loading the plugin stays quick
+
     scale = np.sqrt(np.clip(np.diag(N), 1e-300, None))
-    eigval, eigvec = np.linalg.eigh(N / np.outer(scale, scale))
-    small = eigval < tolerance * max(eigval.max(), 1.0)
-    return eigvec[:, small]
+    scaled = N / np.outer(scale, scale)
+    n = scaled.shape[0]
+    largest = float(scipy.linalg.eigh(scaled, eigvals_only=True, subset_by_index=[n - 1, n - 1])[0])
+    limit = tolerance * max(largest, 1.0)
+    eigval, eigvec = scipy.linalg.eigh(scaled, subset_by_value=[-np.inf, limit])
+    return eigvec[:, eigval < limit]
+
+
+def _inverse_if_regular(N, tolerance=1e-9):
+    """(A^T P A)^-1 through Cholesky when N is provably regular, else None.
+
+    Regular means: the smallest eigenvalue of the unit-diagonal scaled N,
+    bounded from below by 1 / ||N_s^-1||_inf, exceeds ``tolerance`` x an
+    upper bound of the largest (||N_s||_inf). Then :func:`_null_space` would
+    find nothing, and its eigen-decompositions are skipped.
+    """
+    from scipy.linalg import lapack  # here, not at import: loading the plugin stays quick
+
+    scale = np.sqrt(np.clip(np.diag(N), 1e-300, None))
+    scaled = N / np.outer(scale, scale)
+    factor, info = lapack.dpotrf(scaled, lower=1, clean=1)
+    if info != 0:
+        return None
+    inverse, info = lapack.dpotri(factor, lower=1)
+    if info != 0:
+        return None
+    inverse = np.tril(inverse) + np.tril(inverse, -1).T
+    smallest = 1.0 / np.abs(inverse).sum(axis=1).max()
+    if not smallest > tolerance * max(np.abs(scaled).sum(axis=1).max(), 1.0):
+        return None
+    return inverse / np.outer(scale, scale)
 
 
 def _solve(value, station, loop, dt, use, known, drift_loops, n_loops, reading_sigma, known_sigma):
@@ -77,7 +121,10 @@ def _solve(value, station, loop, dt, use, known, drift_loops, n_loops, reading_s
         cols = _columns(station, loop, use, n_loops, drift_loops)
         station_col, _offset_col, drift_col = cols
         rows, knowns, A, _, p = _design(station, loop, dt, use, known, *cols, reading_sigma, known_sigma)
-        N = A.T @ (A * p[:, None])
+        N = (A.T @ A.multiply(p[:, None]).tocsr()).toarray()
+        Q = _inverse_if_regular(N)
+        if Q is not None:
+            break
         null = _null_space(N)
         if null.shape[1] == 0:
             break
@@ -90,13 +137,15 @@ def _solve(value, station, loop, dt, use, known, drift_loops, n_loops, reading_s
         lost = [s for s, c in station_col.items() if involved[c]]
         use &= ~np.isin(station, lost)
     obs = np.concatenate([value[rows], known[knowns]]) if knowns else value[rows].copy()
-    Q = np.linalg.inv(N)
-    Q = 0.5 * (Q + Q.T)
+    if Q is None:  # regular by the eigenvalues though not by the cheap bound
+        Q = np.linalg.inv(N)
+        Q = 0.5 * (Q + Q.T)
     x = Q @ (A.T @ (p * obs))
     v = obs - A @ x  # observed minus computed
     redundancy = len(obs) - A.shape[1]
     sigma0 = float(np.sqrt(np.sum(p * v * v) / redundancy)) if redundancy > 0 else reading_sigma
-    qvv = 1.0 / p - np.einsum("ij,jk,ik->i", A, Q, A)
+    # diag(A Q A^T) row by row through the sparse A (three entries a row).
+    qvv = 1.0 / p - np.asarray(A.multiply(A @ Q).sum(axis=1)).ravel()
     return dict(
         x=x, Q=Q, cols=cols, rows=rows, v=v[: len(rows)], qvv=qvv[: len(rows)], sigma0=sigma0,
         redundancy=redundancy, use=use, drift_loops=drift_loops,
