@@ -977,242 +977,257 @@
   <context>
     <name>ObservedGravityAlgorithm</name>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="106" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="110" />
       <source>&lt;p&gt;Turns gravimeter readings (counter units or mGal) into observed gravity at each station of a point layer: calibration table or scale factor, Earth tide (Longman 1959, or the Sun and Moon from Meeus's 1998 series with the exact attraction, within about 0.0001 mGal of a modern ephemeris where Longman's series errs by up to 0.003 mGal; added to the reading), reduction from the sensor to the station mark (0.3086 mGal/m or a measured gradient per station), then drift and ties to the stations of known gravity.&lt;/p&gt;&lt;p&gt;Drift: least-squares adjustment of all readings (an offset and a linear drift rate per loop, known stations as weighted observations, standard errors and residuals), or linear drift between the first and last reading of each loop's base, or none.&lt;/p&gt;&lt;p&gt;Times: ISO 8601 text (2026-05-04T09:13:00-06:00, or without an offset: then the UTC offset applies) or date-time fields. Loops: the loop field, else one loop per local calendar day. A loop opens on the station of its first reading.&lt;/p&gt;&lt;p&gt;The station output (g_obs, g_sigma in mGal, n_read, qc_flag) feeds the Bouguer reduction directly with g_obs as the gravity field. The readings output gives each reading's corrections, g_read, residual and loop.&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</source>
       <translation>&lt;p&gt;Wandelt Gravimeterablesungen (Zählereinheiten oder mGal) in die gemessene Schwere an jeder Station eines Punktlayers um: Kalibriertabelle oder Maßstabsfaktor, Erdgezeiten (Longman 1959, oder Sonne und Mond aus der Reihe von Meeus 1998 mit der exakten Anziehung, auf etwa 0,0001 mGal an einer modernen Ephemeride, wo Longmans Reihe bis zu 0,003 mGal abweicht; zur Ablesung addiert), Reduktion vom Sensor auf die Stationsvermarkung (0,3086 mGal/m oder ein gemessener Gradient je Station), dann Drift und Anschluss an die Stationen bekannter Schwere.&lt;/p&gt;&lt;p&gt;Drift: Ausgleichung aller Ablesungen nach kleinsten Quadraten (ein Offset und eine lineare Driftrate je Schleife, bekannte Stationen als gewichtete Beobachtungen, Standardfehler und Residuen), oder lineare Drift zwischen der ersten und letzten Ablesung der Basis jeder Schleife, oder keine.&lt;/p&gt;&lt;p&gt;Zeiten: ISO-8601-Text (2026-05-04T09:13:00-06:00, oder ohne Versatz: dann gilt der UTC-Versatz) oder Datum/Zeit-Felder. Schleifen: das Schleifenfeld, sonst eine Schleife je örtlichem Kalendertag. Eine Schleife beginnt an der Station ihrer ersten Ablesung.&lt;/p&gt;&lt;p&gt;Die Stationsausgabe (g_obs, g_sigma in mGal, n_read, qc_flag) geht mit g_obs als Schwerefeld direkt in die Bouguer-Reduktion ein. Die Ausgabe der Ablesungen enthält die Korrektionen jeder Ablesung, g_read, Residuum und Schleife.&lt;/p&gt;&lt;p&gt;{}&lt;/p&gt;</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="145" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="215" />
+      <source>A-priori standard error of a known gravity value (mGal)</source>
+      <translation>A-priori-Standardabweichung eines bekannten Schwerewerts (mGal)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/observed_gravity.py" line="210" />
+      <source>A-priori standard error of one reading (mGal, network adjustment)</source>
+      <translation>A-priori-Standardabweichung einer Ablesung (mGal, Netzausgleich)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/observed_gravity.py" line="149" />
       <source>Calibration table (fields counter, mgal, factor)</source>
       <translation>Kalibriertabelle (Felder counter, mgal, factor)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="500" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="529" />
       <source>Could not write a reading to the readings output.</source>
       <translation>Eine Ablesung konnte nicht in die Ausgabe der Ablesungen geschrieben werden.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="477" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="506" />
       <source>Could not write a station to the output layer.</source>
       <translation>Eine Station konnte nicht in den Ausgabelayer geschrieben werden.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="405" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="423" />
       <source>Counter reading(s) outside the calibration table's range {} to {} in row(s) {} of the readings.</source>
       <translation>Zählerablesung(en) außerhalb des Bereichs der Kalibriertabelle von {} bis {} in Zeile(n) {} der Ablesungen.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="142" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="146" />
       <source>Counter units (through the calibration table)</source>
       <translation>Zählereinheiten (über die Kalibriertabelle)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="281" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="295" />
       <source>Counter units without a calibration table or scale factor: read as mGal.</source>
       <translation>Zählereinheiten ohne Kalibriertabelle oder Maßstabsfaktor: als mGal gelesen.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="188" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="192" />
       <source>Drift and ties</source>
       <translation>Drift und Anschlüsse</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="175" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="179" />
       <source>Earth tide</source>
       <translation>Erdgezeiten</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="95" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="99" />
       <source>Field readings</source>
       <translation>Feldablesungen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="184" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="188" />
       <source>Gravimetric factor (1 + h - 3k/2)</source>
       <translation>Gravimetrischer Faktor (1 + h - 3k/2)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="161" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="165" />
       <source>Gravity stations</source>
       <translation>Schwerestationen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="153" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="157" />
       <source>Instrument height field (m of the sensor above the mark)</source>
       <translation>Feld der Instrumentenhöhe (m des Sensors über der Vermarkung)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="171" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="175" />
       <source>Known gravity field (absolute, mGal; empty where unknown)</source>
       <translation>Feld der bekannten Schwere (absolut, mGal; leer, wo unbekannt)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="381" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="399" />
       <source>Known gravity {} is outside 970000-990000 mGal: it must be absolute gravity in mGal.</source>
       <translation>Die bekannte Schwere {} liegt außerhalb 970000-990000 mGal: sie muss die absolute Schwere in mGal sein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="216" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="230" />
       <source>Largest loop misclosure (mGal)</source>
       <translation>Größter Schleifenschlussfehler (mGal)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="202" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="206" />
       <source>Leave readings beyond 3 standard errors out of a second pass</source>
       <translation>Ablesungen über 3 Standardfehlern in einem zweiten Durchgang auslassen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="191" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="195" />
       <source>Linear between base readings</source>
       <translation>Linear zwischen Basisablesungen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="177" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="181" />
       <source>Longman (1959)</source>
       <translation>Longman (1959)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="157" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="161" />
       <source>Loop field (empty: one loop per local calendar day)</source>
       <translation>Schleifenfeld (leer: eine Schleife je örtlichem Kalendertag)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="427" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="456" />
       <source>Loop, base, base readings, hours, misclosure (mGal), drift (mGal/h):</source>
       <translation>Schleife, Basis, Basisablesungen, Stunden, Schlussfehler (mGal), Drift (mGal/h):</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="215" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="229" />
       <source>Loops</source>
       <translation>Schleifen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="198" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="202" />
       <source>Measured vertical gradient field (mGal/m, empty: 0.3086)</source>
       <translation>Feld des gemessenen Vertikalgradienten (mGal/m, leer: 0,3086)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="128" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="132" />
       <source>Meter readings (table)</source>
       <translation>Gravimeterablesungen (Tabelle)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="190" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="194" />
       <source>Network adjustment (least squares)</source>
       <translation>Netzausgleichung (kleinste Quadrate)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="421" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="450" />
       <source>No reading is of a station of known gravity (or of a station tied to one): the network cannot be tied. Give the known gravity of at least one base station read in the loops.</source>
       <translation>Keine Ablesung gehört zu einer Station bekannter Schwere (oder einer daran angeschlossenen Station): das Netz kann nicht angeschlossen werden. Geben Sie die bekannte Schwere mindestens einer in den Schleifen abgelesenen Basisstation an.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="374" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="392" />
       <source>No station has a known gravity in the field {}: at least one base of known gravity is needed.</source>
       <translation>Keine Station hat eine bekannte Schwere im Feld {}: mindestens eine Basis bekannter Schwere wird benötigt.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="192" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="196" />
       <source>None</source>
       <translation>Keine</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="178" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="182" />
       <source>None (readings already corrected)</source>
       <translation>Keine (Ablesungen bereits korrigiert)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="89" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="93" />
       <source>Observed gravity from meter readings (tide, drift, base ties)</source>
       <translation>Gemessene Schwere aus Gravimeterablesungen (Gezeiten, Drift, Basisanschlüsse)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="133" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="137" />
       <source>Reading field</source>
       <translation>Feld der Ablesung</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="141" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="145" />
       <source>Reading units</source>
       <translation>Einheit der Ablesungen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="213" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="227" />
       <source>Reduced readings</source>
       <translation>Reduzierte Ablesungen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="149" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="153" />
       <source>Scale factor (mGal per unit, or a correction to the table)</source>
       <translation>Maßstabsfaktor (mGal je Einheit oder eine Korrektur der Tabelle)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="167" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="171" />
       <source>Station height field (m, for the tide)</source>
       <translation>Feld der Stationshöhe (m, für die Gezeiten)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="164" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="168" />
       <source>Station id field</source>
       <translation>Feld der Stationskennung</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="131" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="135" />
       <source>Station id field of the readings</source>
       <translation>Feld der Stationskennung in den Ablesungen</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="210" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="224" />
       <source>Stations with observed gravity</source>
       <translation>Stationen mit gemessener Schwere</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="179" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="183" />
       <source>Sun and Moon from Meeus (1998) series, exact attraction</source>
       <translation>Sonne und Mond aus der Reihe von Meeus (1998), exakte Anziehung</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="224" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="238" />
       <source>The scale factor must be positive; got {}.</source>
       <translation>Der Maßstabsfaktor muss positiv sein; erhalten: {}.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="366" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="384" />
       <source>The station id '{}' appears more than once in the station layer; ids must be unique.</source>
       <translation>Die Stationskennung '{}' kommt im Stationslayer mehrfach vor; Kennungen müssen eindeutig sein.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="132" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="136" />
       <source>Time field (ISO 8601 text or date-time)</source>
       <translation>Zeitfeld (ISO-8601-Text oder Datum/Zeit)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="98" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="102" />
       <source>Turns gravimeter readings into observed gravity at each station, with loop checks.</source>
       <translation>Wandelt Gravimeterablesungen in die gemessene Schwere an jeder Station um, mit Schleifenkontrollen.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="137" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="141" />
       <source>UTC offset of times without one (hours, east positive)</source>
       <translation>UTC-Versatz von Zeiten ohne Angabe (Stunden, Osten positiv)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="101" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="105" />
       <source>gravity,gravimeter,readings,earth tide,Longman,drift,loop,base station,tie,calibration</source>
       <translation>Schwere,Gravimeter,Ablesungen,Erdgezeiten,Longman,Drift,Schleife,Basisstation,Anschluss,Kalibrierung</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="142" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="146" />
       <source>mGal</source>
       <translation>mGal</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="268" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="433" />
+      <source>{} must be a positive standard error in mGal, got {}.</source>
+      <translation>{} muss eine positive Standardabweichung in mGal sein, erhalten: {}.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/toolbox/observed_gravity.py" line="282" />
       <source>{} reading(s) name stations not in the station layer (e.g. {}); they are left out.</source>
       <translation>{} Ablesung(en) nennen Stationen, die nicht im Stationslayer sind (z. B. {}); sie werden ausgelassen.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="343" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="361" />
       <source>{} readings in {} loops; {} stations with observed gravity; {} readings flagged; s0 = {:.4f} mGal.</source>
       <translation>{} Ablesungen in {} Schleifen; {} Stationen mit gemessener Schwere; {} Ablesungen markiert; s0 = {:.4f} mGal.</translation>
     </message>

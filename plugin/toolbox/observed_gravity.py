@@ -28,6 +28,8 @@ from qgis.PyQt.QtCore import QVariant
 
 from ...algorithms import qc
 from ...algorithms.survey import (
+    DEFAULT_KNOWN_SIGMA,
+    DEFAULT_READING_SIGMA,
     FREE_AIR_GRADIENT,
     adjust_network,
     counter_to_mgal,
@@ -42,7 +44,7 @@ from ...algorithms.survey import (
 )
 from ..readings_table import check_cancel, index_keys, key_text, number, read_calibration, read_readings
 from ..stations import output_fields, read_stations
-from .base import ReliefGravityAlgorithm
+from .base import ReliefGravityAlgorithm, is_unset
 
 TIDES = ("longman1959", "none", "meeus1998")
 TIDE_SOURCES = {
@@ -75,6 +77,8 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
     GRADIENT_FIELD = "GRADIENT_FIELD"
     TIDE = "TIDE"
     GRAVIMETRIC_FACTOR = "GRAVIMETRIC_FACTOR"
+    READING_SIGMA = "READING_SIGMA"
+    KNOWN_SIGMA = "KNOWN_SIGMA"
     DRIFT = "DRIFT"
     DROP_OUTLIERS = "DROP_OUTLIERS"
     OUTPUT = "OUTPUT"
@@ -202,6 +206,16 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
                 self.DROP_OUTLIERS, self.tr("Leave readings beyond 3 standard errors out of a second pass"),
                 defaultValue=False,
             ),
+            QgsProcessingParameterNumber(
+                self.READING_SIGMA, self.tr("A-priori standard error of one reading (mGal, network adjustment)"),
+                type=QgsProcessingParameterNumber.Double, defaultValue=DEFAULT_READING_SIGMA, minValue=1e-6,
+                maxValue=10.0, optional=True,
+            ),
+            QgsProcessingParameterNumber(
+                self.KNOWN_SIGMA, self.tr("A-priori standard error of a known gravity value (mGal)"),
+                type=QgsProcessingParameterNumber.Double, defaultValue=DEFAULT_KNOWN_SIGMA, minValue=1e-6,
+                maxValue=10.0, optional=True,
+            ),
         ]
         for definition in advanced:
             definition.setFlags(definition.flags() | QgsProcessingParameterDefinition.FlagAdvanced)
@@ -308,6 +322,10 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         check_cancel(feedback)
         feedback.setProgress(30)
 
+        self._sigmas = (
+            self._sigma(parameters, self.READING_SIGMA, DEFAULT_READING_SIGMA, context),
+            self._sigma(parameters, self.KNOWN_SIGMA, DEFAULT_KNOWN_SIGMA, context),
+        )
         result = self._solve(drift_method, value, station, loop, readings.utc_hours, known, use, parameters, context)
         closures = loop_closures(station, loop, readings.utc_hours, value, use=use, n_loops=len(loop_names))
         single = closures.base_count == 1
@@ -407,12 +425,23 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
                 ).format(low, high, ", ".join(str(r) for r in rows[:10]))
             ) from None
 
+    def _sigma(self, parameters, name, default, context) -> float:
+        """A positive a-priori standard error (mGal); the default when the optional parameter is empty."""
+        value = self.parameterAsDouble(parameters, name, context) if not is_unset(parameters.get(name)) else default
+        if not (math.isfinite(value) and value > 0):
+            raise QgsProcessingException(
+                self.tr("{} must be a positive standard error in mGal, got {}.").format(name, value)
+            )
+        return value
+
     def _solve(self, method, value, station, loop, hours, known, use, parameters, context):
         try:
             if method == "network":
                 return adjust_network(
                     value, station, loop, hours, known, use=use,
                     drop_outliers=self.parameterAsBoolean(parameters, self.DROP_OUTLIERS, context),
+                    reading_sigma=self._sigmas[0],
+                    known_sigma=self._sigmas[1],
                 )
             return linear_drift(value, station, loop, hours, known, use=use, drift=method == "linear")
         except ValueError as error:
@@ -510,6 +539,8 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
             "tide_source": TIDE_SOURCES[tide_method],
             "gravimetric_factor": factor,
             "drift": drift_method,
+            "reading_sigma_mgal": self._sigmas[0],
+            "known_sigma_mgal": self._sigmas[1],
             "calibration_rows": len(table.counter) if table else 0,
             "free_air_gradient_mgal_per_m": FREE_AIR_GRADIENT,
             "sigma0_mgal": result.sigma0,

@@ -297,3 +297,42 @@ def test_tide_from_meeus_positions_agrees_with_longman_within_its_error(provider
     from relief_gravity.plugin.provenance import read_record
 
     assert read_record(meeus["OUTPUT"])["steps"][-1]["settings"]["tide"] == "meeus1998"
+
+
+def test_a_priori_standard_errors_weigh_known_values_against_the_readings(provider, survey, tmp_path):
+    """A second known station 0.3 mGal off: held at its value by the default 0.001 mGal, outvoted at 1 mGal."""
+    from osgeo import ogr
+
+    copy = tmp_path / "two_known.gpkg"
+    ogr.GetDriverByName("GPKG").CopyDataSource(ogr.Open(survey["stations"]), str(copy))
+    ds = ogr.Open(str(copy), 1)
+    layer = ds.GetLayer(0)
+    for feature in layer:
+        if feature.GetField("sid") == "B2":
+            feature.SetField("gknown", float(survey["truth"][1]) + 0.3)
+            layer.SetFeature(feature)
+    ds = layer = None
+    hashes = digest(copy)
+
+    def b2_minus_base(**extra):
+        result = run(params(survey, STATIONS=str(copy), OUTPUT=str(tmp_path / f"o{len(extra)}.gpkg"),
+                            READINGS_OUTPUT=str(tmp_path / f"r{len(extra)}.gpkg"), **extra))
+        rows = {r["sid"]: r for r in table_of(result["OUTPUT"])}
+        return number(rows["B2"]["g_obs"]) - number(rows["BASE"]["g_obs"]), result
+
+    true_difference = survey["truth"][1] - survey["truth"][0]
+    tight, _ = b2_minus_base()
+    loose, result = b2_minus_base(KNOWN_SIGMA=1.0, READING_SIGMA=0.005)
+    # Held: the known values impose their 0.3 mGal error; loose: the readings
+    # set the difference and the level is the mean of the two known values.
+    assert tight == pytest.approx(true_difference + 0.3, abs=0.02)
+    assert loose == pytest.approx(true_difference, abs=0.02)
+    from relief_gravity.plugin.provenance import read_record
+
+    settings = read_record(result["OUTPUT"])["steps"][-1]["settings"]
+    assert settings["known_sigma_mgal"] == 1.0 and settings["reading_sigma_mgal"] == 0.005
+    assert digest(copy) == hashes
+    from qgis.core import QgsProcessingException
+
+    with pytest.raises(QgsProcessingException):
+        run(params(survey, KNOWN_SIGMA=-1.0))
