@@ -222,7 +222,8 @@ def main(argv: list[str]) -> int:
     processing.run("reliefgravity:regionalresidual", {"INPUT": str(grid_path), "METHOD": 0, "ORDER": 1, "ROBUST": 2,
                    "REGIONAL": str(output / "cba_regional.tif"), "RESIDUAL": str(residual_path)}, feedback=feedback)
     render_anomaly_map(str(residual_path), str(output / "cba_residual_map.png"), stations=str(reduced_path),
-                       title="Residual of the complete Bouguer anomaly (robust planar regional)")
+                       title="Residual of the complete Bouguer anomaly (robust planar regional)",
+                       outlines=alluvium, outlines_label="Mapped alluvium")
 
     layer = QgsVectorLayer(str(reduced_path), "reduced", "ogr")
     cba = attribute_array(layer, "cba")

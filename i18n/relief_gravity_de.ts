@@ -214,8 +214,8 @@
   <context>
     <name>AnomalyMap</name>
     <message>
-      <location filename="../plugin/render.py" line="142" />
-      <location filename="../plugin/render.py" line="143" />
+      <location filename="../plugin/render.py" line="158" />
+      <location filename="../plugin/render.py" line="159" />
       <source>Anomaly (mGal)</source>
       <translation>Anomalie (mGal)</translation>
     </message>
@@ -226,13 +226,13 @@
     </message>
     <message>
       <location filename="../plugin/map_layout.py" line="276" />
-      <location filename="../plugin/render.py" line="185" />
+      <location filename="../plugin/render.py" line="205" />
       <source>Complete Bouguer anomaly</source>
       <translation>Vollständige Bouguer-Anomalie</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="146" />
-      <location filename="../plugin/render.py" line="148" />
+      <location filename="../plugin/render.py" line="162" />
+      <location filename="../plugin/render.py" line="164" />
       <source>Contours (mGal)</source>
       <translation>Isolinien (mGal)</translation>
     </message>
@@ -242,12 +242,12 @@
       <translation>Koordinaten: {} ({}), {}</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="55" />
+      <location filename="../plugin/render.py" line="56" />
       <source>Could not open {} as a map layer.</source>
       <translation>{} konnte nicht als Kartenlayer geöffnet werden.</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="218" />
+      <location filename="../plugin/render.py" line="238" />
       <source>Could not write the map image {} (layout export status {}).</source>
       <translation>Das Kartenbild {} konnte nicht geschrieben werden (Exportstatus {}).</translation>
     </message>
@@ -257,7 +257,12 @@
       <translation>Nur als Interpretationshilfe: an den Anschlussmessungen der Vermessung prüfen. Entscheidungen über Bohrungen, Grundwasser und Bauvorhaben folgen örtlichen Vorschriften und zugelassener Fachpraxis.</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="79" />
+      <location filename="../plugin/render.py" line="166" />
+      <source>Outlines</source>
+      <translation>Umrisse</translation>
+    </message>
+    <message>
+      <location filename="../plugin/render.py" line="88" />
       <source>Reduction density {} kg/m³</source>
       <translation>Reduktionsdichte {} kg/m³</translation>
     </message>
@@ -267,12 +272,12 @@
       <translation>Reduktionsdichte … kg/m³ · Standard … · Isolinienabstand … mGal · … Stationen · </translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="150" />
+      <location filename="../plugin/render.py" line="170" />
       <source>Stations</source>
       <translation>Stationen</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="83" />
+      <location filename="../plugin/render.py" line="92" />
       <source>contour interval {} mGal (index contours every {} mGal, labelled)</source>
       <translation>Isolinienabstand {} mGal (Zähllinien alle {} mGal, beschriftet)</translation>
     </message>
@@ -287,37 +292,37 @@
       <translation>m</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="89" />
+      <location filename="../plugin/render.py" line="98" />
       <source>map drawn {}</source>
       <translation>Karte erstellt {}</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="87" />
+      <location filename="../plugin/render.py" line="96" />
       <source>no contours</source>
       <translation>keine Isolinien</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="89" />
+      <location filename="../plugin/render.py" line="98" />
       <source>reduced {}</source>
       <translation>reduziert {}</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="81" />
+      <location filename="../plugin/render.py" line="90" />
       <source>reduction density not recorded</source>
       <translation>Reduktionsdichte nicht aufgezeichnet</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="82" />
+      <location filename="../plugin/render.py" line="91" />
       <source>reduction standard not recorded</source>
       <translation>Reduktionsstandard nicht aufgezeichnet</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="88" />
+      <location filename="../plugin/render.py" line="97" />
       <source>stations not shown</source>
       <translation>Stationen nicht dargestellt</translation>
     </message>
     <message>
-      <location filename="../plugin/render.py" line="88" />
+      <location filename="../plugin/render.py" line="97" />
       <source>{} stations</source>
       <translation>{} Stationen</translation>
     </message>

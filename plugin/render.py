@@ -18,6 +18,7 @@ from pathlib import Path
 
 from qgis.core import (
     QgsExpressionContextUtils,
+    QgsFillSymbol,
     QgsLayoutExporter,
     QgsMarkerSymbol,
     QgsProject,
@@ -60,6 +61,14 @@ def _source_path(source):
     if source is None:
         return None
     return str(source) if isinstance(source, (str, Path)) else source.source()
+
+
+def _outline_symbol():
+    """Dashed dark outline without fill, readable over any colour of the anomaly ramp."""
+    return QgsFillSymbol.createSimple(
+        {"color": "0,0,0,0", "style": "no", "outline_color": "25,25,25", "outline_width": "0.45",
+         "outline_style": "dash"}
+    )
 
 
 def _station_symbol():
@@ -111,6 +120,8 @@ def render_anomaly_map(
     title: str | None = None,
     width_px: int = 1600,
     smooth: bool = True,
+    outlines=None,
+    outlines_label: str | None = None,
 ) -> Path:
     """Render the anomaly map to ``png_path`` and return its path.
 
@@ -136,6 +147,11 @@ def render_anomaly_map(
         Image width in pixels; the height follows the raster's aspect.
     smooth : bool
         Bilinear display resampling (default); False shows the cells.
+    outlines : str, Path or QgsVectorLayer, optional
+        Polygons drawn as dashed outlines over the anomaly (e.g. mapped
+        geology), a layer URI with a subset filter works too.
+    outlines_label : str, optional
+        Legend entry of the outlines (default "Outlines").
     """
     png_path = Path(png_path)
     project = QgsProject()
@@ -147,6 +163,10 @@ def render_anomaly_map(
     if contour_layer is not None:
         style_contours(contour_layer, _tr("Contours (mGal)"))
         layers.insert(0, contour_layer)
+    outline_layer = _as_layer(outlines, "vector", outlines_label or _tr("Outlines"))
+    if outline_layer is not None:
+        outline_layer.setRenderer(QgsSingleSymbolRenderer(_outline_symbol()))
+        layers.insert(0, outline_layer)
     station_layer = _as_layer(stations, "vector", _tr("Stations"))
     if station_layer is not None:
         station_layer.setRenderer(QgsSingleSymbolRenderer(_station_symbol()))

@@ -310,3 +310,33 @@ def test_rendered_map_is_resampled_smoothly(provider, gridded, tmp_path):
     assert same_blocky > 0.7
     assert same_smooth < 0.6 * same_blocky, figures
     assert jump_smooth < 0.6 * jump_blocky, figures
+
+
+def test_outlines_are_drawn_dark_over_the_anomaly(provider, gridded, tmp_path):
+    """A polygon layer (e.g. mapped geology) drawn as dashed dark outlines; a bad layer is a sentence."""
+    from osgeo import ogr, osr
+
+    from relief_gravity.plugin.render import render_anomaly_map
+
+    path = tmp_path / "units.gpkg"
+    srs = osr.SpatialReference()
+    srs.ImportFromEPSG(32633)
+    ds = ogr.GetDriverByName("GPKG").CreateDataSource(str(path))
+    layer = ds.CreateLayer("units", srs, ogr.wkbPolygon)
+    layer.CreateField(ogr.FieldDefn("unit", ogr.OFTString))
+    for unit, wkt in (("fill", "POLYGON ((501000 5001000, 503000 5001000, 503000 5003000, 501000 5003000, 501000 5001000))"),
+                      ("rock", "POLYGON ((504000 5000500, 505500 5000500, 505500 5002500, 504000 5000500))")):
+        feature = ogr.Feature(layer.GetLayerDefn())
+        feature.SetField("unit", unit)
+        feature.SetGeometry(ogr.CreateGeometryFromWkt(wkt))
+        layer.CreateFeature(feature)
+    ds = layer = None
+    plain = _pixels(render_anomaly_map(gridded / "cba.tif", tmp_path / "plain.png", width_px=1000))
+    with_all = _pixels(render_anomaly_map(gridded / "cba.tif", tmp_path / "all.png", width_px=1000, outlines=str(path),
+                                          outlines_label="Units"))
+    only_fill = _pixels(render_anomaly_map(gridded / "cba.tif", tmp_path / "fill.png", width_px=1000,
+                                           outlines=f"{path}|layername=units|subset=\"unit\" = 'fill'"))
+    dark = lambda rgb: int((rgb.sum(axis=2) < 150).sum())  # noqa: E731 - pixels near black
+    assert dark(plain) < dark(only_fill) < dark(with_all), (dark(plain), dark(only_fill), dark(with_all))
+    with pytest.raises(ValueError, match="Could not open"):
+        render_anomaly_map(gridded / "cba.tif", tmp_path / "bad.png", outlines=str(tmp_path / "missing.gpkg"))
