@@ -2152,6 +2152,382 @@
     </message>
   </context>
   <context>
+    <name>SurveyReport</name>
+    <message>
+      <location filename="../plugin/report/content.py" line="153" />
+      <source>  worst flag: {}</source>
+      <translation>  schwerstes Kennzeichen: {}</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="193" />
+      <source>Anomalies against height</source>
+      <translation>Anomalien gegen die Höhe</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="197" />
+      <source>Anomalies against station height</source>
+      <translation>Anomalien gegen die Stationshöhe</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="187" />
+      <source>Anomaly distributions (mGal)</source>
+      <translation>Verteilung der Anomalien (mGal)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="170" />
+      <source>Anomaly map</source>
+      <translation>Anomaliekarte</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="284" />
+      <source>Caution.</source>
+      <translation>Vorsicht.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="299" />
+      <source>Cautions</source>
+      <translation>Vorsichtshinweise</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="47" />
+      <source>Check every reduction against the survey's own ties, base stations and specifications.</source>
+      <translation>Prüfen Sie jede Reduktion an den Anschlüssen, Basisstationen und Vorgaben der Vermessung selbst.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="48" />
+      <source>Decisions on drilling, groundwater abstraction or engineering works, and reporting under a jurisdiction's rules, are for licensed practice under local codes.</source>
+      <translation>Entscheidungen über Bohrungen, Grundwasserentnahme oder Bauwerke sowie Berichte nach den Regeln einer Rechtsordnung gehören in die Hand zugelassener Fachleute nach den örtlichen Vorschriften.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="262" />
+      <source>Flagged stations</source>
+      <translation>Gekennzeichnete Stationen</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="162" />
+      <source>Flags by code</source>
+      <translation>Kennzeichen nach Code</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="198" />
+      <source>Free-air anomaly follows the terrain; a Bouguer anomaly should not (Nettleton 1939).</source>
+      <translation>Die Freiluftanomalie folgt dem Gelände; eine Bouguer-Anomalie sollte es nicht (Nettleton 1939).</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="209" />
+      <source>Geology that follows the topography gives the same signature, so treat it as a prompt to check the density, not as an estimate.</source>
+      <translation>Eine Geologie, die der Topographie folgt, hinterlässt dieselbe Spur; nehmen Sie dies daher als Anlass, die Dichte zu prüfen, nicht als Schätzung.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="185" />
+      <source>Histograms of the anomalies</source>
+      <translation>Histogramme der Anomalien</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="233" />
+      <source>Largest corrections</source>
+      <translation>Größte Korrektionen</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="255" />
+      <source>Map of {}</source>
+      <translation>Karte von {}</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="227" />
+      <source>Median inner-zone share of the total: {} %.</source>
+      <translation>Median des Anteils der inneren Zone an der Gesamtkorrektion: {} %.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="175" />
+      <source>No anomaly field to map.</source>
+      <translation>Kein Anomaliefeld für eine Karte.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="177" />
+      <source>No anomaly grid was given: stations coloured by {} (mGal).</source>
+      <translation>Kein Anomaliegitter angegeben: Stationen nach {} (mGal) eingefärbt.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="165" />
+      <source>No station carries a flag.</source>
+      <translation>Keine Station trägt ein Kennzeichen.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="195" />
+      <source>No station height in the layer: this check needs the height the reduction used.</source>
+      <translation>Keine Stationshöhe im Layer: diese Prüfung braucht die Höhe, die die Reduktion verwendet hat.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="240" />
+      <source>No terrain correction in the layer: the complete Bouguer anomaly is not available.</source>
+      <translation>Keine Geländekorrektion im Layer: die vollständige Bouguer-Anomalie ist nicht verfügbar.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="264" />
+      <source>None.</source>
+      <translation>Keine.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="97" />
+      <source>Not a code of this version's flag vocabulary (an older or newer run); shown as written.</source>
+      <translation>Kein Code des Kennzeichen-Vokabulars dieser Version (ein älterer oder neuerer Lauf); wie geschrieben angezeigt.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="255" />
+      <source>One standard deviation, mGal.</source>
+      <translation>Eine Standardabweichung, mGal.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="43" />
+      <source>Results support interpretation only: they are not a basis on their own for drilling, groundwater or engineering decisions.</source>
+      <translation>Die Ergebnisse dienen nur der Interpretation: sie sind für sich allein keine Grundlage für Entscheidungen über Bohrungen, Grundwasser oder Bauwerke.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="166" />
+      <source>Stations</source>
+      <translation>Stationen</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="178" />
+      <source>Stations coloured by {}</source>
+      <translation>Stationen nach {} eingefärbt</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="290" />
+      <source>Survey report: {}</source>
+      <translation>Vermessungsbericht: {}</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="224" />
+      <source>Terrain correction by zone</source>
+      <translation>Geländekorrektion nach Zonen</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="242" />
+      <source>Terrain correction by zone (mGal)</source>
+      <translation>Geländekorrektion nach Zonen (mGal)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="204" />
+      <source>The Bouguer anomaly changes by {} mGal per metre of height. Read as a slab alone this would mean a density {} kg/m³ from the one used</source>
+      <translation>Die Bouguer-Anomalie ändert sich um {} mGal je Meter Höhe. Allein als Platte gelesen hieße das eine Dichte, die um {} kg/m³ von der verwendeten abweicht</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="125" />
+      <source>The layers carry no provenance record, so the parameters of the run cannot be shown. Outputs of this plugin's algorithms record them in their own metadata.</source>
+      <translation>Die Layer tragen keinen Herkunftsnachweis, daher können die Parameter des Laufs nicht gezeigt werden. Ausgaben der Algorithmen dieses Plugins halten sie in ihren eigenen Metadaten fest.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="236" />
+      <source>The terrain correction is not split by zone (a field value was used).</source>
+      <translation>Die Geländekorrektion ist nicht nach Zonen aufgeteilt (ein Feldwert wurde verwendet).</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="249" />
+      <source>This layer has no uncertainty fields (tc_sigma, cba_sigma or sigma_…): the run that made it did not estimate a per-station error, so none is shown. Do not read the anomalies as exact.</source>
+      <translation>Dieser Layer hat keine Unsicherheitsfelder (tc_sigma, cba_sigma oder sigma_…): der Lauf, der ihn erzeugt hat, hat keinen Fehler je Station geschätzt, daher wird keiner gezeigt. Lesen Sie die Anomalien nicht als exakt.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="247" />
+      <source>Uncertainty</source>
+      <translation>Unsicherheit</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="133" />
+      <source>What was run</source>
+      <translation>Was berechnet wurde</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="291" />
+      <source>Written {} by Relief Gravity {}. {} stations.</source>
+      <translation>Geschrieben am {} von Relief Gravity {}. {} Stationen.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="123" />
+      <source>algorithm</source>
+      <translation>Algorithmus</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/plots.py" line="98" />
+      <source>anomaly (mGal)</source>
+      <translation>Anomalie (mGal)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="163" />
+      <source>code</source>
+      <translation>Code</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="130" />
+      <source>contour interval</source>
+      <translation>Isolinienabstand</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="155" />
+      <source>count</source>
+      <translation>Anzahl</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/plots.py" line="138" />
+      <source>easting</source>
+      <translation>Rechtswert</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="302" />
+      <source>en</source>
+      <translation>de</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="57" />
+      <source>field</source>
+      <translation>Feld</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="256" />
+      <source>field (mGal, 1 sigma)</source>
+      <translation>Feld (mGal, 1 Sigma)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="151" />
+      <source>flagged (any code)</source>
+      <translation>gekennzeichnet (beliebiger Code)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/plots.py" line="112" />
+      <source>inner zone</source>
+      <translation>innere Zone</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/plots.py" line="121" />
+      <source>inner-zone share of the total (%)</source>
+      <translation>Anteil der inneren Zone an der Gesamtkorrektion (%)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/plots.py" line="100" />
+      <source>least-squares slope</source>
+      <translation>Steigung nach kleinsten Quadraten</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="57" />
+      <source>max</source>
+      <translation>Max.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="163" />
+      <source>meaning</source>
+      <translation>Bedeutung</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="57" />
+      <source>median</source>
+      <translation>Median</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/plots.py" line="59" />
+      <source>median {}</source>
+      <translation>Median {}</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="57" />
+      <source>min</source>
+      <translation>Min.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/plots.py" line="139" />
+      <source>northing</source>
+      <translation>Hochwert</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="128" />
+      <source>not recorded</source>
+      <translation>nicht festgehalten</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/plots.py" line="113" />
+      <source>outer zone</source>
+      <translation>äußere Zone</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="123" />
+      <source>parameters</source>
+      <translation>Parameter</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="130" />
+      <source>reduction density</source>
+      <translation>Reduktionsdichte</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="163" />
+      <source>severity</source>
+      <translation>Schwere</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="130" />
+      <source>standard</source>
+      <translation>Standard</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="234" />
+      <location filename="../plugin/report/content.py" line="273" />
+      <source>station</source>
+      <translation>Station</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/plots.py" line="97" />
+      <source>station height (m)</source>
+      <translation>Stationshöhe (m)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="163" />
+      <location filename="../plugin/report/plots.py" line="61" />
+      <location filename="../plugin/report/plots.py" line="122" />
+      <source>stations</source>
+      <translation>Stationen</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="145" />
+      <source>stations in the layer</source>
+      <translation>Stationen im Layer</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/plots.py" line="115" />
+      <source>stations, sorted by total correction</source>
+      <translation>Stationen, nach Gesamtkorrektion sortiert</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/plots.py" line="116" />
+      <source>terrain correction (mGal)</source>
+      <translation>Geländekorrektion (mGal)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="123" />
+      <source>time (UTC)</source>
+      <translation>Zeit (UTC)</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="123" />
+      <source>version</source>
+      <translation>Version</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="148" />
+      <source>with a value of {}</source>
+      <translation>mit einem Wert von {}</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="273" />
+      <source>worst severity</source>
+      <translation>schwerste Stufe</translation>
+    </message>
+    <message>
+      <location filename="../plugin/report/content.py" line="277" />
+      <source>… and {} more flagged stations (see the layer).</source>
+      <translation>… und {} weitere gekennzeichnete Stationen (siehe Layer).</translation>
+    </message>
+  </context>
+  <context>
     <name>SurveyReportAlgorithm</name>
     <message>
       <location filename="../plugin/toolbox/survey_report.py" line="70" />

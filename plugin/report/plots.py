@@ -1,8 +1,9 @@
 # SPDX-License-Identifier: GPL-2.0-or-later
-"""The report's plots as PNG bytes (matplotlib, Agg backend; numpy arrays in, no QGIS).
+"""The report's plots as PNG bytes (matplotlib, Agg backend; numpy arrays in, no layers).
 
 Each function draws one figure and returns it encoded; NaN values are left
-out and counted in the caller's text.
+out and counted in the caller's text. Axis labels and legends go through
+``_tr`` (context "SurveyReport") like the report's sentences.
 """
 
 from __future__ import annotations
@@ -10,10 +11,15 @@ from __future__ import annotations
 import io
 
 import numpy as np
+from qgis.PyQt.QtCore import QCoreApplication
 
 #: Figure width in inches and resolution (common screen proportions, no source).
 WIDTH = 9.0
 DPI = 110
+
+
+def _tr(text: str) -> str:
+    return QCoreApplication.translate("SurveyReport", text)
 
 
 def _pyplot():
@@ -50,9 +56,9 @@ def histograms(series: dict, units: str = "mGal") -> bytes:
         ax.hist(values, bins=min(40, max(5, int(np.sqrt(values.size)) + 1)), color="#2b83ba", edgecolor="white")
         ax.set_title(f"{name} (n = {values.size})")
         ax.set_xlabel(units)
-        ax.axvline(np.median(values), color="#d7191c", lw=1, label=f"median {np.median(values):.2f}")
+        ax.axvline(np.median(values), color="#d7191c", lw=1, label=_tr("median {}").format(f"{np.median(values):.2f}"))
         ax.legend(fontsize=8)
-    axes[0][0].set_ylabel("stations")
+    axes[0][0].set_ylabel(_tr("stations"))
     fig.tight_layout()
     return _encode(fig)
 
@@ -88,10 +94,10 @@ def anomaly_against_height(height, anomalies: dict) -> bytes:
         if np.isfinite(slope):
             line = np.array([h.min(), h.max()])
             ax.plot(line, slope * line + intercept, color=colour, lw=1.2)
-    ax.set_xlabel("station height (m)")
-    ax.set_ylabel("anomaly (mGal)")
+    ax.set_xlabel(_tr("station height (m)"))
+    ax.set_ylabel(_tr("anomaly (mGal)"))
     ax.grid(alpha=0.3)
-    ax.legend(fontsize=8, title="least-squares slope", title_fontsize=8)
+    ax.legend(fontsize=8, title=_tr("least-squares slope"), title_fontsize=8)
     fig.tight_layout()
     return _encode(fig)
 
@@ -103,16 +109,17 @@ def terrain_by_zone(tc_inner, tc_outer) -> bytes:
     order = np.argsort(inner + outer)
     fig, (left, right) = plt.subplots(1, 2, figsize=(WIDTH, 3.4), gridspec_kw={"width_ratios": [2, 1]})
     rank = np.arange(inner.size)
-    left.fill_between(rank, 0, inner[order], color="#fdae61", label="inner zone", step="mid")
-    left.fill_between(rank, inner[order], inner[order] + outer[order], color="#2b83ba", label="outer zone", step="mid")
-    left.set_xlabel("stations, sorted by total correction")
-    left.set_ylabel("terrain correction (mGal)")
+    left.fill_between(rank, 0, inner[order], color="#fdae61", label=_tr("inner zone"), step="mid")
+    left.fill_between(rank, inner[order], inner[order] + outer[order], color="#2b83ba", label=_tr("outer zone"),
+                      step="mid")
+    left.set_xlabel(_tr("stations, sorted by total correction"))
+    left.set_ylabel(_tr("terrain correction (mGal)"))
     left.legend(fontsize=8)
     total = inner + outer
     share = np.divide(inner, total, out=np.full_like(total, np.nan), where=total > 0)
     right.hist(share[np.isfinite(share)] * 100.0, bins=20, range=(0, 100), color="#fdae61", edgecolor="white")
-    right.set_xlabel("inner-zone share of the total (%)")
-    right.set_ylabel("stations")
+    right.set_xlabel(_tr("inner-zone share of the total (%)"))
+    right.set_ylabel(_tr("stations"))
     fig.tight_layout()
     return _encode(fig)
 
@@ -128,8 +135,8 @@ def station_map(x, y, values, label: str, cmap: str = "Spectral_r") -> bytes:
                             edgecolors="k", linewidths=0.3)
         fig.colorbar(points, ax=ax, label=label, extend="both", shrink=0.85)
     ax.set_aspect("equal")
-    ax.set_xlabel("easting")
-    ax.set_ylabel("northing")
+    ax.set_xlabel(_tr("easting"))
+    ax.set_ylabel(_tr("northing"))
     ax.ticklabel_format(useOffset=False, style="plain")
     # Six-digit map coordinates: few ticks, so the labels do not run together.
     ax.xaxis.set_major_locator(plt.MaxNLocator(4))

@@ -188,3 +188,37 @@ def test_cancel_leaves_no_file(provider, points_writer, tmp_path):
         processing.run("reliefgravity:surveyreport", {"INPUT": layer, "OUTPUT": str(out)}, feedback=feedback)
     assert out.read_text(encoding="utf-8") == "previous report"
     assert [p.name for p in tmp_path.iterdir() if ".part-" in p.name] == []
+
+
+def test_report_follows_the_users_language(qgis_processing):
+    """With the German translation installed the page, its plots' labels and the flag meanings are German."""
+    import numpy as np
+    from qgis.PyQt.QtCore import QCoreApplication, QTranslator
+
+    from relief_gravity.plugin.report.content import SurveyData, build_report
+
+    data = SurveyData(
+        layer_name="stations", station_ids=["S1", "S2", "S3", "S4"], x=np.array([0.0, 100.0, 200.0, 300.0]),
+        y=np.array([0.0, 50.0, 0.0, 50.0]),
+        fields={"faa": np.array([10.0, 12.0, 14.0, 16.0]), "cba": np.array([-1.0, -1.1, -0.9, -1.0]),
+                "height": np.array([100.0, 110.0, 120.0, 130.0])},
+        flags=["", "tc_partial", "", ""],
+    )
+    english = build_report(data)
+    assert '<html lang="en">' in english and "What was run" in english
+    translator = QTranslator()
+    assert translator.load(str(Path(__file__).resolve().parents[2] / "i18n" / "relief_gravity_de.qm"))
+    QCoreApplication.installTranslator(translator)
+    try:
+        german = build_report(data)
+    finally:
+        QCoreApplication.removeTranslator(translator)
+    assert '<html lang="de">' in german
+    for text in ("Was berechnet wurde", "Gekennzeichnete Stationen", "Vorsichtshinweise", "Vermessungsbericht: stations"):
+        assert text in german, text
+    assert "What was run" not in german
+    # The flag's meaning comes from the translated flag vocabulary (plugin/flags.py).
+    from relief_gravity.algorithms import qc
+
+    assert qc.VOCABULARY["tc_partial"].meaning in english
+    assert qc.VOCABULARY["tc_partial"].meaning not in german
