@@ -17,6 +17,7 @@ import scipy.sparse.linalg as spla
 
 from ._geometry import GridGeometry, clean_stations, default_cell_size
 from ._solver import (
+    FINE_SWEEPS,
     ITERATIVE_RTOL,
     Cancelled,
     GriddingCancelled,
@@ -93,7 +94,7 @@ def _solve(
         if progress is not None:
             progress(1.0)
         return solution
-    mg = Multigrid(a, n_rows, n_cols, is_cancelled=is_cancelled, colour_ordered=True)
+    mg = Multigrid(a, n_rows, n_cols, fine_sweeps=FINE_SWEEPS, is_cancelled=is_cancelled, colour_ordered=True)
     del a
     # Solved in the multigrid's colour order (no permutation per iteration).
     sorted_solution, residual = gmres(

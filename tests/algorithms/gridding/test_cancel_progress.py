@@ -168,3 +168,28 @@ def test_cancel_during_the_coarse_grid_start(monkeypatch):
         minimum_curvature(x, y, np.sin(x / 3e3), g, progress=fractions.append, is_cancelled=cancel_once)
     assert len(polls) == 4
     assert fractions == []  # the fine solve never started
+
+
+def test_one_fine_sweep_cycle_reduces_the_error_against_the_direct_solution(survey):
+    # The gridding runs the cycle with FINE_SWEEPS (1) sweeps on the finest
+    # grid: its plain residual after one cycle is larger than with two
+    # (0.26 against 0.08 measured), but the error, which the stopping test
+    # follows, falls faster (measured 0.17 of the solution after three
+    # cycles used as a plain iteration, 0.22 with two sweeps).
+    import scipy.sparse.linalg as spla
+
+    from relief_gravity.algorithms.gridding._solver import FINE_SWEEPS
+    from relief_gravity.algorithms.gridding._stations import average_per_cell
+    from relief_gravity.algorithms.gridding._system import assemble_system
+
+    x, y, v = survey
+    cells = average_per_cell(x, y, v, GRID)
+    a, rhs = assemble_system(cells, GRID.n_rows, GRID.n_cols, 0.25, 0.25, 0.4)
+    exact = spla.spsolve(a.tocsc(), rhs)
+    mg = Multigrid(a, GRID.n_rows, GRID.n_cols, fine_sweeps=FINE_SWEEPS)
+    error = exact.copy()
+    for _ in range(3):
+        error -= mg.apply(a @ error)
+    assert np.linalg.norm(error) < 0.3 * np.linalg.norm(exact)
+    with pytest.raises(ValueError, match="sweep"):
+        Multigrid(a, GRID.n_rows, GRID.n_cols, fine_sweeps=0)
