@@ -138,6 +138,29 @@ def _as_float32(m: sp.csr_matrix) -> sp.csr_matrix:
     return out
 
 
+def _row_block(m: sp.csr_matrix, lo: int, hi: int) -> sp.csr_matrix:
+    """Rows ``lo:hi`` of ``m`` as a matrix whose arrays are views of ``m``'s.
+
+    The arrays are attached after construction: the constructor's format
+    check would copy views of less than half their base (scipy 1.10), which
+    cost 0.2 s and a copy of the fine operator at 10^6 nodes.
+
+    Examples
+    --------
+    >>> m = sp.csr_matrix(np.arange(12.0).reshape(4, 3))
+    >>> block = _row_block(m, 1, 3)
+    >>> block.toarray().tolist(), bool(np.shares_memory(block.data, m.data))
+    ([[3.0, 4.0, 5.0], [6.0, 7.0, 8.0]], True)
+    """
+    first, last = int(m.indptr[lo]), int(m.indptr[hi])
+    out = sp.csr_matrix((hi - lo, m.shape[1]), dtype=m.dtype)
+    out.indptr = m.indptr[lo : hi + 1] - m.indptr.dtype.type(first)
+    out.indices = m.indices[first:last]
+    out.data = m.data[first:last]
+    out.has_sorted_indices = m.has_sorted_indices
+    return out
+
+
 def _strip_nodes(n_rows: int, n_cols: int, width: int) -> list[np.ndarray]:
     """Nodes of the four edge strips, each ordered along its edge first.
 
@@ -194,35 +217,43 @@ class _BandSolver:
         return x.ravel()
 
 
-def _prolongation(
-    fine_shape: tuple[int, int], fine_order: np.ndarray, coarse_position: np.ndarray | None = None
-) -> sp.csr_matrix:
-    """Bilinear prolongation ``kron(P_rows, P_cols)``, its rows in ``fine_order``.
+def _prolongation(fine_shape: tuple[int, int], coarse_position: np.ndarray | None = None) -> sp.csr_matrix:
+    """Bilinear prolongation ``kron(P_rows, P_cols)``, its rows in the fine grid's colour order.
 
     Columns are the coarse nodes in natural order, or at ``coarse_position``
-    (their place in another order). Built directly, at most four entries a
-    row, instead of through ``scipy.sparse.kron`` (3 times faster).
+    (their place in another order). The nodes of one colour form the
+    regular sub-grid ``(ci + 3a, cj + 3b)``, so each colour's rows are the
+    Kronecker product of every third row of the two 1-D operators, built by
+    broadcasting (at most four entries a row; measured 0.07 s for 10^6
+    nodes, against 0.43 s gathering the entries node by node, on the
+    shared 2-core machine).
+
+    Examples
+    --------
+    >>> p = _prolongation((5, 4))
+    >>> p.shape, bool(np.allclose(p.sum(axis=1), 1.0))
+    ((20, 9), True)
     """
     py = _prolongation_1d(fine_shape[0])
     px = _prolongation_1d(fine_shape[1])
     n_coarse_cols = px.shape[1]
-
-    def two_entries(p1: sp.csr_matrix, index: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
-        # Every row of the 1-D operator holds exactly two stored entries.
-        cols = p1.indices.reshape(-1, 2)[index]
-        vals = p1.data.reshape(-1, 2)[index]
-        return cols, vals
-
-    i, j = np.divmod(fine_order, fine_shape[1])
-    ci, wi = two_entries(py, i)
-    cj, wj = two_entries(px, j)
-    cols = (ci[:, :, None] * n_coarse_cols + cj[:, None, :]).reshape(-1, 4)
-    vals = (wi[:, :, None] * wj[:, None, :]).reshape(-1, 4).astype(np.float32)
+    # Every row of a 1-D operator holds exactly two stored entries.
+    y_cols, y_vals = py.indices.reshape(-1, 2), py.data.reshape(-1, 2)
+    x_cols, x_vals = px.indices.reshape(-1, 2), px.data.reshape(-1, 2)
+    cols, vals = [], []
+    for ci in range(3):
+        for cj in range(3):
+            yc, yv = y_cols[ci::3], y_vals[ci::3]
+            xc, xv = x_cols[cj::3], x_vals[cj::3]
+            cols.append((yc[:, None, :, None] * n_coarse_cols + xc[None, :, None, :]).reshape(-1, 4))
+            vals.append((yv[:, None, :, None] * xv[None, :, None, :]).astype(np.float32).reshape(-1, 4))
+    cols_all = np.concatenate(cols)
     if coarse_position is not None:
-        cols = coarse_position[cols]
-    n = fine_order.size
+        cols_all = coarse_position.astype(np.int32, copy=False)[cols_all]
+    vals_all = np.concatenate(vals)
+    n = vals_all.shape[0]
     out = sp.csr_matrix(
-        (vals.ravel(), cols.ravel().astype(np.int32), np.arange(n + 1, dtype=np.int64) * 4),
+        (vals_all.ravel(), cols_all.ravel().astype(np.int32, copy=False), np.arange(n + 1, dtype=np.int64) * 4),
         shape=(n, py.shape[1] * n_coarse_cols),
     )
     out.eliminate_zeros()
@@ -300,7 +331,7 @@ class Multigrid:
             check_cancel(is_cancelled)
             coarse_shape = (_prolongation_1d(shape[0]).shape[1], _prolongation_1d(shape[1]).shape[1])
             coarse_order, coarse_starts, coarse_position = _colour_order(*coarse_shape)
-            p = _prolongation(shape, order, coarse_position)
+            p = _prolongation(shape, coarse_position)
             r = p.T.tocsr()
             check_cancel(is_cancelled)
             # (R A) P: R A has a quarter of A's rows, so the intermediate is small.
@@ -311,14 +342,9 @@ class Multigrid:
             for c in range(9):
                 lo, hi = int(starts[c]), int(starts[c + 1])
                 if hi > lo:
-                    # Rows lo:hi as views of a's arrays: no copy, and a @ x is
-                    # the blocks' products joined, so a itself is not kept.
-                    first, last = a.indptr[lo], a.indptr[hi]
-                    rows = sp.csr_matrix(
-                        (a.data[first:last], a.indices[first:last], a.indptr[lo : hi + 1] - first),
-                        shape=(hi - lo, a.shape[1]),
-                    )
-                    blocks.append((slice(lo, hi), rows, (1.0 / diag[lo:hi]).astype(np.float32)))
+                    # Rows lo:hi as views of a's arrays: a @ x is the blocks'
+                    # products joined, so a itself is not kept.
+                    blocks.append((slice(lo, hi), _row_block(a, lo, hi), (1.0 / diag[lo:hi]).astype(np.float32)))
             self.levels.append((p, r, blocks))
             del a
             check_cancel(is_cancelled)
