@@ -145,8 +145,6 @@ def _coarse_guess(
     in grid units); the equation keeps its length unit, so the coarse grid
     solves the same surface at a lower resolution.
     """
-    from scipy.ndimage import map_coordinates
-
     f = NESTED_FACTOR
     coarse = GridGeometry(0.0, float(-(-n_rows // f) * f), float(f), -(-n_cols // f), -(-n_rows // f))
     col = cells.node % n_cols + 0.5 + cells.col_offset
@@ -165,10 +163,30 @@ def _coarse_guess(
     ).reshape(coarse.shape)
     check_cancel(is_cancelled)
     # Fine node (i, j) sits at ((i + 0.5) / f - 0.5, (j + 0.5) / f - 0.5) in coarse node units.
-    rows = (np.arange(n_rows) + 0.5) / f - 0.5
-    cols = (np.arange(n_cols) + 0.5) / f - 0.5
-    grid_rows, grid_cols = np.meshgrid(rows, cols, indexing="ij")
-    return map_coordinates(surface, [grid_rows, grid_cols], order=3, mode="nearest")
+    return _cubic_rows(n_rows, coarse.n_rows, f) @ surface @ _cubic_rows(n_cols, coarse.n_cols, f).T
+
+
+def _cubic_rows(n_fine: int, n_coarse: int, factor: int) -> np.ndarray:
+    """Weights of the cubic-spline interpolation from ``n_coarse`` to ``n_fine`` nodes, shape (n_fine, n_coarse).
+
+    Fine node ``i`` sits at ``(i + 0.5) / factor - 0.5`` in coarse node
+    units. The weights are those of ``scipy.ndimage.map_coordinates``
+    (``order=3``, ``mode="nearest"``), read off by interpolating the
+    identity; the 2-D interpolation is their tensor product, applied as
+    two small matrix products (measured 0.06 s instead of 0.11 s for
+    ``map_coordinates`` on 10^6 nodes, same values to rounding).
+
+    Examples
+    --------
+    >>> w = _cubic_rows(8, 2, 4)
+    >>> w.shape, bool(np.allclose(w.sum(axis=1), 1.0))
+    ((8, 2), True)
+    """
+    from scipy.ndimage import map_coordinates
+
+    at = (np.arange(n_fine) + 0.5) / factor - 0.5
+    rows, cols = np.meshgrid(at, np.arange(n_coarse, dtype=float), indexing="ij")
+    return map_coordinates(np.eye(n_coarse), [rows, cols], order=3, mode="nearest")
 
 
 def _detrend(cells: CellData, n_cols: int) -> tuple[CellData, np.ndarray]:
