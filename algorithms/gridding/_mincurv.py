@@ -10,11 +10,13 @@ from __future__ import annotations
 
 import math
 from dataclasses import replace
+from functools import partial
 
 import numpy as np
 import numpy.typing as npt
 import scipy.sparse.linalg as spla
 
+from ._coarse import first_coarse_operator
 from ._geometry import GridGeometry, clean_stations, default_cell_size
 from ._solver import (
     FINE_SWEEPS,
@@ -94,7 +96,24 @@ def _solve(
         if progress is not None:
             progress(1.0)
         return solution
-    mg = Multigrid(a, n_rows, n_cols, fine_sweeps=FINE_SWEEPS, is_cancelled=is_cancelled, colour_ordered=True)
+    first_coarse = partial(
+        first_coarse_operator,
+        data_nodes=cells.node,
+        n_rows=n_rows,
+        n_cols=n_cols,
+        tension=tension,
+        boundary_tension=boundary_tension,
+        cell_per_length=cell_per_length,
+    )
+    mg = Multigrid(
+        a,
+        n_rows,
+        n_cols,
+        fine_sweeps=FINE_SWEEPS,
+        is_cancelled=is_cancelled,
+        colour_ordered=True,
+        first_coarse=first_coarse,
+    )
     del a
     # Solved in the multigrid's colour order (no permutation per iteration).
     sorted_solution, residual = gmres(

@@ -279,6 +279,12 @@ class Multigrid:
     cycle runs in float32: it only has to approximate the inverse, and
     single precision halves the memory traffic.
 
+    ``first_coarse(a, p, position, coarse_order, coarse_position)``, when
+    given, returns the first coarse operator ``P.T @ a @ P`` (float32, coarse
+    colour order) from what the caller knows of ``a``'s structure
+    (:func:`._coarse.first_coarse_operator`: 0.1 s instead of 0.45 s of
+    sparse products at 10^6 nodes).
+
     Examples
     --------
     >>> a = sp.diags([-1.0, 2.5, -1.0], [-1, 0, 1], shape=(64, 64)).tocsr()
@@ -299,6 +305,7 @@ class Multigrid:
         is_cancelled: Cancelled = None,
         edge_width: int = EDGE_STRIP_WIDTH,
         colour_ordered: bool = False,
+        first_coarse: Optional[Callable[..., sp.csr_matrix]] = None,
     ) -> None:
         self.levels = []
         fine_sweeps = sweeps if fine_sweeps is None else fine_sweeps
@@ -334,8 +341,12 @@ class Multigrid:
             p = _prolongation(shape, coarse_position)
             r = p.T.tocsr()
             check_cancel(is_cancelled)
-            # (R A) P: R A has a quarter of A's rows, so the intermediate is small.
-            ra = r @ a
+            if first_coarse is not None and not self.levels:
+                # The caller knows the operator's structure (_coarse.py).
+                coarse_a = first_coarse(a, p, position, coarse_order, coarse_position)
+            else:
+                # (R A) P: R A has a quarter of A's rows, so the intermediate is small.
+                coarse_a = (r @ a) @ p
             check_cancel(is_cancelled)
             blocks = []
             diag = a.diagonal()
@@ -347,11 +358,10 @@ class Multigrid:
                     blocks.append((slice(lo, hi), _row_block(a, lo, hi), (1.0 / diag[lo:hi]).astype(np.float32)))
             self.levels.append((p, r, blocks))
             del a
+            a = coarse_a.tocsr()
+            del coarse_a
             check_cancel(is_cancelled)
-            a = (ra @ p).tocsr()
-            del ra
-            check_cancel(is_cancelled)
-            shape, order, starts = coarse_shape, coarse_order, coarse_starts
+            shape, order, starts, position = coarse_shape, coarse_order, coarse_starts, coarse_position
         check_cancel(is_cancelled)
         # Without coarser levels the grid itself is the coarsest: factorise
         # it exactly (float64), so the preconditioner is the inverse.
