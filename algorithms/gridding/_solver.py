@@ -27,8 +27,8 @@ import scipy.sparse.linalg as spla
 #: the bench survey (docs/gridding.md). Measured against the direct solution
 #: on 400 x 400 nodes (300 stations, Gaussian bodies of 20 mGal range, the
 #: survey of tests/algorithms/gridding/test_accuracy.py on 50 m cells,
-#: coarse-grid start): largest difference 7.8e-6 mGal at T = 0.25 and
-#: 1.5e-4 mGal at T = 0 (4e-7 and 8e-6 of the range); the solver this one
+#: coarse-grid start): largest difference 1.2e-5 mGal at T = 0.25 and
+#: 1.1e-4 mGal at T = 0 (6e-7 and 6e-6 of the range); the solver this one
 #: replaced (scipy's GMRES, 60-vector restarts) left 2.7e-7 and 1.3e-3 mGal.
 #: On the bench grid (10^6 nodes) the result moves by at most 2e-5 mGal from
 #: a solve to 1e-11 and the RMS error against the true field is unchanged
