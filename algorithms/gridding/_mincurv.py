@@ -124,7 +124,6 @@ def _solve(
         progress=progress,
         is_cancelled=is_cancelled,
         x0=None if guess is None else guess.ravel()[mg.order],
-        a_arnoldi=mg.matrix32,
     )
     solution = np.empty_like(sorted_solution)
     solution[mg.order] = sorted_solution

@@ -334,10 +334,6 @@ class Multigrid:
         # own colour order: P's rows follow the fine order and its columns
         # the coarse one, so R A P comes out in the coarse colour order.
         a = _as_float32(self.sorted_matrix)
-        #: The finest operator in float32 (its arrays are shared with the
-        #: smoother's colour blocks): GMRES's Arnoldi products may use it,
-        #: since the cycle rounds its input to float32 anyway.
-        self.matrix32 = a
         while a.shape[0] > coarsest and min(shape) > 5:
             check_cancel(is_cancelled)
             coarse_shape = (_prolongation_1d(shape[0]).shape[1], _prolongation_1d(shape[1]).shape[1])
@@ -441,7 +437,6 @@ def gmres(
     progress: Progress = None,
     is_cancelled: Cancelled = None,
     x0: np.ndarray | None = None,
-    a_arnoldi: sp.csr_matrix | None = None,
 ) -> tuple[np.ndarray, float]:
     """Left-preconditioned restarted GMRES (Saad & Schultz 1986).
 
@@ -473,13 +468,6 @@ def gmres(
         once, at the end.
     is_cancelled : callable, optional
         Checked before every iteration; True raises :class:`GriddingCancelled`.
-    x0 : numpy.ndarray, optional
-        Starting guess (default zero).
-    a_arnoldi : scipy.sparse matrix, optional
-        ``a`` in float32, used for the products of the Arnoldi process when
-        the preconditioner works in float32 (it rounds its input to float32,
-        so the float64 product bought nothing there). Residuals, and so the
-        stopping test, always use ``a``.
 
     Returns
     -------
@@ -532,10 +520,7 @@ def gmres(
         k = 0
         while k < restart and iterations < max_iterations:
             check_cancel(is_cancelled)
-            if a_arnoldi is None:
-                w = precondition(a @ basis[k])
-            else:
-                w = precondition(a_arnoldi @ basis[k].astype(np.float32))
+            w = precondition(a @ basis[k])
             norm_w = float(np.linalg.norm(w))
             for _ in range(2):
                 coeffs = basis[: k + 1] @ w
