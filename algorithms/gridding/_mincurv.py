@@ -19,6 +19,7 @@ import scipy.sparse.linalg as spla
 from ._coarse import first_coarse_operator
 from ._geometry import GridGeometry, clean_stations, default_cell_size
 from ._solver import (
+    FINE_SWEEP_LEVELS,
     FINE_SWEEPS,
     ITERATIVE_RTOL,
     Cancelled,
@@ -110,6 +111,7 @@ def _solve(
         n_rows,
         n_cols,
         fine_sweeps=FINE_SWEEPS,
+        fine_levels=FINE_SWEEP_LEVELS,
         is_cancelled=is_cancelled,
         colour_ordered=True,
         first_coarse=first_coarse,

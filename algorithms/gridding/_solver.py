@@ -27,10 +27,10 @@ import scipy.sparse.linalg as spla
 #: the bench survey (docs/gridding.md). Measured against the direct solution
 #: on 400 x 400 nodes (300 stations, Gaussian bodies of 20 mGal range, the
 #: survey of tests/algorithms/gridding/test_accuracy.py on 50 m cells,
-#: coarse-grid start): largest difference 1.2e-5 mGal at T = 0.25 and
-#: 1.1e-4 mGal at T = 0 (6e-7 and 6e-6 of the range); the solver this one
+#: coarse-grid start): largest difference 6.4e-6 mGal at T = 0.25 and
+#: 1.9e-4 mGal at T = 0 (3e-7 and 1e-5 of the range); the solver this one
 #: replaced (scipy's GMRES, 60-vector restarts) left 2.7e-7 and 1.3e-3 mGal.
-#: On the bench grid (10^6 nodes) the result moves by at most 2e-5 mGal from
+#: On the bench grid (10^6 nodes) the result moves by at most 3e-5 mGal from
 #: a solve to 1e-11 and the RMS error against the true field is unchanged
 #: (0.008764 mGal). 5e-9 was used before; it cost 6 more GMRES iterations
 #: there (0.4 s) for differences far below the data's accuracy. 1e-6 fails
@@ -49,14 +49,19 @@ GMRES_MAX_ITERATIONS = 600
 #: without, 19 with 16-node strips; at 10^6 nodes 32 and 19).
 EDGE_STRIP_WIDTH = 16
 
-#: Gauss-Seidel sweeps before and after the coarse correction on the finest
-#: grid (two on the coarser grids). Measured on the bench grid (10^6 nodes,
-#: 10,000 stations, T = 0.25): one sweep needs as many GMRES iterations as
-#: two (11 cycles from the coarse-grid start to 3e-7) at about two thirds of
-#: the cost per cycle; one V-cycle so reduces the error against the direct
-#: solution more (0.43 against 0.51 on 200 x 200 nodes) although it leaves a
-#: larger plain residual (0.26 against 0.08).
+#: Gauss-Seidel sweeps before and after the coarse correction on the
+#: FINE_SWEEP_LEVELS finest grids (two on the coarser grids). Measured on the
+#: bench grid (10^6 nodes, 10,000 stations, T = 0.25): one sweep on the
+#: finest grid needs as many GMRES iterations as two (11 cycles from the
+#: coarse-grid start to 3e-7) at about two thirds of the cost per cycle, and
+#: one sweep on the next grid too (250,000 nodes, 5 x 10^6 entries, 40 % of
+#: a cycle's work with two sweeps) still 11, at 8 % less CPU time in all;
+#: one sweep on every grid needs 13. One V-cycle so reduces the error
+#: against the direct solution more than with two sweeps everywhere (0.45
+#: against 0.51 on 200 x 200 nodes) although it leaves a larger plain
+#: residual (0.25 against 0.08).
 FINE_SWEEPS = 1
+FINE_SWEEP_LEVELS = 2
 
 Progress = Optional[Callable[[float], None]]
 Cancelled = Optional[Callable[[], bool]]
@@ -302,6 +307,7 @@ class Multigrid:
         coarsest: int = 4_000,
         sweeps: int = 2,
         fine_sweeps: int | None = None,
+        fine_levels: int = 1,
         is_cancelled: Cancelled = None,
         edge_width: int = EDGE_STRIP_WIDTH,
         colour_ordered: bool = False,
@@ -314,6 +320,7 @@ class Multigrid:
             raise ValueError(msg)
         self.sweeps = sweeps
         self.fine_sweeps = fine_sweeps
+        self.fine_levels = fine_levels
         self.n = a.shape[0]
         shape = (n_rows, n_cols)
         order, starts, position = _colour_order(*shape)
@@ -401,7 +408,7 @@ class Multigrid:
         if level == len(self.levels):
             return self.coarse.solve(b.astype(np.float64)).astype(np.float32)
         p, r, blocks = self.levels[level]
-        sweeps = self.fine_sweeps if level == 0 else self.sweeps
+        sweeps = self.fine_sweeps if level < self.fine_levels else self.sweeps
         x = self._smooth(blocks, None, b, False, sweeps)
         # The colour updated last satisfies its equations: its residual is 0.
         residual = np.empty_like(b)
