@@ -133,7 +133,7 @@ def first_coarse_operator(
     pde = pde_rows(data_nodes, n_rows, n_cols, tension, boundary_tension, cell_per_length).tocoo()
     pde = sp.csr_matrix((pde.data, (pde.row, position[pde.col])), shape=(data_nodes.size, a.shape[1]))
     correction = (p[places].T @ ((a[places] - pde) @ p)).tocoo()
-    row_node, col_node = node[correction.row], coarse_order[correction.col].astype(np.int64)
+    col_node = coarse_order[correction.col].astype(np.int64)
     ci, cj = np.divmod(col_node, nc_cols)
     di, dj = ci - i[correction.row], cj - j[correction.row]
     if correction.nnz and (np.abs(di).max() > 2 or np.abs(dj).max() > 2):

@@ -311,7 +311,7 @@ class Multigrid:
         is_cancelled: Cancelled = None,
         edge_width: int = EDGE_STRIP_WIDTH,
         colour_ordered: bool = False,
-        first_coarse: Optional[Callable[..., sp.csr_matrix]] = None,
+        first_coarse: Callable[..., sp.csr_matrix] | None = None,
     ) -> None:
         self.levels = []
         fine_sweeps = sweeps if fine_sweeps is None else fine_sweeps
