@@ -10,13 +10,18 @@ from __future__ import annotations
 
 import math
 from dataclasses import replace
+from functools import partial
 
 import numpy as np
 import numpy.typing as npt
+import scipy.sparse as sp
 import scipy.sparse.linalg as spla
 
+from ._coarse import first_coarse_operator
 from ._geometry import GridGeometry, clean_stations, default_cell_size
 from ._solver import (
+    FINE_SWEEP_LEVELS,
+    FINE_SWEEPS,
     ITERATIVE_RTOL,
     Cancelled,
     GriddingCancelled,
@@ -93,7 +98,25 @@ def _solve(
         if progress is not None:
             progress(1.0)
         return solution
-    mg = Multigrid(a, n_rows, n_cols, is_cancelled=is_cancelled, colour_ordered=True)
+    first_coarse = partial(
+        first_coarse_operator,
+        data_nodes=cells.node,
+        n_rows=n_rows,
+        n_cols=n_cols,
+        tension=tension,
+        boundary_tension=boundary_tension,
+        cell_per_length=cell_per_length,
+    )
+    mg = Multigrid(
+        a,
+        n_rows,
+        n_cols,
+        fine_sweeps=FINE_SWEEPS,
+        fine_levels=FINE_SWEEP_LEVELS,
+        is_cancelled=is_cancelled,
+        colour_ordered=True,
+        first_coarse=first_coarse,
+    )
     del a
     # Solved in the multigrid's colour order (no permutation per iteration).
     sorted_solution, residual = gmres(
@@ -144,8 +167,6 @@ def _coarse_guess(
     in grid units); the equation keeps its length unit, so the coarse grid
     solves the same surface at a lower resolution.
     """
-    from scipy.ndimage import map_coordinates
-
     f = NESTED_FACTOR
     coarse = GridGeometry(0.0, float(-(-n_rows // f) * f), float(f), -(-n_cols // f), -(-n_rows // f))
     col = cells.node % n_cols + 0.5 + cells.col_offset
@@ -164,10 +185,38 @@ def _coarse_guess(
     ).reshape(coarse.shape)
     check_cancel(is_cancelled)
     # Fine node (i, j) sits at ((i + 0.5) / f - 0.5, (j + 0.5) / f - 0.5) in coarse node units.
-    rows = (np.arange(n_rows) + 0.5) / f - 0.5
-    cols = (np.arange(n_cols) + 0.5) / f - 0.5
-    grid_rows, grid_cols = np.meshgrid(rows, cols, indexing="ij")
-    return map_coordinates(surface, [grid_rows, grid_cols], order=3, mode="nearest")
+    rows_weights = _cubic_rows(n_rows, coarse.n_rows, f)
+    cols_weights = _cubic_rows(n_cols, coarse.n_cols, f)
+    return (cols_weights @ (rows_weights @ surface).T).T
+
+
+def _cubic_rows(n_fine: int, n_coarse: int, factor: int) -> sp.csr_matrix:
+    """Weights of the cubic-spline interpolation from ``n_coarse`` to ``n_fine`` nodes, shape (n_fine, n_coarse).
+
+    Fine node ``i`` sits at ``(i + 0.5) / factor - 0.5`` in coarse node
+    units. The weights are those of ``scipy.ndimage.map_coordinates``
+    (``order=3``, ``mode="nearest"``), read off by interpolating the
+    identity; the 2-D interpolation is their tensor product, applied as
+    two small matrix products (measured 0.06 s instead of 0.11 s for
+    ``map_coordinates`` on 10^6 nodes, same values to rounding). The
+    weights fall off by a factor 2 - sqrt(3) a node away from the point, so
+    those below 1e-13 are dropped and the products are sparse: they run in
+    the calling thread, where a dense product went to the threaded BLAS
+    (whose worker then spins, adding CPU time on a shared machine).
+
+    Examples
+    --------
+    >>> w = _cubic_rows(8, 2, 4)
+    >>> w.shape, bool(np.allclose(w.sum(axis=1), 1.0))
+    ((8, 2), True)
+    """
+    from scipy.ndimage import map_coordinates
+
+    at = (np.arange(n_fine) + 0.5) / factor - 0.5
+    rows, cols = np.meshgrid(at, np.arange(n_coarse, dtype=float), indexing="ij")
+    weights = map_coordinates(np.eye(n_coarse), [rows, cols], order=3, mode="nearest")
+    weights[np.abs(weights) < 1e-13] = 0.0
+    return sp.csr_matrix(weights)
 
 
 def _detrend(cells: CellData, n_cols: int) -> tuple[CellData, np.ndarray]:

@@ -8,7 +8,7 @@ import importlib
 
 import pytest
 
-MODULES = ("_geometry", "_stations", "_system", "_solver", "_mincurv", "_spline", "_contours")
+MODULES = ("_geometry", "_stations", "_system", "_solver", "_coarse", "_mincurv", "_spline", "_contours")
 
 
 @pytest.mark.parametrize("name", MODULES)
