@@ -34,13 +34,14 @@ from ._grid import ElevationGrid
 from ._innermost import innermost
 from ._model import TerrainModel
 from ._plan import plan_grid, tiles
+from ._rings import evaluate_rings
 from ._sampling import bilinear_setup, inside_extent, sample_bilinear
 
 #: Coverage below this fraction is flagged ``tc_partial``.
 COVERAGE_FLAG_BELOW = 0.99
 
 #: Stations per work unit; progress and cancel are checked between units.
-CHUNK = 32
+CHUNK = 64
 
 
 @dataclass(frozen=True, eq=False)
@@ -281,7 +282,9 @@ def terrain_correction(
             before = np.zeros((3, loc.size))
             for plan in plans:
                 for li in range(len(plan.levels)):
-                    r = evaluate_level(plan, li, bt, physics)
+                    r = evaluate_rings(plan, li, bt, physics)
+                    if r is None:
+                        r = evaluate_level(plan, li, bt, physics)
                     inner += r.inner
                     outer += r.outer
                     area += r.covered

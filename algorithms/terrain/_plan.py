@@ -217,6 +217,12 @@ class BlockTable:
     missing_table : numpy.ndarray
         Summed-area table of blocks without data (shape + 1), to tell at once
         whether a window has any.
+    stack : numpy.ndarray or None
+        Projected grids: the single-precision fields as one array of shape
+        (fields, block rows, block columns), in the order east, north, area,
+        mean and, for blocks, variance, cov_east, cov_north (the flat arrays
+        above are views of it), so that the rectangles of a ring are copied
+        at once (:mod:`._rings`). None on geographic grids.
     """
 
     x: np.ndarray
@@ -235,6 +241,7 @@ class BlockTable:
     half_diagonal: float
     data_box: tuple[int, int, int, int]
     missing_table: np.ndarray
+    stack: np.ndarray | None = None
 
 
 def block_table(grid: ElevationGrid, lvl: BlockLevel, origin: tuple[float, float] = (0.0, 0.0)) -> BlockTable:
@@ -280,18 +287,33 @@ def block_table(grid: ElevationGrid, lvl: BlockLevel, origin: tuple[float, float
     y = y.ravel()
     # Full-resolution cells have no spread or tilt: their arrays are unused.
     unused = np.zeros(0, dtype=f32)
+    fields = [area, lvl.mean]
+    if b > 1:
+        fields += [lvl.variance, lvl.col_height_cov * metric_x, lvl.row_height_cov * (-side_y / b)]
+    if grid.geographic:
+        stack = None
+        flat = [np.asarray(a, dtype=f32).ravel() for a in fields]
+        east = north = None
+    else:
+        fields = [x - origin[0], y - origin[1], *fields]
+        stack = np.empty((len(fields), n_r, n_c), dtype=f32)
+        for i, a in enumerate(fields):
+            stack[i] = np.reshape(a, (n_r, n_c))
+        east, north, *flat = (stack[i].ravel() for i in range(len(fields)))
+    flat += [unused] * (5 - len(flat))
     return BlockTable(
         x=x,
         y=y,
-        east=None if grid.geographic else (x - origin[0]).astype(f32),
-        north=None if grid.geographic else (y - origin[1]).astype(f32),
+        east=east,
+        north=north,
         origin=origin,
         missing_table=missing,
-        area=area.astype(f32),
-        mean=lvl.mean.ravel().astype(f32),
-        variance=lvl.variance.ravel().astype(f32) if b > 1 else unused,
-        cov_east=(lvl.col_height_cov * metric_x).ravel().astype(f32) if b > 1 else unused,
-        cov_north=(lvl.row_height_cov * (-side_y / b)).ravel().astype(f32) if b > 1 else unused,
+        area=flat[0],
+        mean=flat[1],
+        variance=flat[2],
+        cov_east=flat[3],
+        cov_north=flat[4],
+        stack=stack,
         side_x=side_x.astype(f32) if grid.geographic else f32(side_x),
         side_y=f32(side_y),
         has_data=has.ravel(),

@@ -1,0 +1,266 @@
+# SPDX-License-Identifier: GPL-2.0-or-later
+"""Evaluation of a level by rectangles (projected grids).
+
+The same sums as :func:`~._evaluate.evaluate_level`, computed another way.
+Each station's ring at a level is its square window minus the finer level's
+square (the hole), both clipped to where the level has data. That is at most
+four rectangles: the band above the hole, the band below it, and the parts
+left and right of it. For a batch of stations each rectangle is copied out of
+the level's field stack (:attr:`~._plan.BlockTable.stack`) for every station
+at once, as a sliding window of the largest extent in the batch; positions
+beyond a station's own extent (a block at most on each side) are masked by
+giving them no area. The column terms then run on dense (station, block)
+arrays and each station's sums are sums along one axis: no per-block masks,
+index arrays or scattered gathers, which cost several times the kernel itself
+on the masked path.
+
+A level whose windows hold mostly blocks without data (a regional DEM's
+first level, most of which lies under the fine DEM's footprint) is left to
+the masked path, which evaluates only blocks with data; so are geographic
+grids (their offsets are great-circle, computed in double precision).
+"""
+
+from __future__ import annotations
+
+import numpy as np
+from numpy.lib.stride_tricks import sliding_window_view
+
+from ._evaluate import Batch, LevelSums, Physics, column_terms, exact_cell_terms, share_inside
+from ._plan import PRISM_RATIO, GridPlan
+
+#: Below this share of blocks with data in a batch's windows, the masked
+#: path (only blocks with data) is used instead.
+MIN_DATA_SHARE = 0.6
+
+
+def ring_rectangles(plan: GridPlan, level_index: int, bt: Batch) -> list[tuple[np.ndarray, ...]]:
+    """The rectangles (absolute block rows [a0, a1), columns [b0, b1)) of each station's ring.
+
+    Parameters
+    ----------
+    plan : GridPlan
+        The grid's plan for the tile.
+    level_index : int
+        Which level.
+    bt : Batch
+        The stations.
+
+    Returns
+    -------
+    list of (a0, a1, b0, b1)
+        One to four rectangles, each as arrays of one value per station
+        (empty where ``a1 <= a0`` or ``b1 <= b0``), clipped to the level's
+        data box; together they tile the window minus the finer level's
+        square without overlap.
+
+    Examples
+    --------
+    >>> from ._grid import ElevationGrid
+    >>> from ._plan import plan_grid
+    >>> g = ElevationGrid.from_array(np.zeros((400, 400)), 0, 12000, 30, 30)
+    >>> x = np.array([6000.0]); p = plan_grid(g, x, x, 2000.0, True, None, None)
+    >>> bt = Batch(np.array([0]), x, x, x * 0, np.array([199]), np.array([199]))
+    >>> rects = ring_rectangles(p, 1, bt)
+    >>> sum(int((a1 - a0)[0] * (b1 - b0)[0]) for a0, a1, b0, b1 in rects)
+    2187
+    """
+    k = plan.levels[level_index][0]
+    b = 2**k
+    box_r0, box_r1, box_c0, box_c1 = plan.tables[level_index].data_box
+    r_lo, r_hi, c_lo, c_hi = (a[bt.local] // b for a in plan.windows[level_index])
+    r_lo = np.clip(r_lo, box_r0, box_r1)
+    r_hi = np.maximum(np.clip(r_hi, box_r0, box_r1), r_lo)
+    c_lo = np.clip(c_lo, box_c0, box_c1)
+    c_hi = np.maximum(np.clip(c_hi, box_c0, box_c1), c_lo)
+    if level_index == 0:
+        return [(r_lo, r_hi, c_lo, c_hi)]
+    p_lo, p_hi, q_lo, q_hi = (a[bt.local] // b for a in plan.windows[level_index - 1])
+    p_lo = np.clip(p_lo, r_lo, r_hi)
+    p_hi = np.clip(p_hi, p_lo, r_hi)
+    q_lo = np.clip(q_lo, c_lo, c_hi)
+    q_hi = np.clip(q_hi, q_lo, c_hi)
+    return [(r_lo, p_lo, c_lo, c_hi), (p_hi, r_hi, c_lo, c_hi), (p_lo, p_hi, c_lo, q_lo), (p_lo, p_hi, q_hi, c_hi)]
+
+
+def data_share(plan: GridPlan, level_index: int, rects: list[tuple[np.ndarray, ...]]) -> float:
+    """Share (0-1) of the blocks of the rectangles that have data (1 when there are none).
+
+    Examples
+    --------
+    >>> from ._grid import ElevationGrid
+    >>> from ._plan import plan_grid
+    >>> g = ElevationGrid.from_array(np.zeros((400, 400)), 0, 12000, 30, 30)
+    >>> x = np.array([6000.0]); p = plan_grid(g, x, x, 2000.0, True, None, None)
+    >>> bt = Batch(np.array([0]), x, x, x * 0, np.array([199]), np.array([199]))
+    >>> data_share(p, 1, ring_rectangles(p, 1, bt))
+    1.0
+    """
+    lvl = plan.stats[level_index]
+    sat = plan.tables[level_index].missing_table
+    total = 0
+    missing = 0
+    for a0, a1, b0, b1 in rects:
+        r0, r1 = a0 - lvl.block_row0, a1 - lvl.block_row0
+        c0, c1 = b0 - lvl.block_col0, b1 - lvl.block_col0
+        total += int(np.sum((r1 - r0) * (c1 - c0)))
+        missing += int(np.sum(sat[r1, c1] - sat[r0, c1] - sat[r1, c0] + sat[r0, c0]))
+    return 1.0 - missing / total if total else 1.0
+
+
+def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics) -> LevelSums | None:
+    """:func:`~._evaluate.evaluate_level` by rectangles, or None where the masked path suits better.
+
+    Parameters
+    ----------
+    plan : GridPlan
+        The grid's plan for the tile.
+    level_index : int
+        Which level of the plan.
+    bt : Batch
+        The stations.
+    physics : Physics
+        Density, water, radii, curvature.
+
+    Returns
+    -------
+    LevelSums or None
+        The same quantities as :func:`~._evaluate.evaluate_level` (equal up
+        to single-precision rounding); None for geographic grids and for
+        windows where fewer than ``MIN_DATA_SHARE`` of the blocks have data.
+
+    Examples
+    --------
+    >>> from ._evaluate import evaluate_level
+    >>> from ._grid import ElevationGrid
+    >>> from ._plan import plan_grid
+    >>> rng = np.random.default_rng(0)
+    >>> g = ElevationGrid.from_array(rng.uniform(0, 200, (400, 400)), 0, 12000, 30, 30)
+    >>> x = np.array([6000.0, 6400.0]); p = plan_grid(g, x, x, 4000.0, True, None, None)
+    >>> bt = Batch(np.arange(2), x, x, x * 0 + 100, np.array([199, 212]), np.array([199, 212]))
+    >>> ph = Physics(2670.0, None, 1000.0, 4000.0, True)
+    >>> a, b = evaluate_rings(p, 2, bt, ph), evaluate_level(p, 2, bt, ph)
+    >>> bool(np.allclose(a.outer, b.outer, rtol=1e-5) and np.allclose(a.covered, b.covered, rtol=1e-5))
+    True
+    """
+    tab = plan.tables[level_index]
+    stack = tab.stack
+    if stack is None:
+        return None
+    k = plan.levels[level_index][0]
+    n_st = bt.local.size
+    rects = [r for r in ring_rectangles(plan, level_index, bt) if np.any((r[1] > r[0]) & (r[3] > r[2]))]
+    if not rects:
+        return LevelSums.empty(n_st)
+    if data_share(plan, level_index, rects) < MIN_DATA_SHARE:
+        return None
+    lvl = plan.stats[level_index]
+    n_fields, n_br, n_bc = stack.shape
+    fine_cells = plan.is_fine and k == 0
+    parts = []
+    for a0, a1, b0, b1 in rects:
+        n_r = int(np.max(a1 - a0))
+        n_c = int(np.max(b1 - b0))
+        if n_r <= 0 or n_c <= 0:
+            continue
+        # Anchors so that the largest extent fits the stored level (the data
+        # box lies inside it); positions outside a station's own extent are masked.
+        ar = np.minimum(a0, lvl.block_row0 + n_br - n_r)
+        ac = np.minimum(b0, lvl.block_col0 + n_bc - n_c)
+        rows = ar[:, None] + np.arange(n_r)
+        cols = ac[:, None] + np.arange(n_c)
+        ok_r = (rows >= a0[:, None]) & (rows < a1[:, None])
+        ok_c = (cols >= b0[:, None]) & (cols < b1[:, None])
+        mask = ok_r[:, :, None] & ok_c[:, None, :]
+        if fine_cells:
+            # The four cells around the station belong to the innermost model.
+            near_r = (rows == bt.cell_row[:, None]) | (rows == bt.cell_row[:, None] + 1)
+            near_c = (cols == bt.cell_col[:, None]) | (cols == bt.cell_col[:, None] + 1)
+            mask &= ~(near_r[:, :, None] & near_c[:, None, :])
+        view = sliding_window_view(stack, (n_r, n_c), axis=(1, 2))
+        block = view[:, ar - lvl.block_row0, ac - lvl.block_col0]
+        parts.append((block.reshape(n_fields, n_st, n_r * n_c), mask.reshape(n_st, n_r * n_c), ar, ac, n_c))
+    if len(parts) == 1:
+        fields, mask = parts[0][0], parts[0][1]
+    else:
+        fields = np.concatenate([p[0] for p in parts], axis=2)
+        mask = np.concatenate([p[1] for p in parts], axis=1)
+    f32 = np.float32
+    east, north, area, mean = fields[0], fields[1], fields[2], fields[3]
+    area = area * mask
+    dx = east - (bt.x - tab.origin[0]).astype(f32)[:, None]
+    dy = north - (bt.y - tab.origin[1]).astype(f32)[:, None]
+    s2 = np.maximum(dx * dx + dy * dy, f32(1e-6))
+    relief = mean - bt.height.astype(f32)[:, None]
+    side = tab.side_x
+    half = tab.half_diagonal
+    outer = physics.outer_radius
+    inner_r = physics.inner_radius
+
+    def sums(values: np.ndarray) -> np.ndarray:
+        return values.sum(axis=1, dtype=np.float64)
+
+    lo2, hi2 = float(s2.min()), float(s2.max())
+    rim = None
+    if hi2 > (outer - half) ** 2:
+        # Blocks at the rim count by the part of them inside the outer circle;
+        # full-resolution cells by their centre (as on the masked path).
+        share = share_inside(np.sqrt(s2), dx, dy, side, tab.side_y, outer).astype(f32)
+        covered = sums(area * share)
+        rim = (s2 <= f32(outer * outer)).astype(f32) if k == 0 else share
+    else:
+        covered = sums(area)
+    heights = None
+    if physics.water_density is not None:
+        heights = np.broadcast_to(bt.height.astype(f32)[:, None], s2.shape).ravel()
+    variance = fields[4].ravel() if k > 0 else 0.0
+    cov = (fields[5].ravel(), fields[6].ravel()) if k > 0 else (None, None)
+    tc = column_terms(
+        dx.ravel(), dy.ravel(), s2.ravel(), relief.ravel(), mean.ravel(), area.ravel(), side, tab.side_y,
+        variance, heights, physics, cov,
+    ).reshape(s2.shape)
+    if k == 0:
+        _exact_cells(plan, bt, parts, s2, area, tc, physics)
+    if rim is not None:
+        tc *= rim
+        area = area * rim
+    total = sums(tc)
+    if lo2 >= (inner_r + half) ** 2:
+        inner = np.zeros(n_st)
+        covered_inner = np.zeros(n_st)
+    elif inner_r > half and hi2 <= (inner_r - half) ** 2:
+        inner = total.copy()
+        covered_inner = covered
+    else:
+        share = share_inside(np.sqrt(s2), dx, dy, side, tab.side_y, inner_r).astype(f32)
+        inner = sums(tc * share)
+        in_area = fields[2] * mask if rim is not None else area
+        covered_inner = sums(in_area * share)
+    variance = fields[4] if k > 0 else 0.0
+    weighted = area * relief
+    return LevelSums(
+        inner=inner,
+        outer=total - inner,
+        covered=covered,
+        covered_inner=covered_inner,
+        relief_area=sums(area),
+        relief_sum=sums(weighted),
+        relief_square=sums(weighted * relief + area * variance) if k > 0 else sums(weighted * relief),
+    )
+
+
+def _exact_cells(plan: GridPlan, bt: Batch, parts, s2, area, tc, physics: Physics) -> None:
+    """Replace (in ``tc``) the column terms of level-0 cells with data near the stations by exact prisms."""
+    tab = plan.tables[0]
+    lvl = plan.stats[0]
+    side = float(max(tab.side_x, tab.side_y))
+    st, pos = np.nonzero((s2 < np.float32((PRISM_RATIO * side) ** 2)) & (area > 0))
+    if st.size == 0:
+        return
+    _, _, ar, ac, n_c = parts[0]
+    rows = ar[st] + pos // n_c - lvl.block_row0
+    cols = ac[st] + pos % n_c - lvl.block_col0
+    flat = rows * lvl.weight.shape[1] + cols
+    tc[st, pos] = exact_cell_terms(plan, bt, st, flat, tc[st, pos], physics)
+
+
+__all__ = ["MIN_DATA_SHARE", "data_share", "evaluate_rings", "ring_rectangles"]
