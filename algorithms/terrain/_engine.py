@@ -41,7 +41,7 @@ from ._sampling import bilinear_setup, inside_extent, sample_bilinear
 COVERAGE_FLAG_BELOW = 0.99
 
 #: Stations per work unit; progress and cancel are checked between units.
-CHUNK = 64
+CHUNK = 128
 
 
 @dataclass(frozen=True, eq=False)

@@ -25,8 +25,11 @@ from __future__ import annotations
 import numpy as np
 from numpy.lib.stride_tricks import sliding_window_view
 
-from ._evaluate import Batch, LevelSums, Physics, column_terms, exact_cell_terms, share_inside
+from ..constants import MEAN_EARTH_RADIUS
+from ._evaluate import Batch, LevelSums, Physics, exact_cell_terms, share_inside
+from ._kernels import column_kernel, column_scale, column_terrain_effect
 from ._plan import PRISM_RATIO, GridPlan
+from ._sampling import station_cells
 
 #: Below this share of blocks with data in a batch's windows, the masked
 #: path (only blocks with data) is used instead.
@@ -176,8 +179,7 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
             near_r = (rows == bt.cell_row[:, None]) | (rows == bt.cell_row[:, None] + 1)
             near_c = (cols == bt.cell_col[:, None]) | (cols == bt.cell_col[:, None] + 1)
             mask &= ~(near_r[:, :, None] & near_c[:, None, :])
-        view = sliding_window_view(stack, (n_r, n_c), axis=(1, 2))
-        block = view[:, ar - lvl.block_row0, ac - lvl.block_col0]
+        block = windows(stack, n_r, n_c)[:, ar - lvl.block_row0, ac - lvl.block_col0]
         parts.append((block.reshape(n_fields, n_st, n_r * n_c), mask.reshape(n_st, n_r * n_c), ar, ac, n_c))
     if len(parts) == 1:
         fields, mask = parts[0][0], parts[0][1]
@@ -197,6 +199,8 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     inner_r = physics.inner_radius
 
     def sums(values: np.ndarray) -> np.ndarray:
+        # Accumulated in double precision, so that masked (zero) positions,
+        # which depend on the batch, do not change a station's sums.
         return values.sum(axis=1, dtype=np.float64)
 
     lo2, hi2 = float(s2.min()), float(s2.max())
@@ -209,21 +213,27 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
         rim = (s2 <= f32(outer * outer)).astype(f32) if k == 0 else share
     else:
         covered = sums(area)
-    heights = None
+    variance = fields[4] if k > 0 else 0.0
+    cov = (fields[5], fields[6]) if k > 0 else (None, None)
+    # The kernel's values are summed first and scaled once per station.
+    unit = physics.density * column_scale()
+    drop = s2 * f32(0.5 / MEAN_EARTH_RADIUS) if physics.curvature else 0.0
+    tc = column_kernel(s2, dx, dy, relief, drop, side, tab.side_y, area, variance, *cov)
     if physics.water_density is not None:
-        heights = np.broadcast_to(bt.height.astype(f32)[:, None], s2.shape).ravel()
-    variance = fields[4].ravel() if k > 0 else 0.0
-    cov = (fields[5].ravel(), fields[6].ravel()) if k > 0 else (None, None)
-    tc = column_terms(
-        dx.ravel(), dy.ravel(), s2.ravel(), relief.ravel(), mean.ravel(), area.ravel(), side, tab.side_y,
-        variance, heights, physics, cov,
-    ).reshape(s2.shape)
+        # Water below height 0 replaces part of the missing rock (as in column_terms).
+        st, pos = np.nonzero((mean < 0.0) & (area > 0.0))
+        if st.size:
+            d = drop[st, pos] if np.ndim(drop) else drop
+            v = (dx[st, pos], dy[st, pos])
+            top = column_terrain_effect(*v, relief[st, pos], d, side, tab.side_y, area[st, pos])
+            bottom = column_terrain_effect(*v, -bt.height.astype(f32)[st], d, side, tab.side_y, area[st, pos])
+            tc[st, pos] -= f32(physics.water_density / physics.density) * (top - bottom)
     if k == 0:
-        _exact_cells(plan, bt, parts, s2, area, tc, physics)
+        _exact_cells(plan, bt, parts, s2, area, tc, physics, unit)
     if rim is not None:
         tc *= rim
         area = area * rim
-    total = sums(tc)
+    total = sums(tc) * unit
     if lo2 >= (inner_r + half) ** 2:
         inner = np.zeros(n_st)
         covered_inner = np.zeros(n_st)
@@ -232,10 +242,9 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
         covered_inner = covered
     else:
         share = share_inside(np.sqrt(s2), dx, dy, side, tab.side_y, inner_r).astype(f32)
-        inner = sums(tc * share)
+        inner = sums(tc * share) * unit
         in_area = fields[2] * mask if rim is not None else area
         covered_inner = sums(in_area * share)
-    variance = fields[4] if k > 0 else 0.0
     weighted = area * relief
     return LevelSums(
         inner=inner,
@@ -248,19 +257,51 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     )
 
 
-def _exact_cells(plan: GridPlan, bt: Batch, parts, s2, area, tc, physics: Physics) -> None:
-    """Replace (in ``tc``) the column terms of level-0 cells with data near the stations by exact prisms."""
+def windows(stack: np.ndarray, n_r: int, n_c: int) -> np.ndarray:
+    """Read-only view of every ``n_r`` x ``n_c`` window over the last two axes of a C-contiguous array.
+
+    The same as ``sliding_window_view(stack, (n_r, n_c), axis=(1, 2))``, built
+    without its checks (it is called for every rectangle of every batch).
+
+    Examples
+    --------
+    >>> a = np.arange(24.0).reshape(2, 3, 4)
+    >>> bool(np.array_equal(windows(a, 2, 3), sliding_window_view(a, (2, 3), axis=(1, 2))))
+    True
+    """
+    *lead, n_rows, n_cols = stack.shape
+    *s_lead, s_r, s_c = stack.strides
+    view = np.ndarray((*lead, n_rows - n_r + 1, n_cols - n_c + 1, n_r, n_c), stack.dtype, stack,
+                      strides=(*s_lead, s_r, s_c, s_r, s_c))
+    view.flags.writeable = False
+    return view
+
+
+def _exact_cells(plan: GridPlan, bt: Batch, parts, s2, area, tc, physics: Physics, unit: float) -> None:
+    """Replace (in ``tc``, in units of ``unit`` mGal) the column terms of level-0 cells with data near
+    the stations by exact prisms."""
     tab = plan.tables[0]
     lvl = plan.stats[0]
+    _, _, ar, ac, n_c = parts[0]
+    n_st, width = s2.shape
+    n_r = width // n_c
     side = float(max(tab.side_x, tab.side_y))
-    st, pos = np.nonzero((s2 < np.float32((PRISM_RATIO * side) ** 2)) & (area > 0))
+    # Only the cells within PRISM_RATIO sides can be near: a small square around each station.
+    reach = int(np.ceil(PRISM_RATIO * side / float(min(tab.side_x, tab.side_y)))) + 2
+    w_r, w_c = min(2 * reach + 2, n_r), min(2 * reach + 2, n_c)
+    row, col = station_cells(plan.grid, bt.x, bt.y)
+    rs = np.clip(row - reach - ar, 0, n_r - w_r)
+    cs = np.clip(col - reach - ac, 0, n_c - w_c)
+    both = np.stack([s2.reshape(n_st, n_r, n_c), area.reshape(n_st, n_r, n_c)])
+    sub = windows(both, w_r, w_c)[:, np.arange(n_st), rs, cs]
+    st, i, j = np.nonzero((sub[0] < np.float32((PRISM_RATIO * side) ** 2)) & (sub[1] > 0))
     if st.size == 0:
         return
-    _, _, ar, ac, n_c = parts[0]
-    rows = ar[st] + pos // n_c - lvl.block_row0
-    cols = ac[st] + pos % n_c - lvl.block_col0
+    pos = (rs[st] + i) * n_c + cs[st] + j
+    rows = ar[st] + rs[st] + i - lvl.block_row0
+    cols = ac[st] + cs[st] + j - lvl.block_col0
     flat = rows * lvl.weight.shape[1] + cols
-    tc[st, pos] = exact_cell_terms(plan, bt, st, flat, tc[st, pos], physics)
+    tc[st, pos] = exact_cell_terms(plan, bt, st, flat, tc[st, pos] * unit, physics) / unit
 
 
-__all__ = ["MIN_DATA_SHARE", "data_share", "evaluate_rings", "ring_rectangles"]
+__all__ = ["MIN_DATA_SHARE", "data_share", "evaluate_rings", "ring_rectangles", "windows"]
