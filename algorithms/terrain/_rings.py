@@ -31,6 +31,9 @@ from ._kernels import column_kernel, column_scale, column_terrain_effect
 from ._plan import PRISM_RATIO, GridPlan
 from ._sampling import station_cells
 
+#: Pairs (station, block) per call of the column kernel (see _kernel_by_slices).
+KERNEL_SLICE = 32_768
+
 #: Below this share of blocks with data in a batch's windows, the masked
 #: path (only blocks with data) is used instead.
 MIN_DATA_SHARE = 0.6
@@ -218,7 +221,7 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     # The kernel's values are summed first and scaled once per station.
     unit = physics.density * column_scale()
     drop = s2 * f32(0.5 / MEAN_EARTH_RADIUS) if physics.curvature else 0.0
-    tc = column_kernel(s2, dx, dy, relief, drop, side, tab.side_y, area, variance, *cov)
+    tc = _kernel_by_slices(s2, dx, dy, relief, drop, side, tab.side_y, area, variance, cov)
     if physics.water_density is not None:
         # Water below height 0 replaces part of the missing rock (as in column_terms).
         st, pos = np.nonzero((mean < 0.0) & (area > 0.0))
@@ -255,6 +258,27 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
         relief_sum=sums(weighted),
         relief_square=sums(weighted * relief + area * variance) if k > 0 else sums(weighted * relief),
     )
+
+
+def _kernel_by_slices(s2, dx, dy, relief, drop, side_x, side_y, area, variance, cov) -> np.ndarray:
+    """:func:`~._kernels.column_kernel` over slices of about ``KERNEL_SLICE`` pairs (station rows).
+
+    The kernel makes some twenty temporaries of its arguments' size; slices
+    small enough for them to stay in the core's cache run it markedly faster
+    than one call over a whole batch.
+    """
+    n_st, width = s2.shape
+    step = max(1, KERNEL_SLICE // max(width, 1))
+    if step >= n_st:
+        return column_kernel(s2, dx, dy, relief, drop, side_x, side_y, area, variance, *cov)
+    out = np.empty_like(s2)
+    for i in range(0, n_st, step):
+        sl = slice(i, i + step)
+        out[sl] = column_kernel(
+            s2[sl], dx[sl], dy[sl], relief[sl], drop[sl] if np.ndim(drop) else drop, side_x, side_y, area[sl],
+            variance[sl] if np.ndim(variance) else variance, *(c[sl] if c is not None else None for c in cov),
+        )
+    return out
 
 
 def windows(stack: np.ndarray, n_r: int, n_c: int) -> np.ndarray:
