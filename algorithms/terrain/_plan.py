@@ -423,13 +423,23 @@ def plan_grid(
         ranges.append((b, cr0, cc0, cr1, cc1))
     # When the union of all windows is small, read the raster once at full
     # resolution and build every coarser level by merging blocks.
-    level0 = ranges[0]
     b0, cr0, cc0, cr1, cc1 = ranges[0]
     union = [min(cr0, *(r[1] * r[0] for r in ranges)), min(cc0, *(r[2] * r[0] for r in ranges)),
              max(cr1, *(r[3] * r[0] for r in ranges)), max(cc1, *(r[4] * r[0] for r in ranges))]
     union = [max(union[0], -1), max(union[1], -1), min(union[2], grid.n_rows + 1), min(union[3], grid.n_cols + 1)]
+    own = list(ranges)
     if b0 == 1 and (union[2] - union[0]) * (union[3] - union[1]) <= SINGLE_READ_CELLS:
         ranges[0] = (1, *union)
+        # Each level is built over its own window and every coarser level's
+        # (all inside the union read above), so that each merges from the next
+        # finer one, four times smaller, instead of from the full-resolution cells.
+        for idx in range(len(ranges) - 2, 0, -1):
+            b, r0, c0, r1, c1 = ranges[idx]
+            m = ranges[idx + 1][0] // b
+            _, s0, t0, s1, t1 = ranges[idx + 1]
+            top_r, top_c = -(-grid.n_rows // b) + 1, -(-grid.n_cols // b) + 1
+            ranges[idx] = (b, max(min(r0, s0 * m), -1), max(min(c0, t0 * m), -1),
+                           min(max(r1, s1 * m), top_r), min(max(c1, t1 * m), top_c))
     stats: list[BlockLevel] = []
     for idx, (b, cr0, cc0, cr1, cc1) in enumerate(ranges):
         # From a finer level already built when it holds the window (no
@@ -447,14 +457,17 @@ def plan_grid(
             raise TerrainCancelled(msg)
         if level_done is not None:
             level_done((idx + 1) / len(levels))
-    if ranges[0] != level0:
-        # Level 0 was read over every window to build the others; the stations
-        # need only its own window.
-        _, r0, c0, r1, c1 = level0
-        full = stats[0]
-        sl = (slice(r0 - full.block_row0, r1 - full.block_row0), slice(c0 - full.block_col0, c1 - full.block_col0))
-        stats[0] = BlockLevel(1, r0, c0, *(a[sl] for a in (full.weight, full.mean, full.variance, full.row_offset,
-                                                           full.col_offset, full.row_height_cov, full.col_height_cov)))
+    for idx, (built, wanted) in enumerate(zip(ranges, own)):
+        if built != wanted:
+            # Built over a larger window to build the coarser levels; the
+            # stations need only its own window.
+            b, r0, c0, r1, c1 = wanted
+            full = stats[idx]
+            sl = (slice(r0 - full.block_row0, r1 - full.block_row0),
+                  slice(c0 - full.block_col0, c1 - full.block_col0))
+            stats[idx] = BlockLevel(b, r0, c0, *(a[sl] for a in (
+                full.weight, full.mean, full.variance, full.row_offset, full.col_offset, full.row_height_cov,
+                full.col_height_cov)))
     origin = tile_origin(grid, x, y) if not grid.geographic else (0.0, 0.0)
     return GridPlan(grid, levels, windows, stats, [block_table(grid, lvl, origin) for lvl in stats], is_fine, exclude)
 
