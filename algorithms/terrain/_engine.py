@@ -35,7 +35,7 @@ from ._innermost import innermost
 from ._model import TerrainModel
 from ._plan import plan_grid, tiles
 from ._rings import evaluate_rings
-from ._sampling import bilinear_setup, inside_extent, sample_bilinear
+from ._sampling import bilinear_setup, inside_extent, sample_bilinear, station_cells
 
 #: Coverage below this fraction is flagged ``tc_partial``.
 COVERAGE_FLAG_BELOW = 0.99
@@ -81,6 +81,27 @@ class TerrainResult:
     coverage_inner: np.ndarray
     truncation: np.ndarray
     flags: list[list[str]]
+
+
+def z_order(grid: ElevationGrid, x: np.ndarray, y: np.ndarray, cells: int = 16) -> np.ndarray:
+    """Morton (Z-order) key of points on a lattice of ``cells`` x ``cells`` raster cells.
+
+    Sorting by it keeps points that are near each other mostly near in the order.
+
+    Examples
+    --------
+    >>> g = ElevationGrid.from_array(np.zeros((64, 64)), 0, 640, 10, 10)
+    >>> z_order(g, np.array([5.0, 635.0, 5.0, 635.0]), np.array([635.0, 635.0, 5.0, 5.0]), 32).tolist()
+    [0, 1, 2, 3]
+    """
+    row, col = station_cells(grid, x, y)
+    keys = np.zeros(row.shape, dtype=np.int64)
+    r = np.clip(row // cells - int(np.min(row // cells, initial=0)), 0, 2**20 - 1)
+    c = np.clip(col // cells - int(np.min(col // cells, initial=0)), 0, 2**20 - 1)
+    for bit in range(20):
+        keys |= ((c >> bit) & 1) << (2 * bit)
+        keys |= ((r >> bit) & 1) << (2 * bit + 1)
+    return keys
 
 
 def terrain_correction(
@@ -208,7 +229,9 @@ def terrain_correction(
     todo = inside & ~no_height
     exclude = (fine.x_origin, fine.x_end, fine.y_end, fine.y_origin)
 
-    groups = tiles(fine, xs, ys, todo)
+    # Stations of a tile in Z order, so that a batch is a compact group: its
+    # rings are clipped alike at the rasters' edges and read nearby blocks.
+    groups = [t[np.argsort(z_order(fine, xs[t], ys[t]), kind="stable")] for t in tiles(fine, xs, ys, todo)]
     total_work = max(int(todo.sum()), 1)
     # Building the block levels of a tile counts as a tenth of its stations.
     setup_share = 0.1

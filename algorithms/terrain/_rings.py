@@ -32,7 +32,7 @@ from ._plan import PRISM_RATIO, GridPlan
 from ._sampling import station_cells
 
 #: Pairs (station, block) per call of the column kernel (see _kernel_by_slices).
-KERNEL_SLICE = 32_768
+KERNEL_SLICE = 65_536
 
 #: Below this share of blocks with data in a batch's windows, the masked
 #: path (only blocks with data) is used instead.
