@@ -23,7 +23,6 @@ grids (their offsets are great-circle, computed in double precision).
 from __future__ import annotations
 
 import numpy as np
-from numpy.lib.stride_tricks import sliding_window_view
 
 from ..constants import MEAN_EARTH_RADIUS
 from ._evaluate import Batch, LevelSums, Physics, exact_cell_terms, share_inside
@@ -289,6 +288,7 @@ def windows(stack: np.ndarray, n_r: int, n_c: int) -> np.ndarray:
 
     Examples
     --------
+    >>> from numpy.lib.stride_tricks import sliding_window_view
     >>> a = np.arange(24.0).reshape(2, 3, 4)
     >>> bool(np.array_equal(windows(a, 2, 3), sliding_window_view(a, (2, 3), axis=(1, 2))))
     True
@@ -302,8 +302,7 @@ def windows(stack: np.ndarray, n_r: int, n_c: int) -> np.ndarray:
 
 
 def _exact_cells(plan: GridPlan, bt: Batch, parts, s2, area, tc, physics: Physics, unit: float) -> None:
-    """Replace (in ``tc``, in units of ``unit`` mGal) the column terms of level-0 cells with data near
-    the stations by exact prisms."""
+    """Replace (in ``tc``, in units of ``unit`` mGal) near level-0 cells' column terms by exact prisms."""
     tab = plan.tables[0]
     lvl = plan.stats[0]
     _, _, ar, ac, n_c = parts[0]
