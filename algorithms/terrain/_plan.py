@@ -217,6 +217,10 @@ class BlockTable:
     missing_table : numpy.ndarray
         Summed-area table of blocks without data (shape + 1), to tell at once
         whether a window has any.
+    offset_table : numpy.ndarray or None
+        Summed-area table (shape + 1) of blocks whose centroid is off their
+        centre (part without data or excluded), so that a window without any
+        can take its offsets from the block lattice. None on geographic grids.
     stack : numpy.ndarray or None
         Projected grids: the single-precision fields as one array of shape
         (fields, block rows, block columns), in the order east, north, area,
@@ -241,6 +245,7 @@ class BlockTable:
     half_diagonal: float
     data_box: tuple[int, int, int, int]
     missing_table: np.ndarray
+    offset_table: np.ndarray | None = None
     stack: np.ndarray | None = None
 
 
@@ -290,6 +295,7 @@ def block_table(grid: ElevationGrid, lvl: BlockLevel, origin: tuple[float, float
     fields = [area, lvl.mean]
     if b > 1:
         fields += [lvl.variance, lvl.col_height_cov * metric_x, lvl.row_height_cov * (-side_y / b)]
+    offset_table = None
     if grid.geographic:
         stack = None
         flat = [np.asarray(a, dtype=f32).ravel() for a in fields]
@@ -300,6 +306,9 @@ def block_table(grid: ElevationGrid, lvl: BlockLevel, origin: tuple[float, float
         for i, a in enumerate(fields):
             stack[i] = np.reshape(a, (n_r, n_c))
         east, north, *flat = (stack[i].ravel() for i in range(len(fields)))
+        off = (lvl.row_offset != 0) | (lvl.col_offset != 0)
+        offset_table = np.zeros((n_r + 1, n_c + 1), dtype=np.int32)
+        np.cumsum(np.cumsum(off, axis=0, dtype=np.int32), axis=1, out=offset_table[1:, 1:])
     flat += [unused] * (5 - len(flat))
     return BlockTable(
         x=x,
@@ -314,6 +323,7 @@ def block_table(grid: ElevationGrid, lvl: BlockLevel, origin: tuple[float, float
         cov_east=flat[3],
         cov_north=flat[4],
         stack=stack,
+        offset_table=offset_table,
         side_x=side_x.astype(f32) if grid.geographic else f32(side_x),
         side_y=f32(side_y),
         has_data=has.ravel(),

@@ -151,50 +151,74 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     stack = tab.stack
     if stack is None:
         return None
-    k = plan.levels[level_index][0]
     n_st = bt.local.size
     rects = [r for r in ring_rectangles(plan, level_index, bt) if np.any((r[1] > r[0]) & (r[3] > r[2]))]
     if not rects:
         return LevelSums.empty(n_st)
     if data_share(plan, level_index, rects) < MIN_DATA_SHARE:
         return None
+    sums = np.zeros((7, n_st))
+    for rect in rects:
+        sums += _rectangle_sums(plan, level_index, bt, physics, rect)
+    return LevelSums(*sums)
+
+
+def _rectangle_sums(plan: GridPlan, level_index: int, bt: Batch, physics: Physics, rect) -> np.ndarray:
+    """The seven per-station sums of :class:`LevelSums` over one rectangle of each station's ring."""
+    a0, a1, b0, b1 = rect
+    k = plan.levels[level_index][0]
+    b = 2**k
+    grid = plan.grid
+    tab = plan.tables[level_index]
     lvl = plan.stats[level_index]
-    n_fields, n_br, n_bc = stack.shape
-    fine_cells = plan.is_fine and k == 0
-    parts = []
-    for a0, a1, b0, b1 in rects:
-        n_r = int(np.max(a1 - a0))
-        n_c = int(np.max(b1 - b0))
-        if n_r <= 0 or n_c <= 0:
-            continue
-        # Anchors so that the largest extent fits the stored level (the data
-        # box lies inside it); positions outside a station's own extent are masked.
-        ar = np.minimum(a0, lvl.block_row0 + n_br - n_r)
-        ac = np.minimum(b0, lvl.block_col0 + n_bc - n_c)
-        rows = ar[:, None] + np.arange(n_r)
-        cols = ac[:, None] + np.arange(n_c)
-        ok_r = (rows >= a0[:, None]) & (rows < a1[:, None])
-        ok_c = (cols >= b0[:, None]) & (cols < b1[:, None])
-        mask = ok_r[:, :, None] & ok_c[:, None, :]
-        if fine_cells:
-            # The four cells around the station belong to the innermost model.
-            near_r = (rows == bt.cell_row[:, None]) | (rows == bt.cell_row[:, None] + 1)
-            near_c = (cols == bt.cell_col[:, None]) | (cols == bt.cell_col[:, None] + 1)
-            mask &= ~(near_r[:, :, None] & near_c[:, None, :])
-        block = windows(stack, n_r, n_c)[:, ar - lvl.block_row0, ac - lvl.block_col0]
-        parts.append((block.reshape(n_fields, n_st, n_r * n_c), mask.reshape(n_st, n_r * n_c), ar, ac, n_c))
-    if len(parts) == 1:
-        fields, mask = parts[0][0], parts[0][1]
-    else:
-        fields = np.concatenate([p[0] for p in parts], axis=2)
-        mask = np.concatenate([p[1] for p in parts], axis=1)
+    n_st = bt.local.size
+    _, n_br, n_bc = tab.stack.shape
+    n_r = int(np.max(a1 - a0))
+    n_c = int(np.max(b1 - b0))
+    out = np.zeros((7, n_st))
+    if n_r <= 0 or n_c <= 0:
+        return out
     f32 = np.float32
-    east, north, area, mean = fields[0], fields[1], fields[2], fields[3]
-    area = area * mask
-    dx = east - (bt.x - tab.origin[0]).astype(f32)[:, None]
-    dy = north - (bt.y - tab.origin[1]).astype(f32)[:, None]
+    # Anchors so that the largest extent fits the stored level (the data box
+    # lies inside it); positions outside a station's own extent get no area.
+    ar = np.minimum(a0, lvl.block_row0 + n_br - n_r)
+    ac = np.minimum(b0, lvl.block_col0 + n_bc - n_c)
+    rows = ar[:, None] + np.arange(n_r)
+    cols = ac[:, None] + np.arange(n_c)
+    ok_r = (rows >= a0[:, None]) & (rows < a1[:, None])
+    ok_c = (cols >= b0[:, None]) & (cols < b1[:, None])
+    mask = ok_r[:, :, None] & ok_c[:, None, :]
+    if plan.is_fine and k == 0:
+        # The four cells around the station belong to the innermost model.
+        near_r = (rows == bt.cell_row[:, None]) | (rows == bt.cell_row[:, None] + 1)
+        near_c = (cols == bt.cell_col[:, None]) | (cols == bt.cell_col[:, None] + 1)
+        mask &= ~(near_r[:, :, None] & near_c[:, None, :])
+    r_rel, c_rel = ar - lvl.block_row0, ac - lvl.block_col0
+    sx = (bt.x - tab.origin[0]).astype(f32)
+    sy = (bt.y - tab.origin[1]).astype(f32)
+    sat = tab.offset_table
+    q0, q1, p0, p1 = a0 - lvl.block_row0, a1 - lvl.block_row0, b0 - lvl.block_col0, b1 - lvl.block_col0
+    if np.any(sat[q1, p1] - sat[q0, p1] - sat[q1, p0] + sat[q0, p0]):
+        # Some block has its centroid off its centre: offsets from the stack.
+        fields = windows(tab.stack, n_r, n_c)[:, r_rel, c_rel]
+        dx = fields[0] - sx[:, None, None]
+        dy = fields[1] - sy[:, None, None]
+        fields = fields[2:]
+    else:
+        # Block centres on the lattice: offsets along one axis each, the
+        # same values as the stack's (same operations, see block_table).
+        centre = (b - 1) / 2.0
+        east = (grid.x_origin + (cols * b + centre + 0.5) * grid.cell_x - tab.origin[0]).astype(f32)
+        north = (grid.y_origin - (rows * b + centre + 0.5) * grid.cell_y - tab.origin[1]).astype(f32)
+        dx = (east - sx[:, None])[:, None, :]
+        dy = (north - sy[:, None])[:, :, None]
+        fields = windows(tab.stack[2:], n_r, n_c)[:, r_rel, c_rel]
+    area = fields[0] * mask
+    mean = fields[1]
+    variance = fields[2] if k > 0 else 0.0
+    cov = (fields[3], fields[4]) if k > 0 else (None, None)
     s2 = np.maximum(dx * dx + dy * dy, f32(1e-6))
-    relief = mean - bt.height.astype(f32)[:, None]
+    relief = mean - bt.height.astype(f32)[:, None, None]
     side = tab.side_x
     half = tab.half_diagonal
     outer = physics.outer_radius
@@ -203,7 +227,7 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     def sums(values: np.ndarray) -> np.ndarray:
         # Accumulated in double precision, so that masked (zero) positions,
         # which depend on the batch, do not change a station's sums.
-        return values.sum(axis=1, dtype=np.float64)
+        return values.reshape(n_st, -1).sum(axis=1, dtype=np.float64)
 
     lo2, hi2 = float(s2.min()), float(s2.max())
     rim = None
@@ -211,52 +235,46 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
         # Blocks at the rim count by the part of them inside the outer circle;
         # full-resolution cells by their centre (as on the masked path).
         share = share_inside(np.sqrt(s2), dx, dy, side, tab.side_y, outer).astype(f32)
-        covered = sums(area * share)
+        out[2] = sums(area * share)
         rim = (s2 <= f32(outer * outer)).astype(f32) if k == 0 else share
     else:
-        covered = sums(area)
-    variance = fields[4] if k > 0 else 0.0
-    cov = (fields[5], fields[6]) if k > 0 else (None, None)
+        out[2] = sums(area)
     # The kernel's values are summed first and scaled once per station.
     unit = physics.density * column_scale()
     drop = s2 * f32(0.5 / MEAN_EARTH_RADIUS) if physics.curvature else 0.0
     tc = _kernel_by_slices(s2, dx, dy, relief, drop, side, tab.side_y, area, variance, cov)
     if physics.water_density is not None:
         # Water below height 0 replaces part of the missing rock (as in column_terms).
-        st, pos = np.nonzero((mean < 0.0) & (area > 0.0))
+        st, i, j = np.nonzero((mean < 0.0) & (area > 0.0))
         if st.size:
-            d = drop[st, pos] if np.ndim(drop) else drop
-            v = (dx[st, pos], dy[st, pos])
-            top = column_terrain_effect(*v, relief[st, pos], d, side, tab.side_y, area[st, pos])
-            bottom = column_terrain_effect(*v, -bt.height.astype(f32)[st], d, side, tab.side_y, area[st, pos])
-            tc[st, pos] -= f32(physics.water_density / physics.density) * (top - bottom)
+            d = drop[st, i, j] if np.ndim(drop) else drop
+            v = (np.broadcast_to(dx, s2.shape)[st, i, j], np.broadcast_to(dy, s2.shape)[st, i, j])
+            wet_area = area[st, i, j]
+            top = column_terrain_effect(*v, relief[st, i, j], d, side, tab.side_y, wet_area)
+            bottom = column_terrain_effect(*v, -bt.height.astype(f32)[st], d, side, tab.side_y, wet_area)
+            tc[st, i, j] -= f32(physics.water_density / physics.density) * (top - bottom)
     if k == 0:
-        _exact_cells(plan, bt, parts, s2, area, tc, physics, unit)
+        _exact_cells(plan, bt, ar, ac, s2, area, tc, physics, unit)
+    full_area = area
     if rim is not None:
         tc *= rim
         area = area * rim
-    total = sums(tc) * unit
+    out[0] = sums(tc) * unit
     if lo2 >= (inner_r + half) ** 2:
-        inner = np.zeros(n_st)
-        covered_inner = np.zeros(n_st)
+        pass
     elif inner_r > half and hi2 <= (inner_r - half) ** 2:
-        inner = total.copy()
-        covered_inner = covered
+        out[1] = out[0]
+        out[3] = out[2]
     else:
         share = share_inside(np.sqrt(s2), dx, dy, side, tab.side_y, inner_r).astype(f32)
-        inner = sums(tc * share) * unit
-        in_area = fields[2] * mask if rim is not None else area
-        covered_inner = sums(in_area * share)
+        out[1] = sums(tc * share) * unit
+        out[3] = sums(full_area * share)
     weighted = area * relief
-    return LevelSums(
-        inner=inner,
-        outer=total - inner,
-        covered=covered,
-        covered_inner=covered_inner,
-        relief_area=sums(area),
-        relief_sum=sums(weighted),
-        relief_square=sums(weighted * relief + area * variance) if k > 0 else sums(weighted * relief),
-    )
+    out[4] = sums(area)
+    out[5] = sums(weighted)
+    out[6] = sums(weighted * relief + area * variance) if k > 0 else sums(weighted * relief)
+    # Order of LevelSums: inner, outer, covered, covered_inner, relief area, sum, square.
+    return np.stack([out[1], out[0] - out[1], out[2], out[3], out[4], out[5], out[6]])
 
 
 def _kernel_by_slices(s2, dx, dy, relief, drop, side_x, side_y, area, variance, cov) -> np.ndarray:
@@ -266,8 +284,8 @@ def _kernel_by_slices(s2, dx, dy, relief, drop, side_x, side_y, area, variance, 
     small enough for them to stay in the core's cache run it markedly faster
     than one call over a whole batch.
     """
-    n_st, width = s2.shape
-    step = max(1, KERNEL_SLICE // max(width, 1))
+    n_st = s2.shape[0]
+    step = max(1, KERNEL_SLICE // max(s2.size // max(n_st, 1), 1))
     if step >= n_st:
         return column_kernel(s2, dx, dy, relief, drop, side_x, side_y, area, variance, *cov)
     out = np.empty_like(s2)
@@ -301,13 +319,11 @@ def windows(stack: np.ndarray, n_r: int, n_c: int) -> np.ndarray:
     return view
 
 
-def _exact_cells(plan: GridPlan, bt: Batch, parts, s2, area, tc, physics: Physics, unit: float) -> None:
+def _exact_cells(plan: GridPlan, bt: Batch, ar, ac, s2, area, tc, physics: Physics, unit: float) -> None:
     """Replace (in ``tc``, in units of ``unit`` mGal) near level-0 cells' column terms by exact prisms."""
     tab = plan.tables[0]
     lvl = plan.stats[0]
-    _, _, ar, ac, n_c = parts[0]
-    n_st, width = s2.shape
-    n_r = width // n_c
+    n_st, n_r, n_c = s2.shape
     side = float(max(tab.side_x, tab.side_y))
     # Only the cells within PRISM_RATIO sides can be near: a small square around each station.
     reach = int(np.ceil(PRISM_RATIO * side / float(min(tab.side_x, tab.side_y)))) + 2
@@ -315,16 +331,13 @@ def _exact_cells(plan: GridPlan, bt: Batch, parts, s2, area, tc, physics: Physic
     row, col = station_cells(plan.grid, bt.x, bt.y)
     rs = np.clip(row - reach - ar, 0, n_r - w_r)
     cs = np.clip(col - reach - ac, 0, n_c - w_c)
-    both = np.stack([s2.reshape(n_st, n_r, n_c), area.reshape(n_st, n_r, n_c)])
-    sub = windows(both, w_r, w_c)[:, np.arange(n_st), rs, cs]
+    sub = windows(np.stack([s2, area]), w_r, w_c)[:, np.arange(n_st), rs, cs]
     st, i, j = np.nonzero((sub[0] < np.float32((PRISM_RATIO * side) ** 2)) & (sub[1] > 0))
     if st.size == 0:
         return
-    pos = (rs[st] + i) * n_c + cs[st] + j
-    rows = ar[st] + rs[st] + i - lvl.block_row0
-    cols = ac[st] + cs[st] + j - lvl.block_col0
-    flat = rows * lvl.weight.shape[1] + cols
-    tc[st, pos] = exact_cell_terms(plan, bt, st, flat, tc[st, pos] * unit, physics) / unit
+    i, j = rs[st] + i, cs[st] + j
+    flat = (ar[st] + i - lvl.block_row0) * lvl.weight.shape[1] + ac[st] + j - lvl.block_col0
+    tc[st, i, j] = exact_cell_terms(plan, bt, st, flat, tc[st, i, j] * unit, physics) / unit
 
 
 __all__ = ["MIN_DATA_SHARE", "data_share", "evaluate_rings", "ring_rectangles", "windows"]
