@@ -84,3 +84,49 @@ def test_a_station_does_not_depend_on_its_batch():
     alone = terrain_correction(x[7:8], y[7:8], h[7:8], grid, **kw)
     assert alone.tc_total[0] == pytest.approx(together.tc_total[7], rel=1e-6)
     assert alone.coverage[0] == pytest.approx(together.coverage[7], rel=1e-6)
+
+
+def regional_case():
+    fine = landscape(200, 200, 30.0, 30.0, 20000.0, 26000.0, 5, holes=False)
+    regional = landscape(120, 120, 400.0, 400.0, 0.0, 48000.0, 6)
+    rng = np.random.default_rng(11)
+    n = 300
+    return fine, regional, rng.uniform(21000.0, 25000.0, n), rng.uniform(21000.0, 25000.0, n), np.full(n, 400.0)
+
+
+def test_regional_levels_overlapping_the_fine_set_up_keep_results_progress_and_cancel(monkeypatch):
+    import itertools
+    import threading
+    import time
+
+    from relief_gravity.algorithms.terrain import TerrainCancelled
+
+    fine, regional, x, y, h = regional_case()
+    kw = dict(inner_radius=2000.0, outer_radius=30000.0)
+    seen = []
+    two = terrain_correction(x, y, h, fine, regional, workers=2, progress=seen.append, **kw)
+    one = terrain_correction(x, y, h, fine, regional, workers=1, **kw)
+    np.testing.assert_array_equal(two.tc_total, one.tc_total)
+    assert seen[-1] == 1.0 and all(a <= b for a, b in itertools.pairwise(seen))
+    # Cancelled while the fine levels are built (the regional batches queued or running).
+    before = threading.active_count()
+    calls = []
+    fine_starts = []
+    original = _engine.plan_grid
+
+    def plan(grid, *args, **kwargs):
+        if grid is fine:
+            fine_starts.append(len(calls))
+        return original(grid, *args, **kwargs)
+
+    monkeypatch.setattr(_engine, "plan_grid", plan)
+
+    def cancel():
+        calls.append(time.monotonic())
+        return bool(fine_starts) and len(calls) > fine_starts[0]
+
+    with pytest.raises(TerrainCancelled):
+        terrain_correction(x, y, h, fine, regional, workers=2, is_cancelled=cancel, **kw)
+    assert fine_starts and len(calls) == fine_starts[0] + 1  # raised by the first check inside the fine set-up
+    assert time.monotonic() - calls[-1] < 1.0
+    assert threading.active_count() == before
