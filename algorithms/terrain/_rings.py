@@ -25,7 +25,7 @@ from __future__ import annotations
 import numpy as np
 
 from ..constants import MEAN_EARTH_RADIUS
-from ._evaluate import Batch, LevelSums, Physics, exact_cell_terms, share_inside
+from ._evaluate import Batch, LevelSums, Physics, evaluate_level, exact_cell_terms, share_inside
 from ._kernels import column_kernel, column_scale, column_terrain_effect
 from ._plan import PRISM_RATIO, GridPlan
 from ._sampling import station_cells
@@ -87,8 +87,8 @@ def ring_rectangles(plan: GridPlan, level_index: int, bt: Batch) -> list[tuple[n
     return [(r_lo, p_lo, c_lo, c_hi), (p_hi, r_hi, c_lo, c_hi), (p_lo, p_hi, c_lo, q_lo), (p_lo, p_hi, q_hi, c_hi)]
 
 
-def data_share(plan: GridPlan, level_index: int, rects: list[tuple[np.ndarray, ...]]) -> float:
-    """Share (0-1) of the blocks of the rectangles that have data (1 when there are none).
+def data_share(plan: GridPlan, level_index: int, rects: list[tuple[np.ndarray, ...]]) -> np.ndarray:
+    """Per station, the share (0-1) of the blocks of its rectangles that have data (1 when there are none).
 
     Examples
     --------
@@ -97,8 +97,8 @@ def data_share(plan: GridPlan, level_index: int, rects: list[tuple[np.ndarray, .
     >>> g = ElevationGrid.from_array(np.zeros((400, 400)), 0, 12000, 30, 30)
     >>> x = np.array([6000.0]); p = plan_grid(g, x, x, 2000.0, True, None, None)
     >>> bt = Batch(np.array([0]), x, x, x * 0, np.array([199]), np.array([199]))
-    >>> data_share(p, 1, ring_rectangles(p, 1, bt))
-    1.0
+    >>> data_share(p, 1, ring_rectangles(p, 1, bt)).tolist()
+    [1.0]
     """
     lvl = plan.stats[level_index]
     sat = plan.tables[level_index].missing_table
@@ -107,9 +107,12 @@ def data_share(plan: GridPlan, level_index: int, rects: list[tuple[np.ndarray, .
     for a0, a1, b0, b1 in rects:
         r0, r1 = a0 - lvl.block_row0, a1 - lvl.block_row0
         c0, c1 = b0 - lvl.block_col0, b1 - lvl.block_col0
-        total += int(np.sum((r1 - r0) * (c1 - c0)))
-        missing += int(np.sum(sat[r1, c1] - sat[r0, c1] - sat[r1, c0] + sat[r0, c0]))
-    return 1.0 - missing / total if total else 1.0
+        total = total + np.maximum(r1 - r0, 0) * np.maximum(c1 - c0, 0)
+        empty = (r1 <= r0) | (c1 <= c0)
+        r1, c1 = np.where(empty, r0, r1), np.where(empty, c0, c1)
+        missing = missing + (sat[r1, c1] - sat[r0, c1] - sat[r1, c0] + sat[r0, c0])
+    with np.errstate(invalid="ignore", divide="ignore"):
+        return np.where(total > 0, 1.0 - missing / np.maximum(total, 1), 1.0)
 
 
 def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics) -> LevelSums | None:
@@ -152,15 +155,32 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     if stack is None:
         return None
     n_st = bt.local.size
-    rects = [r for r in ring_rectangles(plan, level_index, bt) if np.any((r[1] > r[0]) & (r[3] > r[2]))]
-    if not rects:
-        return LevelSums.empty(n_st)
-    if data_share(plan, level_index, rects) < MIN_DATA_SHARE:
+    rects = ring_rectangles(plan, level_index, bt)
+    # Each station by its own rings' share of blocks with data, so that its
+    # path (and result) does not depend on the other stations of the batch.
+    use = data_share(plan, level_index, rects) >= MIN_DATA_SHARE
+    if not np.any(use):
         return None
-    sums = np.zeros((7, n_st))
+    every = bool(np.all(use))
+    sub = bt if every else _subset(bt, use)
+    sums = np.zeros((7, sub.local.size))
     for rect in rects:
-        sums += _rectangle_sums(plan, level_index, bt, physics, rect)
-    return LevelSums(*sums)
+        part = rect if every else tuple(a[use] for a in rect)
+        if np.any((part[1] > part[0]) & (part[3] > part[2])):
+            sums += _rectangle_sums(plan, level_index, sub, physics, part)
+    if every:
+        return LevelSums(*sums)
+    rest = evaluate_level(plan, level_index, _subset(bt, ~use), physics)
+    out = np.zeros((7, n_st))
+    out[:, use] = sums
+    out[:, ~use] = [rest.inner, rest.outer, rest.covered, rest.covered_inner, rest.relief_area, rest.relief_sum,
+                    rest.relief_square]
+    return LevelSums(*out)
+
+
+def _subset(bt: Batch, keep: np.ndarray) -> Batch:
+    """The stations of a batch where ``keep`` is True."""
+    return Batch(bt.local[keep], bt.x[keep], bt.y[keep], bt.height[keep], bt.cell_row[keep], bt.cell_col[keep])
 
 
 def _rectangle_sums(plan: GridPlan, level_index: int, bt: Batch, physics: Physics, rect) -> np.ndarray:
@@ -224,10 +244,21 @@ def _rectangle_sums(plan: GridPlan, level_index: int, bt: Batch, physics: Physic
     outer = physics.outer_radius
     inner_r = physics.inner_radius
 
+    # Per-station sums over the station's own positions only, in row-major
+    # order within its extent: the same additions in the same order whatever
+    # the other stations of the batch (which set the margins), so that a
+    # station's result does not depend on how a run is cut into chunks.
+    own = mask.reshape(n_st, -1)
+    counts = own.sum(axis=1)
+    some = counts > 0
+    starts = (np.cumsum(counts) - counts)[some]
+    positions = np.flatnonzero(own)
+
     def sums(values: np.ndarray) -> np.ndarray:
-        # Accumulated in double precision, so that masked (zero) positions,
-        # which depend on the batch, do not change a station's sums.
-        return values.reshape(n_st, -1).sum(axis=1, dtype=np.float64)
+        total = np.zeros(n_st)
+        if positions.size:
+            total[some] = np.add.reduceat(values.reshape(-1)[positions], starts, dtype=np.float64)
+        return total
 
     lo2, hi2 = float(s2.min()), float(s2.max())
     rim = None
