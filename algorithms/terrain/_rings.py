@@ -301,9 +301,13 @@ def _rectangle_sums(plan: GridPlan, level_index: int, bt: Batch, physics: Physic
         out[1] = sums(tc * share) * unit
         out[3] = sums(full_area * share)
     weighted = area * relief
-    out[4] = sums(area)
+    # Without a rim the area with data is the covered area already summed.
+    out[4] = sums(area) if rim is not None else out[2]
     out[5] = sums(weighted)
-    out[6] = sums(weighted * relief + area * variance) if k > 0 else sums(weighted * relief)
+    weighted *= relief
+    if k > 0:
+        weighted += area * variance
+    out[6] = sums(weighted)
     # Order of LevelSums: inner, outer, covered, covered_inner, relief area, sum, square.
     return np.stack([out[1], out[0] - out[1], out[2], out[3], out[4], out[5], out[6]])
 
