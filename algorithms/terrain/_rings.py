@@ -8,16 +8,18 @@ four rectangles: the band above the hole, the band below it, and the parts
 left and right of it. For a batch of stations each rectangle is copied out of
 the level's field stack (:attr:`~._plan.BlockTable.stack`) for every station
 at once, as a sliding window of the largest extent in the batch; positions
-beyond a station's own extent (a block at most on each side) are masked by
-giving them no area. The column terms then run on dense (station, block)
-arrays and each station's sums are sums along one axis: no per-block masks,
-index arrays or scattered gathers, which cost several times the kernel itself
-on the masked path.
+beyond a station's own extent (a block or two where the batch's stations
+differ) are masked by giving them no area. The column terms then run on
+dense (station, block) arrays: no per-block masks or scattered gathers of the
+fields, which cost several times the kernel itself on the masked path. Each
+station's sums take its own positions only, in a fixed order, so that its
+result does not depend on the other stations of the batch.
 
-A level whose windows hold mostly blocks without data (a regional DEM's
-first level, most of which lies under the fine DEM's footprint) is left to
-the masked path, which evaluates only blocks with data; so are geographic
-grids (their offsets are great-circle, computed in double precision).
+A station whose rectangles at a level hold mostly blocks without data (at a
+regional DEM's first level, most blocks lie under the fine DEM's footprint)
+is left to the masked path, which evaluates only blocks with data; so are
+geographic grids (their offsets are great-circle, computed in double
+precision).
 """
 
 from __future__ import annotations
@@ -33,8 +35,8 @@ from ._sampling import station_cells
 #: Pairs (station, block) per call of the column kernel (see _kernel_by_slices).
 KERNEL_SLICE = 262_144
 
-#: Below this share of blocks with data in a batch's windows, the masked
-#: path (only blocks with data) is used instead.
+#: Below this share of blocks with data in a station's rectangles, the masked
+#: path (only blocks with data) is used for that station instead.
 MIN_DATA_SHARE = 0.6
 
 
@@ -133,8 +135,9 @@ def evaluate_rings(plan: GridPlan, level_index: int, bt: Batch, physics: Physics
     -------
     LevelSums or None
         The same quantities as :func:`~._evaluate.evaluate_level` (equal up
-        to single-precision rounding); None for geographic grids and for
-        windows where fewer than ``MIN_DATA_SHARE`` of the blocks have data.
+        to single-precision rounding; stations whose rectangles hold less
+        than ``MIN_DATA_SHARE`` blocks with data are computed by it); None
+        for geographic grids and when no station qualifies.
 
     Examples
     --------
