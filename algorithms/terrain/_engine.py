@@ -5,7 +5,8 @@ The driver takes plain arrays, :class:`ElevationGrid` objects and a
 :class:`TerrainModel`, so it runs from any Python (a chunk of stations per
 call is fine: results do not depend on the other stations). It cuts the
 stations into tiles, plans each tile (:mod:`._plan`), evaluates batches of
-stations level by level (:mod:`._evaluate`) and adds the innermost model
+nearby stations level by level (:mod:`._rings`, or :mod:`._evaluate` on sparse
+levels and geographic grids) and adds the innermost model
 (:mod:`._innermost`). The model, zones and formulas: ``docs/terrain.md``.
 
 Memory: stations are processed in tiles of at most ``TILE_SPAN``; per tile the
@@ -34,13 +35,17 @@ from ._grid import ElevationGrid
 from ._innermost import innermost
 from ._model import TerrainModel
 from ._plan import plan_grid, tiles
-from ._sampling import bilinear_setup, inside_extent, sample_bilinear
+from ._rings import evaluate_rings
+from ._sampling import bilinear_setup, inside_extent, sample_bilinear, station_cells
 
 #: Coverage below this fraction is flagged ``tc_partial``.
 COVERAGE_FLAG_BELOW = 0.99
 
-#: Stations per work unit; progress and cancel are checked between units.
-CHUNK = 32
+#: Stations per work unit; progress and cancel are checked between units
+#: (a unit takes about 0.2 s of one core on the benchmark scenario; large units
+#: mean fewer, longer numpy calls, so the threads contend less for the
+#: interpreter lock).
+CHUNK = 256
 
 
 @dataclass(frozen=True, eq=False)
@@ -82,6 +87,27 @@ class TerrainResult:
     flags: list[list[str]]
 
 
+def z_order(grid: ElevationGrid, x: np.ndarray, y: np.ndarray, cells: int = 16) -> np.ndarray:
+    """Morton (Z-order) key of points on a lattice of ``cells`` x ``cells`` raster cells.
+
+    Sorting by it keeps points that are near each other mostly near in the order.
+
+    Examples
+    --------
+    >>> g = ElevationGrid.from_array(np.zeros((64, 64)), 0, 640, 10, 10)
+    >>> z_order(g, np.array([5.0, 635.0, 5.0, 635.0]), np.array([635.0, 635.0, 5.0, 5.0]), 32).tolist()
+    [0, 1, 2, 3]
+    """
+    row, col = station_cells(grid, x, y)
+    keys = np.zeros(row.shape, dtype=np.int64)
+    r = np.clip(row // cells - int(np.min(row // cells, initial=0)), 0, 2**20 - 1)
+    c = np.clip(col // cells - int(np.min(col // cells, initial=0)), 0, 2**20 - 1)
+    for bit in range(20):
+        keys |= ((c >> bit) & 1) << (2 * bit)
+        keys |= ((r >> bit) & 1) << (2 * bit + 1)
+    return keys
+
+
 def terrain_correction(
     x: npt.ArrayLike,
     y: npt.ArrayLike,
@@ -119,6 +145,8 @@ def terrain_correction(
     workers : int, optional
         Threads used for the stations (default: up to 2, fewer if the machine
         has fewer cores). numpy releases the GIL in the array arithmetic.
+        1 runs everything in the calling thread (for callers that parallelise
+        themselves, e.g. the batch runner's Dask workers).
     **model_options
         Without ``model``: the fields of :class:`TerrainModel` (a shorthand
         for scripts and tests, e.g. ``outer_radius=20000``).
@@ -207,7 +235,9 @@ def terrain_correction(
     todo = inside & ~no_height
     exclude = (fine.x_origin, fine.x_end, fine.y_end, fine.y_origin)
 
-    groups = tiles(fine, xs, ys, todo)
+    # Stations of a tile in Z order, so that a batch is a compact group: its
+    # rings are clipped alike at the rasters' edges and read nearby blocks.
+    groups = [t[np.argsort(z_order(fine, xs[t], ys[t]), kind="stable")] for t in tiles(fine, xs, ys, todo)]
     total_work = max(int(todo.sum()), 1)
     # Building the block levels of a tile counts as a tenth of its stations.
     setup_share = 0.1
@@ -241,79 +271,43 @@ def terrain_correction(
         ) -> None:
             report((done + setup * (g + frac) / n_grids) / (total_work * (1 + setup_share)))
 
-        plans = [
-            plan_grid(fine, tx, ty, model.outer_radius, True, None, is_cancelled, level_done, model.refinement)
-        ]
-        if regional is not None:
-            plans.append(
-                plan_grid(
-                    regional, tx, ty, model.outer_radius, False, exclude, is_cancelled, lambda f: level_done(f, 1),
-                    model.refinement,
-                )
-            )
-        done += setup
-        level0 = plans[0].stats[0]
-        window = np.where(level0.weight > 0, level0.mean, np.nan)
-        origin = (level0.block_row0, level0.block_col0)
-        base_r, base_c, _, _ = bilinear_setup(fine, tx, ty)
-
-        # Loop values are bound as defaults; every call ends inside this iteration (the pool is shut down below).
-        def one_batch(
-            ch: range,
-            *,
-            tile: np.ndarray = tile,
-            base_r: np.ndarray = base_r,
-            base_c: np.ndarray = base_c,
-            plans: list = plans,
-            window: np.ndarray = window,
-            origin: tuple[int, int] = origin,
-        ) -> tuple[np.ndarray, ...]:
-            loc = np.arange(ch.start, ch.stop)
-            gi = tile[loc]
-            bt = Batch(loc, xs[gi], ys[gi], hs[gi], base_r[loc], base_c[loc])
-            inner = np.zeros(loc.size)
-            outer = np.zeros(loc.size)
-            area = np.zeros(loc.size)
-            area_in = np.zeros(loc.size)
-            # Relief statistics of the two outermost levels with data (the edge of coverage).
-            reach = np.zeros(loc.size)
-            last = np.zeros((3, loc.size))
-            before = np.zeros((3, loc.size))
-            for plan in plans:
-                for li in range(len(plan.levels)):
-                    r = evaluate_level(plan, li, bt, physics)
-                    inner += r.inner
-                    outer += r.outer
-                    area += r.covered
-                    area_in += r.covered_inner
-                    farther = (r.relief_area > 0) & (plan.levels[li][1] > reach)
-                    if np.any(farther):
-                        reach = np.where(farther, plan.levels[li][1], reach)
-                        sums = np.stack([r.relief_area, r.relief_sum, r.relief_square])
-                        before = np.where(farther, last, before)
-                        last = np.where(farther, sums, last)
-            square, rest, rest_area, square_area = innermost(fine, bt.x, bt.y, bt.height, physics, window, origin)
-            inner += rest
-            area += rest_area
-            area_in += rest_area
-            if field_tc is not None:
-                square = np.where(np.isfinite(field_tc[gi]), field_tc[gi], square)
-            has = np.isfinite(square)
-            inner = inner + np.where(has, square, 0.0)
-            area = np.where(has, area + square_area, area)
-            area_in = np.where(has, area_in + square_area, area_in)
-            edge = last + before
-            with np.errstate(invalid="ignore", divide="ignore"):
-                e_mean = edge[1] / edge[0]
-                e_square = edge[2] / edge[0]
-            return inner, outer, area, area_in, has, e_mean, e_square
-
         chunks = [range(i, min(i + CHUNK, len(tile))) for i in range(0, len(tile), CHUNK)]
+        base_r, base_c, _, _ = bilinear_setup(fine, tx, ty)
+        batches = [
+            Batch(np.arange(ch.start, ch.stop), xs[tile[ch.start : ch.stop]], ys[tile[ch.start : ch.stop]],
+                  hs[tile[ch.start : ch.stop]], base_r[ch.start : ch.stop], base_c[ch.start : ch.stop])
+            for ch in chunks
+        ]
         pool = ThreadPoolExecutor(max_workers=n_workers) if n_workers > 1 else None
         try:
-            results = pool.map(one_batch, chunks) if pool is not None else (one_batch(ch) for ch in chunks)
-            for ch, (inner, outer, area, area_in, has, e_mean, e_square) in zip(chunks, results):
+            # The regional grid first (few cells): the workers evaluate its
+            # levels while this thread reads the fine raster and builds its levels.
+            regional_parts: list = [[] for _ in chunks]
+            if regional is not None:
+                plan_r = plan_grid(
+                    regional, tx, ty, model.outer_radius, False, exclude, is_cancelled, level_done, model.refinement,
+                )
+                regional_parts = [_submit(pool, _grid_levels, plan_r, bt, physics) for bt in batches]
+            plan_f = plan_grid(
+                fine, tx, ty, model.outer_radius, True, None, is_cancelled, lambda f, g=n_grids - 1: level_done(f, g),
+                model.refinement,
+            )
+            level0 = plan_f.stats[0]
+            window = np.where(level0.weight > 0, level0.mean, np.nan)
+            origin = (level0.block_row0, level0.block_col0)
+            fine_parts = [_submit(pool, _grid_levels, plan_f, bt, physics, window, origin) for bt in batches]
+            done += setup
+            for ch, f_part, r_part in zip(chunks, fine_parts, regional_parts):
                 gi = tile[ch.start : ch.stop]
+                levels, nearest = _result(f_part)
+                if regional is not None:
+                    levels = levels + _result(r_part)[0]
+                square, rest, rest_area, square_area = nearest
+                if field_tc is not None:
+                    square = np.where(np.isfinite(field_tc[gi]), field_tc[gi], square)
+                inner, outer, area, area_in, has, e_mean, e_square = _combine(
+                    levels, square, rest, rest_area, square_area
+                )
                 tc_inner[gi] = inner
                 tc_outer[gi] = outer
                 coverage[gi] = np.minimum(area / disc, 1.0)
@@ -332,7 +326,7 @@ def terrain_correction(
                 check()
         finally:
             if pool is not None:
-                # Cancel what has not started; running chunks finish quickly.
+                # Cancel what has not started; running batches finish quickly.
                 pool.shutdown(wait=True, cancel_futures=True)
     report(1.0)
     factor = model.density_factors(n)
@@ -385,3 +379,84 @@ def _inside(grid: ElevationGrid, x: np.ndarray, y: np.ndarray) -> np.ndarray:
     array([ True, False])
     """
     return (x >= grid.x_origin) & (x < grid.x_end) & (y <= grid.y_origin) & (y > grid.y_end)
+
+
+def _submit(pool: ThreadPoolExecutor | None, fn: Callable, *args: object) -> object:
+    """A future from ``pool``, or without a pool the deferred call itself (run when its result is asked for)."""
+    if pool is None:
+        return (fn, args)
+    return pool.submit(fn, *args)
+
+
+def _result(part: object) -> object:
+    """The result of :func:`_submit`'s future or deferred call."""
+    if isinstance(part, tuple):
+        fn, args = part
+        return fn(*args)
+    return part.result()
+
+
+def _grid_levels(plan, bt: Batch, physics: Physics, window=None, origin=(0, 0)) -> tuple[list, tuple | None]:
+    """Every level of one grid's plan for a batch, and (fine grid) the innermost model.
+
+    Returns
+    -------
+    levels : list of (float, LevelSums)
+        Each level's square half-width (m) and sums, in the plan's order.
+    nearest : tuple or None
+        With ``window``: :func:`~._innermost.innermost` of the batch.
+    """
+    levels = []
+    for li in range(len(plan.levels)):
+        r = evaluate_rings(plan, li, bt, physics)
+        if r is None:
+            r = evaluate_level(plan, li, bt, physics)
+        levels.append((plan.levels[li][1], r))
+    nearest = None
+    if window is not None:
+        nearest = innermost(plan.grid, bt.x, bt.y, bt.height, physics, window, origin)
+    return levels, nearest
+
+
+def _combine(levels: list, square, rest, rest_area, square_area) -> tuple[np.ndarray, ...]:
+    """Per-station totals of a batch from its levels (fine grid first) and innermost model.
+
+    Returns
+    -------
+    tuple of numpy.ndarray
+        tc_inner, tc_outer, covered area, covered inner area (m^2), whether
+        the innermost square has a value, and the mean and mean square relief
+        of the two outermost levels with data (the edge of coverage).
+    """
+    n_st = square.size
+    inner = np.zeros(n_st)
+    outer = np.zeros(n_st)
+    area = np.zeros(n_st)
+    area_in = np.zeros(n_st)
+    # Relief statistics of the two outermost levels with data (the edge of coverage).
+    reach = np.zeros(n_st)
+    last = np.zeros((3, n_st))
+    before = np.zeros((3, n_st))
+    for half, r in levels:
+        inner += r.inner
+        outer += r.outer
+        area += r.covered
+        area_in += r.covered_inner
+        farther = (r.relief_area > 0) & (half > reach)
+        if np.any(farther):
+            reach = np.where(farther, half, reach)
+            sums = np.stack([r.relief_area, r.relief_sum, r.relief_square])
+            before = np.where(farther, last, before)
+            last = np.where(farther, sums, last)
+    inner += rest
+    area += rest_area
+    area_in += rest_area
+    has = np.isfinite(square)
+    inner = inner + np.where(has, square, 0.0)
+    area = np.where(has, area + square_area, area)
+    area_in = np.where(has, area_in + square_area, area_in)
+    edge = last + before
+    with np.errstate(invalid="ignore", divide="ignore"):
+        e_mean = edge[1] / edge[0]
+        e_square = edge[2] / edge[0]
+    return inner, outer, area, area_in, has, e_mean, e_square

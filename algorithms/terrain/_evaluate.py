@@ -445,26 +445,55 @@ def _exact_near_cells(plan, bt, owner, flat, area, dx, dy, s2, side_x, side_y, r
     side_x = np.broadcast_to(side_x, s2.shape)
     side_y = np.broadcast_to(side_y, s2.shape)
     near = np.nonzero(s2 < PRISM_RATIO * PRISM_RATIO * np.maximum(side_x, side_y) ** 2)[0]
-    if near.size == 0:
-        return
+    if near.size:
+        tc[near] = exact_cell_terms(plan, bt, owner[near], flat[near], tc[near], physics)
+
+
+def exact_cell_terms(plan: GridPlan, bt: Batch, owner, flat, column, physics: Physics) -> np.ndarray:
+    """Exact prism terms (mGal) of full-resolution cells near the stations.
+
+    Parameters
+    ----------
+    plan : GridPlan
+        The grid's plan; its level 0 holds the cells.
+    bt : Batch
+        The stations.
+    owner, flat : numpy.ndarray
+        Station (index into the batch) and cell (flat index into level 0).
+    column : numpy.ndarray
+        Column terms of the same cells, kept where a cell is partly covered
+        and no finer raster's footprint cuts it.
+    physics : Physics
+
+    Returns
+    -------
+    numpy.ndarray
+        Cells fully covered: the flat-topped prism (Nagy 1966) in double
+        precision; cells cut by the finer raster's footprint: prisms of the
+        part outside it.
+    """
     lvl = plan.stats[0]
     tab = plan.tables[0]
-    full = lvl.weight.ravel()[flat[near]] >= 1.0 - 1e-12
+    out = np.array(column, dtype=float)
+    full = lvl.weight.ravel()[flat] >= 1.0 - 1e-12
     # Exact prisms in double precision, from the double-precision statistics.
-    relief = lvl.mean.ravel()[flat] - bt.height[owner] if near.size else relief
-    idx = near[full]
+    relief = lvl.mean.ravel()[flat] - bt.height[owner]
+    idx = np.nonzero(full)[0]
     if idx.size:
         o = owner[idx]
-        ex, ny = ground_offsets(plan.grid, bt.x[o], bt.y[o], tab.x[flat[idx]], tab.y[flat[idx]])
+        f = flat[idx]
+        ex, ny = ground_offsets(plan.grid, bt.x[o], bt.y[o], tab.x[f], tab.y[f])
         drop = (ex * ex + ny * ny) * (0.5 / MEAN_EARTH_RADIUS) if physics.curvature else np.zeros(idx.size)
-        hx = 0.5 * side_x[idx].astype(float)
-        hy = 0.5 * side_y[idx].astype(float)
-        tc[idx] = prism_terms(ex, ny, hx, hy, relief[idx], drop, bt.height[o], physics)
-    part = near[~full]
+        side_x = tab.side_x[f] if plan.grid.geographic else np.full(idx.size, tab.side_x)
+        hx = 0.5 * side_x.astype(float)
+        hy = np.full(idx.size, 0.5 * float(tab.side_y))
+        out[idx] = prism_terms(ex, ny, hx, hy, relief[idx], drop, bt.height[o], physics)
+    part = np.nonzero(~full)[0]
     if part.size and plan.exclude is not None:
         # Cells cut by the finer raster's footprint: exact prisms of the part
         # outside it. (Partly covered cells without a footprint keep the column.)
         n_bc = lvl.weight.shape[1]
         rows = flat[part] // n_bc + lvl.block_row0
         cols = flat[part] % n_bc + lvl.block_col0
-        tc[part] = _piece_terms(plan, bt, owner[part], rows, cols, relief[part], physics)
+        out[part] = _piece_terms(plan, bt, owner[part], rows, cols, relief[part], physics)
+    return out

@@ -33,6 +33,9 @@ from ._sampling import inside_extent, sample_bilinear, station_cells
 #: Engine codes replaced by ``tc_regional_only`` when the regional DEM serves the station.
 NOT_ON_FINE = ("outside_dem", "no_dem_at_station")
 
+#: Largest window (cells) read at once to tell that no station has NoData near it.
+MAX_HOLE_WINDOW = 4_000_000
+
 
 def filled_grid(fine: ElevationGrid, regional: ElevationGrid) -> ElevationGrid:
     """The fine grid whose NoData cells read the regional grid's height at their centres.
@@ -68,6 +71,24 @@ def filled_grid(fine: ElevationGrid, regional: ElevationGrid) -> ElevationGrid:
     return replace(fine, reader=reader)
 
 
+def _no_hole_around(fine: ElevationGrid, rows, cols, y, radius: float) -> bool:
+    """True when the window around all the stations (read once, if small enough) holds no NoData."""
+    if fine.geographic:
+        lat = float(np.max(np.abs(y)))
+        sx = np.radians(fine.cell_x) * MEAN_EARTH_RADIUS * np.cos(np.radians(min(lat, 89.0)))
+        sy = np.radians(fine.cell_y) * MEAN_EARTH_RADIUS
+    else:
+        sx, sy = fine.cell_x, fine.cell_y
+    half_r, half_c = int(np.ceil(radius / sy)) + 1, int(np.ceil(radius / sx)) + 1
+    r0, r1 = max(int(rows.min()) - half_r, 0), min(int(rows.max()) + half_r + 1, fine.n_rows)
+    c0, c1 = max(int(cols.min()) - half_c, 0), min(int(cols.max()) + half_c + 1, fine.n_cols)
+    if r1 <= r0 or c1 <= c0:
+        return True
+    if (r1 - r0) * (c1 - c0) > MAX_HOLE_WINDOW:
+        return False
+    return bool(np.all(np.isfinite(fine.read_window(r0, c0, r1 - r0, c1 - c0))))
+
+
 def holes_near(fine: ElevationGrid, x: npt.ArrayLike, y: npt.ArrayLike, radius: float) -> np.ndarray:
     """True for stations with a NoData cell of the fine grid (inside its extent) within ``radius`` (m).
 
@@ -82,7 +103,10 @@ def holes_near(fine: ElevationGrid, x: npt.ArrayLike, y: npt.ArrayLike, radius: 
     y = np.asarray(y, dtype=float)
     rows, cols = station_cells(fine, x, y)
     out = np.zeros(x.shape, dtype=bool)
-    for k in np.flatnonzero(np.isfinite(x) & np.isfinite(y)):
+    todo = np.flatnonzero(np.isfinite(x) & np.isfinite(y))
+    if todo.size and _no_hole_around(fine, rows[todo], cols[todo], y[todo], radius):
+        return out
+    for k in todo:
         if fine.geographic:
             sx = np.radians(fine.cell_x) * MEAN_EARTH_RADIUS * np.cos(np.radians(y[k]))
             sy = np.radians(fine.cell_y) * MEAN_EARTH_RADIUS

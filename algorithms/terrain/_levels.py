@@ -355,6 +355,9 @@ def merge_blocks(
         return out
 
     def total(values: np.ndarray) -> np.ndarray:
+        if m == 2:
+            # Strided adds: several times faster than a reduction over two axes.
+            return (values[0::2, 0::2] + values[1::2, 0::2]) + (values[0::2, 1::2] + values[1::2, 1::2])
         return values.reshape(n_block_rows, m, n_block_cols, m).sum(axis=(1, 3))
 
     w = padded(finer.weight)

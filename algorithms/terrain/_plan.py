@@ -217,6 +217,16 @@ class BlockTable:
     missing_table : numpy.ndarray
         Summed-area table of blocks without data (shape + 1), to tell at once
         whether a window has any.
+    offset_table : numpy.ndarray or None
+        Summed-area table (shape + 1) of blocks whose centroid is off their
+        centre (part without data or excluded), so that a window without any
+        can take its offsets from the block lattice. None on geographic grids.
+    stack : numpy.ndarray or None
+        Projected grids: the single-precision fields as one array of shape
+        (fields, block rows, block columns), in the order east, north, area,
+        mean and, for blocks, variance, cov_east, cov_north (the flat arrays
+        above are views of it), so that the rectangles of a ring are copied
+        at once (:mod:`._rings`). None on geographic grids.
     """
 
     x: np.ndarray
@@ -235,6 +245,8 @@ class BlockTable:
     half_diagonal: float
     data_box: tuple[int, int, int, int]
     missing_table: np.ndarray
+    offset_table: np.ndarray | None = None
+    stack: np.ndarray | None = None
 
 
 def block_table(grid: ElevationGrid, lvl: BlockLevel, origin: tuple[float, float] = (0.0, 0.0)) -> BlockTable:
@@ -280,18 +292,38 @@ def block_table(grid: ElevationGrid, lvl: BlockLevel, origin: tuple[float, float
     y = y.ravel()
     # Full-resolution cells have no spread or tilt: their arrays are unused.
     unused = np.zeros(0, dtype=f32)
+    fields = [area, lvl.mean]
+    if b > 1:
+        fields += [lvl.variance, lvl.col_height_cov * metric_x, lvl.row_height_cov * (-side_y / b)]
+    offset_table = None
+    if grid.geographic:
+        stack = None
+        flat = [np.asarray(a, dtype=f32).ravel() for a in fields]
+        east = north = None
+    else:
+        fields = [x - origin[0], y - origin[1], *fields]
+        stack = np.empty((len(fields), n_r, n_c), dtype=f32)
+        for i, a in enumerate(fields):
+            stack[i] = np.reshape(a, (n_r, n_c))
+        east, north, *flat = (stack[i].ravel() for i in range(len(fields)))
+        off = (lvl.row_offset != 0) | (lvl.col_offset != 0)
+        offset_table = np.zeros((n_r + 1, n_c + 1), dtype=np.int32)
+        np.cumsum(np.cumsum(off, axis=0, dtype=np.int32), axis=1, out=offset_table[1:, 1:])
+    flat += [unused] * (5 - len(flat))
     return BlockTable(
         x=x,
         y=y,
-        east=None if grid.geographic else (x - origin[0]).astype(f32),
-        north=None if grid.geographic else (y - origin[1]).astype(f32),
+        east=east,
+        north=north,
         origin=origin,
         missing_table=missing,
-        area=area.astype(f32),
-        mean=lvl.mean.ravel().astype(f32),
-        variance=lvl.variance.ravel().astype(f32) if b > 1 else unused,
-        cov_east=(lvl.col_height_cov * metric_x).ravel().astype(f32) if b > 1 else unused,
-        cov_north=(lvl.row_height_cov * (-side_y / b)).ravel().astype(f32) if b > 1 else unused,
+        area=flat[0],
+        mean=flat[1],
+        variance=flat[2],
+        cov_east=flat[3],
+        cov_north=flat[4],
+        stack=stack,
+        offset_table=offset_table,
         side_x=side_x.astype(f32) if grid.geographic else f32(side_x),
         side_y=f32(side_y),
         has_data=has.ravel(),
@@ -401,13 +433,23 @@ def plan_grid(
         ranges.append((b, cr0, cc0, cr1, cc1))
     # When the union of all windows is small, read the raster once at full
     # resolution and build every coarser level by merging blocks.
-    level0 = ranges[0]
     b0, cr0, cc0, cr1, cc1 = ranges[0]
     union = [min(cr0, *(r[1] * r[0] for r in ranges)), min(cc0, *(r[2] * r[0] for r in ranges)),
              max(cr1, *(r[3] * r[0] for r in ranges)), max(cc1, *(r[4] * r[0] for r in ranges))]
     union = [max(union[0], -1), max(union[1], -1), min(union[2], grid.n_rows + 1), min(union[3], grid.n_cols + 1)]
+    own = list(ranges)
     if b0 == 1 and (union[2] - union[0]) * (union[3] - union[1]) <= SINGLE_READ_CELLS:
         ranges[0] = (1, *union)
+        # Each level is built over its own window and every coarser level's
+        # (all inside the union read above), so that each merges from the next
+        # finer one, four times smaller, instead of from the full-resolution cells.
+        for idx in range(len(ranges) - 2, 0, -1):
+            b, r0, c0, r1, c1 = ranges[idx]
+            m = ranges[idx + 1][0] // b
+            _, s0, t0, s1, t1 = ranges[idx + 1]
+            top_r, top_c = -(-grid.n_rows // b) + 1, -(-grid.n_cols // b) + 1
+            ranges[idx] = (b, max(min(r0, s0 * m), -1), max(min(c0, t0 * m), -1),
+                           min(max(r1, s1 * m), top_r), min(max(c1, t1 * m), top_c))
     stats: list[BlockLevel] = []
     for idx, (b, cr0, cc0, cr1, cc1) in enumerate(ranges):
         # From a finer level already built when it holds the window (no
@@ -425,14 +467,17 @@ def plan_grid(
             raise TerrainCancelled(msg)
         if level_done is not None:
             level_done((idx + 1) / len(levels))
-    if ranges[0] != level0:
-        # Level 0 was read over every window to build the others; the stations
-        # need only its own window.
-        _, r0, c0, r1, c1 = level0
-        full = stats[0]
-        sl = (slice(r0 - full.block_row0, r1 - full.block_row0), slice(c0 - full.block_col0, c1 - full.block_col0))
-        stats[0] = BlockLevel(1, r0, c0, *(a[sl] for a in (full.weight, full.mean, full.variance, full.row_offset,
-                                                           full.col_offset, full.row_height_cov, full.col_height_cov)))
+    for idx, (built, wanted) in enumerate(zip(ranges, own)):
+        if built != wanted:
+            # Built over a larger window to build the coarser levels; the
+            # stations need only its own window.
+            b, r0, c0, r1, c1 = wanted
+            full = stats[idx]
+            sl = (slice(r0 - full.block_row0, r1 - full.block_row0),
+                  slice(c0 - full.block_col0, c1 - full.block_col0))
+            stats[idx] = BlockLevel(b, r0, c0, *(a[sl] for a in (
+                full.weight, full.mean, full.variance, full.row_offset, full.col_offset, full.row_height_cov,
+                full.col_height_cov)))
     origin = tile_origin(grid, x, y) if not grid.geographic else (0.0, 0.0)
     return GridPlan(grid, levels, windows, stats, [block_table(grid, lvl, origin) for lvl in stats], is_fine, exclude)
 

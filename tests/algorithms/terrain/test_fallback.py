@@ -115,3 +115,21 @@ def test_refinement_is_validated():
 
     with pytest.raises(ValueError, match="refinement"):
         TerrainModel(refinement=0.5)
+
+
+def test_holes_near_one_read_when_the_survey_window_is_clean_and_per_station_otherwise():
+    z = np.zeros((60, 60))
+    reads = []
+
+    def reader(r0, c0, nr, nc):
+        reads.append((r0, c0, nr, nc))
+        return z[max(r0, 0) : r0 + nr, max(c0, 0) : c0 + nc]
+
+    g = ElevationGrid(0.0, 600.0, 10.0, 10.0, 60, 60, reader)
+    xs, ys = np.array([100.0, 300.0, 500.0]), np.array([500.0, 300.0, 100.0])
+    assert holes_near(g, xs, ys, 50.0).tolist() == [False, False, False]
+    assert len(reads) == 1
+    z[29, 31] = np.nan  # 25 m from the middle station only
+    reads.clear()
+    assert holes_near(g, xs, ys, 50.0).tolist() == [False, True, False]
+    assert len(reads) == 4
