@@ -185,17 +185,37 @@ def check_dem_values(path: str, label: str) -> None:
     raise QgsProcessingException(text)
 
 
+#: Largest window (cells) read at once for the stations' local relief; beyond it each station reads its own.
+RELIEF_WINDOW_CELLS = 4_000_000
+
+
 def local_relief(raster, x, y) -> np.ndarray:
-    """Height range (m) of the 3 x 3 DEM cells around each station (NaN outside)."""
+    """Height range (m) of the 3 x 3 DEM cells around each station (NaN outside).
+
+    The stations' bounding window is read once when it holds at most
+    :data:`RELIEF_WINDOW_CELLS` cells, else every station reads its own 3 x 3.
+    """
+    x, y = np.asarray(x, dtype=float), np.asarray(y, dtype=float)
     out = np.full(len(x), np.nan)
-    for i, (xi, yi) in enumerate(zip(x, y)):
-        if not (np.isfinite(xi) and np.isfinite(yi)):
-            continue
-        col = int(np.floor((xi - raster.x_origin) / raster.cell_x))
-        row = int(np.floor((raster.y_origin - yi) / raster.cell_y))
-        window = raster.read_window(row - 1, col - 1, 3, 3)
-        if np.isfinite(window).any():
-            out[i] = float(np.nanmax(window) - np.nanmin(window))
+    ok = np.isfinite(x) & np.isfinite(y)
+    if not ok.any():
+        return out
+    cols = np.floor((x[ok] - raster.x_origin) / raster.cell_x).astype(np.int64)
+    rows = np.floor((raster.y_origin - y[ok]) / raster.cell_y).astype(np.int64)
+    r0, c0 = int(rows.min()) - 1, int(cols.min()) - 1
+    n_rows, n_cols = int(rows.max()) + 2 - r0, int(cols.max()) + 2 - c0
+    if n_rows * n_cols <= RELIEF_WINDOW_CELLS:
+        window = raster.read_window(r0, c0, n_rows, n_cols)
+        offsets = np.arange(-1, 2)
+        rr = (rows - r0)[:, None, None] + offsets[None, :, None]
+        cc = (cols - c0)[:, None, None] + offsets[None, None, :]
+        cells = window[rr, cc].reshape(len(rows), 9)
+    else:
+        cells = np.stack([raster.read_window(int(r) - 1, int(c) - 1, 3, 3).ravel() for r, c in zip(rows, cols)])
+    has = np.isfinite(cells).any(axis=1)
+    relief = np.full(len(rows), np.nan)
+    relief[has] = np.nanmax(cells[has], axis=1) - np.nanmin(cells[has], axis=1)
+    out[ok] = relief
     return out
 
 
