@@ -2010,7 +2010,7 @@
       <translation>Ellipsoidische Höhen (z. B. aus GNSS)</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="267" />
+      <location filename="../plugin/heights.py" line="287" />
       <source>Give a regional elevation raster (REGIONAL_DEM) reaching {:.1f} km around every station.</source>
       <translation>Geben Sie ein regionales Höhenraster (REGIONAL_DEM) an, das {:.1f} km um jede Station reicht.</translation>
     </message>
@@ -2035,7 +2035,7 @@
       <translation>Das Höhenraster scheint Höhen in {} zu enthalten (etwa das {:.4g}-Fache der Stationshöhen in Metern: DGM-Median {:.1f} gegenüber {:.1f} m). Rechnen Sie es in Meter um (Rasterrechner: Wert × {}) und starten Sie erneut.</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="269" />
+      <location filename="../plugin/heights.py" line="289" />
       <source>The regional elevation raster does not reach {:.1f} km around these stations; extend it.</source>
       <translation>Das regionale Höhenraster reicht nicht {:.1f} km um diese Stationen; erweitern Sie es.</translation>
     </message>
@@ -2075,12 +2075,12 @@
       <translation>{} {} erreicht {:.6g}, höher als jeder Punkt der Erde in Metern: es sieht nach Fuß oder Zentimetern aus. Rechnen Sie es in Meter um und starten Sie erneut.</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="226" />
+      <location filename="../plugin/heights.py" line="246" />
       <source>above</source>
       <translation>über</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="226" />
+      <location filename="../plugin/heights.py" line="246" />
       <source>below</source>
       <translation>unter</translation>
     </message>
@@ -2097,17 +2097,17 @@
       <translation>Fuß</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="228" />
+      <location filename="../plugin/heights.py" line="248" />
       <source>{:.0%} of the stations lie about one geoid height ({:.1f} m) {} the DEM: a datum setting is likely wrong. Try {} = '{}'. (Either the station heights or the DEM are on another datum than declared; see docs/datums.md.)</source>
       <translation>{:.0%} der Stationen liegen etwa eine Geoidhöhe ({:.1f} m) {} dem DGM: wahrscheinlich ist ein Höhenbezug falsch eingestellt. Versuchen Sie {} = '{}'. (Entweder die Stationshöhen oder das DGM beziehen sich auf ein anderes Höhenbezugssystem als angegeben; siehe docs/datums.md.)</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="213" />
+      <location filename="../plugin/heights.py" line="233" />
       <source>{} station(s) differ from the DEM by more than the local relief explains (largest {:.1f} m; flagged height_dem_mismatch, see dem_diff).</source>
       <translation>{} Station(en) weichen stärker vom DGM ab, als das örtliche Relief erklärt (größte Abweichung {:.1f} m; markiert mit height_dem_mismatch, siehe dem_diff).</translation>
     </message>
     <message>
-      <location filename="../plugin/heights.py" line="272" />
+      <location filename="../plugin/heights.py" line="292" />
       <source>{} station(s) have elevation data over only part of the correction area (lowest tc_cover {:.2f}); their terrain correction misses the far terrain (flagged tc_partial). {}</source>
       <translation>{} Station(en) haben Höhendaten nur über einen Teil des Korrektionsgebiets (kleinstes tc_cover {:.2f}); ihrer Geländekorrektion fehlt das ferne Gelände (markiert mit tc_partial). {}</translation>
     </message>

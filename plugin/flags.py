@@ -80,9 +80,23 @@ def _notes() -> dict:
     }
 
 
+#: The notes last built and the translation of ``_PROBE`` they were built under.
+_cache: dict = {}
+_PROBE = "The station has no point geometry."
+
+
+def _current_notes() -> dict:
+    """``_notes()``, rebuilt only when the translation in force changes (one lookup per call, not 38)."""
+    key = _tr(_PROBE)
+    if _cache.get("key") != key:
+        _cache["notes"] = _notes()
+        _cache["key"] = key
+    return _cache["notes"]
+
+
 def note_for(code: str) -> str:
     """Translated meaning of a code; the English meaning or the code itself when unknown."""
-    notes = _notes()
+    notes = _current_notes()
     if code in notes:
         return notes[code]
     entry = VOCABULARY.get(code)
