@@ -2766,7 +2766,7 @@
   <context>
     <name>TerrainRun</name>
     <message>
-      <location filename="../plugin/terrain_run.py" line="178" />
+      <location filename="../plugin/terrain_run.py" line="171" />
       <location filename="../plugin/terrain_run.py" line="187" />
       <source>Cancelled by the user.</source>
       <translation>Vom Benutzer abgebrochen.</translation>
@@ -2800,6 +2800,11 @@
       <location filename="../plugin/terrain_run.py" line="199" />
       <source>The elevation rasters stop short of the outer radius for {} station(s): the terrain they miss could add about {:.3f} mGal at worst (station {}; field tc_trunc, an estimate from the relief at the edge of coverage, not a bound). Give a regional DEM reaching {:.0f} m around every station.</source>
       <translation>Die Höhenraster enden für {} Station(en) vor dem Außenradius: das fehlende Gelände könnte im ungünstigsten Fall etwa {:.3f} mGal beitragen (Station {}; Feld tc_trunc, eine Schätzung aus dem Relief am Rand der Abdeckung, keine Schranke). Geben Sie ein regionales DGM an, das {:.0f} m um jede Station reicht.</translation>
+    </message>
+    <message>
+      <location filename="../plugin/terrain_run.py" line="175" />
+      <source>The engine's own error (ENGINE_CHECK) is not estimated with a geology layer: no tc_numerr field is written.</source>
+      <translation>Der eigene Fehler des Verfahrens (ENGINE_CHECK) wird mit einem Geologielayer nicht geschätzt: es wird kein Feld tc_numerr geschrieben.</translation>
     </message>
     <message>
       <location filename="../plugin/terrain_run.py" line="54" />

@@ -146,37 +146,37 @@ def compute_terrain(
                 result["tc_total"] = result["tc_total"] + extra
             return result
             # --- end ring-and-sector ---
+        units, rho_s = None, None
         if polygons is not None:
-            from ..algorithms.terrain._geology import terrain_correction_by_units
             from .density_layer import density_units, station_densities
 
-            engine = terrain_correction_by_units(
-                x,
-                y,
-                heights,
-                fine.elevation_grid(),
-                regional_grid,
-                density_units(polygons, fine, regional),
-                replace(model, density=float(polygons.densities[0])),
-                station_density=station_densities(polygons, x, y),
-                progress=progress,
-                is_cancelled=feedback.isCanceled,
-            )
-        else:
-            # Where the fine DEM has no data the regional one serves, flagged.
-            engine = terrain_correction_with_fallback(
-                x,
-                y,
-                heights,
-                fine.elevation_grid(),
-                regional_grid,
-                model,
-                progress=progress,
-                is_cancelled=feedback.isCanceled,
-            )
+            units = density_units(polygons, fine, regional)
+            rho_s = station_densities(polygons, x, y)
+            model = replace(model, density=float(polygons.densities[0]))
+        # Where the fine DEM has no data the regional one serves, flagged
+        # (with a geology layer too: each unit on the filled DEM).
+        engine = terrain_correction_with_fallback(
+            x,
+            y,
+            heights,
+            fine.elevation_grid(),
+            regional_grid,
+            model,
+            progress=progress,
+            is_cancelled=feedback.isCanceled,
+            units=units,
+            station_density=rho_s,
+        )
     except TerrainCancelled as error:
         raise QgsProcessingException(_tr("Cancelled by the user.")) from error
     numerr = None
+    if numerical_check and polygons is not None:
+        feedback.pushWarning(
+            _tr(
+                "The engine's own error (ENGINE_CHECK) is not estimated with a geology layer: "
+                "no tc_numerr field is written."
+            )
+        )
     if numerical_check and polygons is None:
         feedback.pushInfo(_tr("Estimating the engine's own error against a refined evaluation (tc_numerr)."))
         try:

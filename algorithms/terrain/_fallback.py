@@ -13,7 +13,10 @@ Two cases, both flagged (``docs/terrain.md``):
   alone (the engine run with the regional DEM as its only grid), flagged
   ``tc_regional_only`` — coarse near the station, so less accurate.
 
-Without a regional DEM the engine runs unchanged.
+Without a regional DEM the engine runs unchanged. With density units (a
+geology layer) the same two cases hold, each unit run on the filled fine DEM;
+a filled cell keeps the unit its polygon gives it, and a station served by the
+regional DEM alone uses the regional unit grid.
 """
 
 from __future__ import annotations
@@ -26,6 +29,7 @@ import numpy.typing as npt
 
 from ..constants import MEAN_EARTH_RADIUS
 from ._engine import TerrainResult, terrain_correction
+from ._geology import DensityUnits, terrain_correction_by_units
 from ._grid import ElevationGrid
 from ._model import TerrainModel
 from ._sampling import inside_extent, sample_bilinear, station_cells
@@ -138,6 +142,8 @@ def terrain_correction_with_fallback(
     progress: Callable[[float], None] | None = None,
     is_cancelled: Callable[[], bool] | None = None,
     workers: int | None = None,
+    units: DensityUnits | None = None,
+    station_density: npt.ArrayLike | None = None,
 ) -> TerrainResult:
     """The engine's terrain correction, with the regional DEM where the fine one has no data.
 
@@ -145,6 +151,10 @@ def terrain_correction_with_fallback(
     ----------
     x, y, station_height, fine, regional, model
         As for :func:`~._engine.terrain_correction`.
+    units, station_density : optional
+        Density units and station densities, as for
+        :func:`~._geology.terrain_correction_by_units` (then the model's
+        density must be one value).
     progress, is_cancelled : callable, optional
         Passed to the engine.
     workers : int, optional
@@ -171,15 +181,19 @@ def terrain_correction_with_fallback(
     x = np.asarray(x, dtype=float)
     y = np.asarray(y, dtype=float)
     h = np.asarray(station_height, dtype=float)
+    rho_s = None if station_density is None else np.atleast_1d(np.asarray(station_density, dtype=float))
+
+    def run(xs, ys, hs, grid, second, stations_model, grid_units, densities, **options):
+        if units is None:
+            return terrain_correction(xs, ys, hs, grid, second, stations_model, workers=workers, **options)
+        return terrain_correction_by_units(xs, ys, hs, grid, second, grid_units, stations_model,
+                                           station_density=densities, workers=workers, **options)
+
     if regional is None:
-        return terrain_correction(
-            x, y, h, fine, None, model, progress=progress, is_cancelled=is_cancelled, workers=workers
-        )
+        return run(x, y, h, fine, None, model, units, rho_s, progress=progress, is_cancelled=is_cancelled)
     holes = holes_near(fine, x, y, model.inner_radius)
-    result = terrain_correction(
-        x, y, h, filled_grid(fine, regional), regional, model,
-        progress=progress, is_cancelled=is_cancelled, workers=workers,
-    )
+    result = run(x, y, h, filled_grid(fine, regional), regional, model, units, rho_s,
+                 progress=progress, is_cancelled=is_cancelled)
     flags = [list(codes) for codes in result.flags]
     not_on_fine = np.array([any(code in NOT_ON_FINE for code in codes) for codes in flags], dtype=bool)
     served = not_on_fine & inside_extent(regional, x, y) & np.isfinite(sample_bilinear(regional, x, y))
@@ -190,10 +204,9 @@ def terrain_correction_with_fallback(
     }
     if served.any():
         index = np.flatnonzero(served)
-        alone = terrain_correction(
-            x[index], y[index], h[index], regional, None, model.for_stations(index),
-            is_cancelled=is_cancelled, workers=workers,
-        )
+        regional_units = None if units is None else DensityUnits(units.densities, units.regional)
+        alone = run(x[index], y[index], h[index], regional, None, model.for_stations(index), regional_units,
+                    None if rho_s is None else rho_s[index], is_cancelled=is_cancelled)
         for name, values in arrays.items():
             values[index] = np.asarray(getattr(alone, name), dtype=float)
         for position, k in enumerate(index):

@@ -129,6 +129,8 @@ class DensityUnits:
         >>> g = ElevationGrid.from_array(np.zeros((1, 2)), 0, 10, 10, 10)
         >>> DensityUnits([2670.0, 2200.0], [[0, 1]]).station_density(g, [5.0, 15.0, 25.0], [5.0, 5.0, 5.0]).tolist()
         [2670.0, 2200.0, nan]
+        >>> DensityUnits([2670.0, 2200.0], [[0, 1]]).station_density(g, [20.0], [0.0]).tolist()  # on the edge
+        [nan]
         """
         xs = np.atleast_1d(np.asarray(x, dtype=float))
         ys = np.atleast_1d(np.asarray(y, dtype=float))
@@ -136,7 +138,10 @@ class DensityUnits:
         ok = inside_extent(grid, xs, ys) & np.isfinite(xs) & np.isfinite(ys)
         if np.any(ok):
             r, c = station_cells(grid, xs[ok], ys[ok])
-            out[ok] = self.densities[self.fine[r, c]]
+            # A point on the east or south edge lies inside the extent but past the last cell.
+            cell = (r >= 0) & (r < grid.n_rows) & (c >= 0) & (c < grid.n_cols)
+            index = np.flatnonzero(ok)[cell]
+            out[index] = self.densities[self.fine[r[cell], c[cell]]]
         return out
 
 

@@ -95,3 +95,42 @@ def test_ring_and_sector_with_a_geology_layer_is_refused(provider, stations_gpkg
     with pytest.raises(QgsProcessingException, match="exact engine"):
         _run("terraincorrection", {"INPUT": str(stations_gpkg), "DEM": str(path), "METHOD": 1,
                                    "DENSITY_LAYER": str(west), "DENSITY_LAYER_FIELD": "rho"})
+
+
+def test_geology_with_a_fine_dem_covering_half_the_survey_falls_back_on_the_regional(
+    provider, stations_gpkg, hill_dem, dem_writer, tmp_path
+):
+    """With a geology layer too, stations beyond the fine DEM are served by the regional DEM (tc_regional_only)."""
+    path, (west, north, cell, heights) = hill_dem
+    half = dem_writer(tmp_path / "half.tif", heights[:, :60], west, north, cell)
+    geology = _polygons(tmp_path / "west.gpkg", [(480_000, 4_980_000, 499_750, 5_020_000)], [2.0])
+    common = {"INPUT": str(stations_gpkg), "REGIONAL_DEM": str(path), "OUTER_RADIUS": 5000.0}
+    layer = _run("terraincorrection", {**common, "DEM": str(half), "DENSITY_LAYER": str(geology),
+                                       "DENSITY_LAYER_FIELD": "rho"})["OUTPUT"]
+    x = np.array([f.geometry().asPoint().x() for f in layer.getFeatures()])
+    flags = [f["qc_flag"] for f in layer.getFeatures()]
+    tc = _values(layer, "tc_total")
+    assert np.all(np.isfinite(tc))
+    for xi, flag in zip(x, flags, strict=True):
+        assert ("tc_regional_only" in flag) == (xi > west + 60 * cell), (xi, flag)
+    # The same survey at one density (the layer at the default everywhere) gives the plain run's values.
+    everything = _polygons(tmp_path / "all.gpkg", [(480_000, 4_980_000, 520_000, 5_020_000)], [2670.0])
+    one = _run("terraincorrection", {**common, "DEM": str(half), "DENSITY_LAYER": str(everything),
+                                     "DENSITY_LAYER_FIELD": "rho"})["OUTPUT"]
+    plain = _run("terraincorrection", {**common, "DEM": str(half)})["OUTPUT"]
+    np.testing.assert_allclose(_values(one, "tc_total"), _values(plain, "tc_total"), rtol=1e-9, atol=1e-12)
+
+
+def test_engine_check_with_a_geology_layer_is_skipped_with_a_warning(provider, stations_gpkg, hill_dem, tmp_path,
+                                                                    collecting_feedback):
+    import processing
+    from qgis.core import QgsProcessingContext
+
+    path, _ = hill_dem
+    west = _polygons(tmp_path / "west.gpkg", [(480_000, 4_980_000, 499_750, 5_020_000)], [2.0])
+    result = processing.run("reliefgravity:terraincorrection", {
+        "INPUT": str(stations_gpkg), "DEM": str(path), "DEM_DATUM": 1, "HEIGHT_FIELD": "elev", "ENGINE_CHECK": True,
+        "DENSITY_LAYER": str(west), "DENSITY_LAYER_FIELD": "rho", "OUTPUT": "TEMPORARY_OUTPUT"},
+        context=QgsProcessingContext(), feedback=collecting_feedback)
+    assert "tc_numerr" not in result["OUTPUT"].fields().names()
+    assert any("ENGINE_CHECK" in w for w in collecting_feedback.warnings)
