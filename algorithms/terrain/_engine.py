@@ -353,34 +353,6 @@ def terrain_correction(
     )
 
 
-def _bilinear(grid: ElevationGrid, x: float, y: float) -> float:
-    """One bilinear height.
-
-    Kept only until tests/algorithms/terrain/test_hammer.py (owned by the
-    ring-and-sector work) calls :func:`sample_bilinear` itself.
-
-    Examples
-    --------
-    >>> _bilinear(ElevationGrid.from_array([[1.0, 3.0]], 0, 1, 1, 1), 1.0, 0.5)
-    2.0
-    """
-    return float(sample_bilinear(grid, np.array([x]), np.array([y]))[0])
-
-
-def _inside(grid: ElevationGrid, x: np.ndarray, y: np.ndarray) -> np.ndarray:
-    """Half-open extent test.
-
-    Kept only until ``_hammer.py`` (owned by the ring-and-sector work) uses
-    :func:`inside_extent`.
-
-    Examples
-    --------
-    >>> _inside(ElevationGrid.from_array([[1.0]], 0, 1, 1, 1), np.array([0.0, 1.0]), np.array([0.5, 0.5]))
-    array([ True, False])
-    """
-    return (x >= grid.x_origin) & (x < grid.x_end) & (y <= grid.y_origin) & (y > grid.y_end)
-
-
 def _submit(pool: ThreadPoolExecutor | None, fn: Callable, *args: object) -> object:
     """A future from ``pool``, or without a pool the deferred call itself (run when its result is asked for)."""
     if pool is None:
