@@ -6,9 +6,11 @@ station: the DEM's own vertical error, the station height, and a mismatch
 between the two. Far terrain contributes little (a cell's effect falls as the
 inverse cube of distance), so this module evaluates the cells within a
 radius (by default the inner zone) with the same near-field model as the
-terrain engine — exact prisms (Nagy et al. 2000) for every cell, less the
-square of one cell side centred on the station, which holds a plane through
-the station with the DEM's slope (Nowell 1999) — and propagates normal
+terrain engine — exact prisms (Nagy et al. 2000) for the cells within
+``PRISM_RATIO`` cell sides of the station and columns with the engine's size
+term beyond (relative error below 3e-4 there, docs/terrain.md section 5),
+less the square of one cell side centred on the station, which holds a plane
+through the station with the DEM's slope (Nowell 1999) — and propagates normal
 errors through it by Gauss–Hermite quadrature (see ``_quadrature``). Errors of
 different DEM cells are taken as independent (a DEM's random error; a
 DEM-wide bias moves the whole surface and acts like a station height error
@@ -25,6 +27,8 @@ import numpy as np
 
 from ..constants import MEAN_EARTH_RADIUS
 from ..terrain import ElevationGrid, plane_terrain_effect, prism_gravity, sample_bilinear
+from ..terrain._kernels import column_kernel, column_scale
+from ..terrain._plan import PRISM_RATIO
 from ..terrain._sampling import bilinear_setup
 from ._quadrature import DEFAULT_NODES, normal_nodes
 
@@ -66,9 +70,30 @@ def _cell_tc(dx0, dx1, dy0, dy1, relief, density):
     return np.where(thin, 0.0, np.abs(g))
 
 
+def _cells_tc(dx0, dx1, dy0, dy1, relief, density):
+    """Per-cell TC (mGal): exact prisms within ``PRISM_RATIO`` sides of the station, columns beyond.
+
+    ``relief`` may have leading axes (one row per height shift); the cells
+    are on the last axis.
+    """
+    cx, cy = 0.5 * (dx0 + dx1), 0.5 * (dy0 + dy1)
+    side_x, side_y = dx1 - dx0, dy1 - dy0
+    s2 = cx * cx + cy * cy
+    near = s2 < PRISM_RATIO * PRISM_RATIO * np.maximum(side_x, side_y) ** 2
+    out = np.empty(np.broadcast_shapes(np.shape(relief), cx.shape))
+    if np.any(near):
+        out[..., near] = _cell_tc(dx0[near], dx1[near], dy0[near], dy1[near], relief[..., near], density)
+    far = ~near
+    if np.any(far):
+        out[..., far] = column_scale() * density * column_kernel(
+            s2[far], cx[far], cy[far], relief[..., far], 0.0, side_x[far], side_y[far], side_x[far] * side_y[far]
+        )
+    return out
+
+
 def _outside_square(dx0, dx1, dy0, dy1, half_x, half_y, relief, density):
     """TC of cells (last axis) minus their part inside the station square; ``relief`` may have leading axes."""
-    full = _cell_tc(dx0, dx1, dy0, dy1, relief, density)
+    full = _cells_tc(dx0, dx1, dy0, dy1, relief, density)
     ix0, ix1 = np.maximum(dx0, -half_x), np.minimum(dx1, half_x)
     iy0, iy1 = np.maximum(dy0, -half_y), np.minimum(dy1, half_y)
     has = (ix1 > ix0) & (iy1 > iy0)
@@ -167,21 +192,21 @@ def near_terrain_spread(
         relief = zc - h[k]
         rho = density[k]
 
-        # Defaults bind this station's cells: tc_of is called only within this iteration.
-        def tc_of(shifts, _r=relief, _rho=rho, _box=(dx0, dx1, dy0, dy1, sx / 2, sy / 2)):
-            """Per-cell TC for each shift (rows), one prism call for all of them."""
-            shifts = np.atleast_1d(np.asarray(shifts, dtype=float))[:, None]
-            return _outside_square(*_box, _r[None, :] + shifts, _rho)
-
-        total = float(np.sum(tc_of(0.0)))
+        # Every height shift of this station in one evaluation (rows): none, the
+        # DEM error nodes, the station height error nodes, onto the DEM surface.
+        m = xi.size
+        shifts = np.concatenate([[0.0], dem_sigma * xi, -h_sigma[k] * xi, [h[k] - dem_height[k]]])
+        per_shift = _outside_square(dx0, dx1, dy0, dy1, sx / 2, sy / 2, relief[None, :] + shifts[:, None], rho)
+        sums = per_shift.sum(axis=1)
+        total = float(sums[0])
         if dem_sigma > 0:
-            per_cell = tc_of(dem_sigma * xi)
+            per_cell = per_shift[1 : 1 + m]
             mean = np.tensordot(wi, per_cell, axes=1)
             dem_var = float(np.sum(np.tensordot(wi, (per_cell - mean) ** 2, axes=1)))
         else:
             dem_var = 0.0
-        height_nodes[:, k] = np.sum(tc_of(-h_sigma[k] * xi), axis=1) - total
-        mismatch[k] = abs(float(np.sum(tc_of(h[k] - dem_height[k]))) - total)
+        height_nodes[:, k] = sums[1 + m : 1 + 2 * m] - total
+        mismatch[k] = abs(float(sums[-1]) - total)
         # Innermost square: plane through the station with the DEM's slope.
         patch = grid.read_window(int(i0[k]), int(j0[k]), 2, 2)
         slope_e, slope_n = _bilinear_slope(patch, ti[k], tj[k], sx, sy)
