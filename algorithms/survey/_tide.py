@@ -53,6 +53,34 @@ class TideParts:
     total: np.ndarray
 
 
+def tide_inputs(latitude, longitude, height, utc_hours, gravimetric_factor):
+    """The station and time arrays broadcast together, after checking the factor and the latitudes.
+
+    Raises
+    ------
+    ValueError
+        For a gravimetric factor that is not a positive number, or a finite
+        latitude beyond 90 degrees (NaN positions pass and give NaN tides).
+
+    Examples
+    --------
+    >>> [a.shape for a in tide_inputs([45.0, 46.0], 7.0, 0.0, 10.0, 1.16)]
+    [(2,), (2,), (2,), (2,)]
+    """
+    lat, lon, alt, hours = np.broadcast_arrays(
+        np.asarray(latitude, float), np.asarray(longitude, float),
+        np.asarray(height, float), np.asarray(utc_hours, float),
+    )
+    if not np.isfinite(gravimetric_factor) or gravimetric_factor <= 0:
+        msg = f"the gravimetric factor must be positive (about 1.16), got {gravimetric_factor}"
+        raise ValueError(msg)
+    bad = np.isfinite(lat) & (np.abs(lat) > 90.0)
+    if np.any(bad):
+        msg = f"latitude must be within -90..90 degrees, got {lat[bad][0]}"
+        raise ValueError(msg)
+    return lat, lon, alt, hours
+
+
 def longman_tide_parts(
     latitude, longitude, height, utc_hours, gravimetric_factor=DEFAULT_GRAVIMETRIC_FACTOR
 ) -> TideParts:
@@ -94,17 +122,7 @@ def longman_tide_parts(
     >>> round(float(parts.moon), 5), round(float(parts.sun), 5), round(float(parts.total), 5)
     (0.0324, -0.02887, 0.00353)
     """
-    lat, lon, alt, hours = np.broadcast_arrays(
-        np.asarray(latitude, float), np.asarray(longitude, float),
-        np.asarray(height, float), np.asarray(utc_hours, float),
-    )
-    if not np.isfinite(gravimetric_factor) or gravimetric_factor <= 0:
-        msg = f"the gravimetric factor must be positive (about 1.16), got {gravimetric_factor}"
-        raise ValueError(msg)
-    bad = np.isfinite(lat) & (np.abs(lat) > 90.0)
-    if np.any(bad):
-        msg = f"latitude must be within -90..90 degrees, got {lat[bad][0]}"
-        raise ValueError(msg)
+    lat, lon, alt, hours = tide_inputs(latitude, longitude, height, utc_hours, gravimetric_factor)
     T = julian_centuries_1900(hours)
     t0 = np.mod(hours, 24.0)  # UT hour of the day (the epoch is a midnight)
     T2, T3 = T * T, T * T * T

@@ -21,7 +21,7 @@ import numpy as np
 
 from ..constants import GRS80
 from ._ephemeris import moon_position, sun_position
-from ._tide import DEFAULT_GRAVIMETRIC_FACTOR, TideParts
+from ._tide import DEFAULT_GRAVIMETRIC_FACTOR, TideParts, tide_inputs
 
 #: GM of the Moon and of the Sun, m^3/s^2 (IAU 2009 system of astronomical
 #: constants, from memory: 4.9028e12 and 1.32712440018e20).
@@ -112,17 +112,7 @@ def meeus_tide_parts(
     >>> abs(float(parts.total) - 0.00353) < 0.002
     True
     """
-    if not np.isfinite(gravimetric_factor) or gravimetric_factor <= 0:
-        msg = f"the gravimetric factor must be positive (about 1.16), got {gravimetric_factor}"
-        raise ValueError(msg)
-    lat, lon, alt, hours = np.broadcast_arrays(
-        np.asarray(latitude, float), np.asarray(longitude, float),
-        np.asarray(height, float), np.asarray(utc_hours, float),
-    )
-    bad = np.isfinite(lat) & (np.abs(lat) > 90.0)
-    if np.any(bad):
-        msg = f"latitude must be within -90..90 degrees, got {lat[bad][0]}"
-        raise ValueError(msg)
+    lat, lon, alt, hours = tide_inputs(latitude, longitude, height, utc_hours, gravimetric_factor)
     station, normal = station_position(lat, lon, alt)
     moon = _upward_tidal_acceleration(GM_MOON, moon_position(hours), station, normal)
     sun = _upward_tidal_acceleration(GM_SUN, sun_position(hours), station, normal)
