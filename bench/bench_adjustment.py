@@ -13,7 +13,6 @@ nothing here is a test.
 from __future__ import annotations
 
 import argparse
-import importlib.util
 import os
 import sys
 import time
@@ -21,18 +20,8 @@ import tracemalloc
 from pathlib import Path
 
 ROOT = Path(__file__).resolve().parents[1]
-
-
-def _register_checkout() -> None:
-    """Import this checkout as ``relief_gravity`` whatever its folder is called."""
-    if "relief_gravity" in sys.modules:
-        return
-    spec = importlib.util.spec_from_file_location(
-        "relief_gravity", ROOT / "__init__.py", submodule_search_locations=[str(ROOT)]
-    )
-    module = importlib.util.module_from_spec(spec)
-    sys.modules["relief_gravity"] = module
-    spec.loader.exec_module(module)
+sys.path.insert(0, str(ROOT / "bench"))
+from _checkout import register_checkout  # noqa: E402 - after the path is set
 
 
 def main(argv=None) -> int:
@@ -40,7 +29,7 @@ def main(argv=None) -> int:
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     parser.add_argument("--sizes", type=int, nargs="+", default=[200, 800, 2000, 4000])
     args = parser.parse_args(argv)
-    _register_checkout()
+    register_checkout()
     import numpy as np
 
     from relief_gravity.algorithms.survey import adjust_network

@@ -14,7 +14,6 @@ ones perturbed here). Prints the figures measured in this one run.
 from __future__ import annotations
 
 import argparse
-import importlib.util
 import sys
 import time
 from pathlib import Path
@@ -22,19 +21,10 @@ from pathlib import Path
 import numpy as np
 
 ROOT = Path(__file__).resolve().parents[1]
+sys.path.insert(0, str(ROOT / "bench"))
+from _checkout import register_checkout  # noqa: E402 - after the path is set
+
 DATA = ROOT / "demo" / "data"
-
-
-def _register_checkout() -> None:
-    """Import this checkout as ``relief_gravity`` whatever its folder is called."""
-    if "relief_gravity" in sys.modules:
-        return
-    spec = importlib.util.spec_from_file_location(
-        "relief_gravity", ROOT / "__init__.py", submodule_search_locations=[str(ROOT)]
-    )
-    module = importlib.util.module_from_spec(spec)
-    sys.modules["relief_gravity"] = module
-    spec.loader.exec_module(module)
 
 
 def load_demo(n_stations: int | None, seed: int = 1):
@@ -114,7 +104,7 @@ def main(argv=None) -> int:
     parser.add_argument("--height-sigma", type=float, default=0.5)
     parser.add_argument("--dem-sigma", type=float, default=2.0)
     args = parser.parse_args(argv)
-    _register_checkout()
+    register_checkout()
     observed, predicted, mc_s, budget_s = monte_carlo(args.runs, args.stations, args.height_sigma, args.dem_sigma)
     ok = np.isfinite(observed) & np.isfinite(predicted) & (predicted > 0)
     ratio = observed[ok] / predicted[ok]
