@@ -349,7 +349,11 @@ def hammer_terrain_correction(
     plane = [z for z in chosen if not resolved_by(z, max(cw, ch))]
     sampled = [z for z in chosen if resolved_by(z, max(cw, ch))]
     samples = {z.letter: _compartment_samples(z, min(cw, ch)) for z in sampled}
-    drops = {k: (e * e + nn * nn) / (2.0 * MEAN_EARTH_RADIUS) for k, (e, nn) in samples.items()}
+    # Curvature drop s^2/2R of every sample (zeros for Hammer's flat charts), fixed per zone.
+    drops = {
+        k: (e * e + nn * nn) / (2.0 * MEAN_EARTH_RADIUS) if curvature else np.zeros(e.shape)
+        for k, (e, nn) in samples.items()
+    }
     reach = chosen[-1].outer
     full_area = sum(math.pi * (z.outer**2 - z.inner**2) for z in chosen)
 
@@ -402,7 +406,7 @@ def hammer_terrain_correction(
                 start += h.size
                 ok = np.isfinite(h)
                 count = ok.sum(axis=1)
-                drop = drops[zone.letter] if curvature else np.zeros(shape)
+                drop = drops[zone.letter]
                 mean_drop = np.where(count > 0, np.where(ok, drop, 0.0).sum(axis=1) / np.maximum(count, 1), 0.0)
                 mean = np.where(count > 0, np.where(ok, h, 0.0).sum(axis=1) / np.maximum(count, 1), hs[i])
                 empty += int(np.sum(count == 0))

@@ -322,11 +322,12 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         check_cancel(feedback)
         feedback.setProgress(30)
 
-        self._sigmas = (
+        sigmas = (
             self._sigma(parameters, self.READING_SIGMA, DEFAULT_READING_SIGMA, context),
             self._sigma(parameters, self.KNOWN_SIGMA, DEFAULT_KNOWN_SIGMA, context),
         )
-        result = self._solve(drift_method, value, station, loop, readings.utc_hours, known, use, parameters, context)
+        result = self._solve(drift_method, value, station, loop, readings.utc_hours, known, use, sigmas, parameters,
+                             context)
         closures = loop_closures(station, loop, readings.utc_hours, value, use=use, n_loops=len(loop_names))
         single = closures.base_count == 1
         flag(single[loop] & (station >= 0), "loop_single_base")
@@ -355,7 +356,7 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         check_cancel(feedback)
         out_id = self._write_stations(parameters, context, stations_source, stations, result, station_codes)
         readings_id = self._write_readings(parameters, context, readings_source, readings, reading_columns, texts)
-        self._record(parameters, out_id, readings_id, tide_method, drift_method, factor, table, result)
+        self._record(parameters, out_id, readings_id, tide_method, drift_method, factor, table, result, sigmas)
         n_flagged = sum(1 for f in flags if f)
         feedback.pushInfo(
             self.tr(
@@ -434,14 +435,14 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
             )
         return value
 
-    def _solve(self, method, value, station, loop, hours, known, use, parameters, context):
+    def _solve(self, method, value, station, loop, hours, known, use, sigmas, parameters, context):
         try:
             if method == "network":
                 return adjust_network(
                     value, station, loop, hours, known, use=use,
                     drop_outliers=self.parameterAsBoolean(parameters, self.DROP_OUTLIERS, context),
-                    reading_sigma=self._sigmas[0],
-                    known_sigma=self._sigmas[1],
+                    reading_sigma=sigmas[0],
+                    known_sigma=sigmas[1],
                 )
             return linear_drift(value, station, loop, hours, known, use=use, drift=method == "linear")
         except ValueError as error:
@@ -530,7 +531,7 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
         del sink
         return dest_id
 
-    def _record(self, parameters, out_id, readings_id, tide_method, drift_method, factor, table, result):
+    def _record(self, parameters, out_id, readings_id, tide_method, drift_method, factor, table, result, sigmas):
         """Provenance record in each GeoPackage output (written after its sink is closed)."""
         from .. import provenance
 
@@ -539,8 +540,8 @@ class ObservedGravityAlgorithm(ReliefGravityAlgorithm):
             "tide_source": TIDE_SOURCES[tide_method],
             "gravimetric_factor": factor,
             "drift": drift_method,
-            "reading_sigma_mgal": self._sigmas[0],
-            "known_sigma_mgal": self._sigmas[1],
+            "reading_sigma_mgal": sigmas[0],
+            "known_sigma_mgal": sigmas[1],
             "calibration_rows": len(table.counter) if table else 0,
             "free_air_gradient_mgal_per_m": FREE_AIR_GRADIENT,
             "sigma0_mgal": result.sigma0,
