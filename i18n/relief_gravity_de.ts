@@ -1002,17 +1002,17 @@
       <translation>Kalibriertabelle (Felder counter, mgal, factor)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="529" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="530" />
       <source>Could not write a reading to the readings output.</source>
       <translation>Eine Ablesung konnte nicht in die Ausgabe der Ablesungen geschrieben werden.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="506" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="507" />
       <source>Could not write a station to the output layer.</source>
       <translation>Eine Station konnte nicht in den Ausgabelayer geschrieben werden.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="423" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="424" />
       <source>Counter reading(s) outside the calibration table's range {} to {} in row(s) {} of the readings.</source>
       <translation>Zählerablesung(en) außerhalb des Bereichs der Kalibriertabelle von {} bis {} in Zeile(n) {} der Ablesungen.</translation>
     </message>
@@ -1062,7 +1062,7 @@
       <translation>Feld der bekannten Schwere (absolut, mGal; leer, wo unbekannt)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="399" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="400" />
       <source>Known gravity {} is outside 970000-990000 mGal: it must be absolute gravity in mGal.</source>
       <translation>Die bekannte Schwere {} liegt außerhalb 970000-990000 mGal: sie muss die absolute Schwere in mGal sein.</translation>
     </message>
@@ -1092,7 +1092,7 @@
       <translation>Schleifenfeld (leer: eine Schleife je örtlichem Kalendertag)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="456" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="457" />
       <source>Loop, base, base readings, hours, misclosure (mGal), drift (mGal/h):</source>
       <translation>Schleife, Basis, Basisablesungen, Stunden, Schlussfehler (mGal), Drift (mGal/h):</translation>
     </message>
@@ -1117,12 +1117,12 @@
       <translation>Netzausgleichung (kleinste Quadrate)</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="450" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="451" />
       <source>No reading is of a station of known gravity (or of a station tied to one): the network cannot be tied. Give the known gravity of at least one base station read in the loops.</source>
       <translation>Keine Ablesung gehört zu einer Station bekannter Schwere (oder einer daran angeschlossenen Station): das Netz kann nicht angeschlossen werden. Geben Sie die bekannte Schwere mindestens einer in den Schleifen abgelesenen Basisstation an.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="392" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="393" />
       <source>No station has a known gravity in the field {}: at least one base of known gravity is needed.</source>
       <translation>Keine Station hat eine bekannte Schwere im Feld {}: mindestens eine Basis bekannter Schwere wird benötigt.</translation>
     </message>
@@ -1192,7 +1192,7 @@
       <translation>Der Maßstabsfaktor muss positiv sein; erhalten: {}.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="384" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="385" />
       <source>The station id '{}' appears more than once in the station layer; ids must be unique.</source>
       <translation>Die Stationskennung '{}' kommt im Stationslayer mehrfach vor; Kennungen müssen eindeutig sein.</translation>
     </message>
@@ -1222,7 +1222,7 @@
       <translation>mGal</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="433" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="434" />
       <source>{} must be a positive standard error in mGal, got {}.</source>
       <translation>{} muss eine positive Standardabweichung in mGal sein, erhalten: {}.</translation>
     </message>
@@ -1232,7 +1232,7 @@
       <translation>{} Ablesung(en) nennen Stationen, die nicht im Stationslayer sind (z. B. {}); sie werden ausgelassen.</translation>
     </message>
     <message>
-      <location filename="../plugin/toolbox/observed_gravity.py" line="361" />
+      <location filename="../plugin/toolbox/observed_gravity.py" line="362" />
       <source>{} readings in {} loops; {} stations with observed gravity; {} readings flagged; s0 = {:.4f} mGal.</source>
       <translation>{} Ablesungen in {} Schleifen; {} Stationen mit gemessener Schwere; {} Ablesungen markiert; s0 = {:.4f} mGal.</translation>
     </message>
